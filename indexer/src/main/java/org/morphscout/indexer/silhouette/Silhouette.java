@@ -1,0 +1,30 @@
+package org.morphscout.indexer.silhouette;
+
+/**
+ * The object's silhouette in one image, at analysis resolution.
+ *
+ * @param mask the kept object (largest component, holes filled)
+ * @param components number of sizeable foreground components found before keeping the largest (more than 1 means
+ *     several objects)
+ * @param touchesFrame whether the kept object touches the image border (likely cut off by the frame)
+ * @param coverage object area over image area, in [0, 1]
+ * @param confidence how well object and background separate, in [0, 1] (1 = cleanly separated)
+ * @param source which extractor made it ("alpha", "border-model", "learned")
+ */
+public record Silhouette(
+    Mask mask, int components, boolean touchesFrame, double coverage, double confidence, String source) {
+
+  public Silhouette {
+    if (components < 0) {
+      throw new IllegalArgumentException("components must be >= 0");
+    }
+    if (!(coverage >= 0 && coverage <= 1) || !(confidence >= 0 && confidence <= 1)) {
+      throw new IllegalArgumentException("coverage and confidence must be in [0, 1]");
+    }
+  }
+
+  /** Whether a usable object was found at all. */
+  public boolean isEmpty() {
+    return mask.area() == 0;
+  }
+}
