@@ -1,0 +1,43 @@
+package org.morphscout.app;
+
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import org.morphscout.app.cli.MorphscoutCommand;
+
+/** Entry point of the {@code morphscout} command. */
+public final class Main {
+  private Main() {}
+
+  public static void main(String[] args) {
+    System.exit(execute(args, new PrintWriter(System.out, true, StandardCharsets.UTF_8),
+        new PrintWriter(System.err, true, StandardCharsets.UTF_8)));
+  }
+
+  /** Runs one command line with the given writers and returns its exit code (for tests). */
+  public static int execute(String[] args, PrintWriter out, PrintWriter err) {
+    configureLogging(args);
+    return MorphscoutCommand.commandLine(out, err).execute(args);
+  }
+
+  /**
+   * Logging goes to stderr at WARN; {@code -v} raises it to INFO and {@code -vv} to DEBUG. Done before any logger
+   * exists, because slf4j-simple reads its level once.
+   */
+  private static void configureLogging(String[] args) {
+    String level = "warn";
+    for (String a : args) {
+      if (a.equals("-vv") || a.equals("--debug")) {
+        level = "debug";
+      } else if ((a.equals("-v") || a.equals("--verbose")) && !level.equals("debug")) {
+        level = "info";
+      }
+    }
+    if (System.getProperty("org.slf4j.simpleLogger.defaultLogLevel") == null) {
+      System.setProperty("org.slf4j.simpleLogger.defaultLogLevel", level);
+    }
+    System.setProperty("org.slf4j.simpleLogger.logFile", "System.err");
+    System.setProperty("org.slf4j.simpleLogger.showThreadName", "false");
+    System.setProperty("org.slf4j.simpleLogger.showShortLogName", "true");
+    System.setProperty("org.slf4j.simpleLogger.levelInBrackets", "true");
+  }
+}

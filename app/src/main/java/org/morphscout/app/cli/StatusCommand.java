@@ -1,0 +1,78 @@
+package org.morphscout.app.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.catalog.ImageStore;
+import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.LibrarySettings;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout status}: what the catalog holds. */
+@Command(
+    name = "status",
+    mixinStandardHelpOptions = true,
+    header = "Show the catalog: roots, counts by status, failures with reasons, size, feature model.",
+    description = "Reads the catalog without changing it.")
+final class StatusCommand implements Callable<Integer> {
+  @ParentCommand MorphscoutCommand root;
+  @Spec CommandSpec spec;
+
+  @Option(names = "--json", description = "Write JSON to stdout.")
+  boolean json;
+
+  @Override
+  public Integer call() throws Exception {
+    PrintWriter out = spec.commandLine().getOut();
+    try (Library library = Library.openExisting(root.catalogDir())) {
+      ImageStore images = library.images();
+      Map<ImageStatus, Integer> counts = images.countsByStatus();
+      List<String> roots = images.roots().stream().map(ImageStore.Root::path).toList();
+      List<ImageStore.Failure> failures = images.failures();
+      String model = LibrarySettings.activeModel(library.features()).orElse("none yet");
+      long bytes = library.catalog().databaseBytes();
+      if (json) {
+        Map<String, Object> doc = new LinkedHashMap<>();
+        doc.put("catalog", library.catalog().dir().toString());
+        doc.put("images", counts.values().stream().mapToInt(Integer::intValue).sum());
+        doc.put("ready", counts.get(ImageStatus.READY));
+        doc.put("pending", counts.get(ImageStatus.PENDING));
+        doc.put("failed", counts.get(ImageStatus.FAILED));
+        doc.put("missing", counts.get(ImageStatus.MISSING));
+        doc.put("roots", roots);
+        List<Map<String, String>> fails = new ArrayList<>();
+        for (ImageStore.Failure f : failures) {
+          fails.add(Map.of("path", f.path(), "reason", f.reason()));
+        }
+        doc.put("failures", fails);
+        doc.put("databaseBytes", bytes);
+        doc.put("featureModel", model);
+        doc.put("decisions", library.decisions().count());
+        JsonOut.write(out, doc);
+        return ExitCodes.OK;
+      }
+      out.printf("catalog   %s (%s)%n", library.catalog().dir(), Text.bytes(bytes));
+      out.printf("model     %s%n", model);
+      out.printf("roots     %s%n", roots.isEmpty() ? "none" : String.join("\n          ", roots));
+      out.printf("images    %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
+          counts.get(ImageStatus.PENDING), counts.get(ImageStatus.FAILED), counts.get(ImageStatus.MISSING));
+      out.printf("decisions %d%n", library.decisions().count());
+      if (!failures.isEmpty()) {
+        out.println();
+        out.println("failures:");
+        for (ImageStore.Failure f : failures) {
+          out.printf("  %s%n    %s%n", f.path(), f.reason());
+        }
+      }
+      return ExitCodes.OK;
+    }
+  }
+}

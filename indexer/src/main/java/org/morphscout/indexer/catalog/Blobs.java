@@ -1,0 +1,82 @@
+package org.morphscout.indexer.catalog;
+
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import org.morphscout.indexer.silhouette.Mask;
+
+/** Encodes vectors and masks for BLOB columns: float32 little-endian; masks as packed bits, most significant first. */
+public final class Blobs {
+  private Blobs() {}
+
+  public static byte[] floats(float[] v) {
+    ByteBuffer b = ByteBuffer.allocate(v.length * Float.BYTES).order(ByteOrder.LITTLE_ENDIAN);
+    b.asFloatBuffer().put(v);
+    return b.array();
+  }
+
+  public static float[] floats(byte[] bytes) {
+    if (bytes.length % Float.BYTES != 0) {
+      throw new IllegalArgumentException("vector blob of " + bytes.length + " bytes is not whole floats");
+    }
+    float[] v = new float[bytes.length / Float.BYTES];
+    ByteBuffer.wrap(bytes).order(ByteOrder.LITTLE_ENDIAN).asFloatBuffer().get(v);
+    return v;
+  }
+
+  public static byte[] maskBits(Mask m) {
+    int n = m.width() * m.height();
+    byte[] out = new byte[(n + 7) / 8];
+    for (int i = 0; i < n; i++) {
+      if (m.get(i)) {
+        out[i >> 3] |= (byte) (0x80 >>> (i & 7));
+      }
+    }
+    return out;
+  }
+
+  public static Mask mask(int width, int height, byte[] bits) {
+    int n = width * height;
+    if (bits.length != (n + 7) / 8) {
+      throw new IllegalArgumentException("mask blob has " + bits.length + " bytes, expected " + (n + 7) / 8);
+    }
+    byte[] data = new byte[n];
+    for (int i = 0; i < n; i++) {
+      data[i] = (byte) ((bits[i >> 3] >>> (7 - (i & 7))) & 1);
+    }
+    return new Mask(width, height, data);
+  }
+
+  /**
+   * A smaller copy of a mask for storage, long side at most {@code longSide}; a pixel is on when at least half of the
+   * source pixels it covers are on (area majority), so thin parts survive as well as plain nearest sampling allows.
+   */
+  public static Mask shrink(Mask m, int longSide) {
+    int w = m.width();
+    int h = m.height();
+    double f = Math.max(w, h) / (double) longSide;
+    if (f <= 1) {
+      return m;
+    }
+    int sw = Math.max(1, (int) Math.round(w / f));
+    int sh = Math.max(1, (int) Math.round(h / f));
+    byte[] out = new byte[sw * sh];
+    for (int y = 0; y < sh; y++) {
+      int y0 = y * h / sh;
+      int y1 = Math.max(y0 + 1, (y + 1) * h / sh);
+      for (int x = 0; x < sw; x++) {
+        int x0 = x * w / sw;
+        int x1 = Math.max(x0 + 1, (x + 1) * w / sw);
+        int on = 0;
+        for (int yy = y0; yy < y1; yy++) {
+          for (int xx = x0; xx < x1; xx++) {
+            if (m.get(xx, yy)) {
+              on++;
+            }
+          }
+        }
+        out[y * sw + x] = (byte) (2 * on >= (x1 - x0) * (y1 - y0) ? 1 : 0);
+      }
+    }
+    return new Mask(sw, sh, out);
+  }
+}

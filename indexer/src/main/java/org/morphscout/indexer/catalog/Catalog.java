@@ -1,0 +1,195 @@
+package org.morphscout.indexer.catalog;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.Arrays;
+import java.util.concurrent.locks.ReentrantLock;
+import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.schema.SchemaException;
+import org.morphscout.schema.SchemaMigrator;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * An open catalog folder: {@code catalog.db} (SQLite, WAL mode), {@code vectors/} (Lucene) and {@code thumbnails/}.
+ *
+ * <p>Thread-safe: one JDBC connection, used under a lock, so statements and transactions of several threads never
+ * interleave. Other processes may read at the same time (WAL); see {@link WriterLock} for writers.
+ */
+public final class Catalog implements AutoCloseable {
+  private static final Logger LOG = LoggerFactory.getLogger(Catalog.class);
+  private static final byte[] SQLITE_MAGIC = "SQLite format 3\0".getBytes(StandardCharsets.US_ASCII);
+  private static final String DB_FILE = "catalog.db";
+
+  private final Path dir;
+  private final Connection connection;
+  private final ReentrantLock lock = new ReentrantLock();
+
+  private Catalog(Path dir, Connection connection) {
+    this.dir = dir;
+    this.connection = connection;
+  }
+
+  /**
+   * Opens the catalog in {@code dir}, creating it when absent and migrating its schema when older.
+   *
+   * @throws MorphscoutException when the folder holds a damaged database, one that is not a catalog, or one written by
+   *     a newer Morphscout; the files are left untouched in each case
+   */
+  public static Catalog open(Path dir) throws IOException {
+    Path folder = dir.toAbsolutePath().normalize();
+    if (Files.exists(folder) && !Files.isDirectory(folder)) {
+      throw new MorphscoutException("catalog path " + folder + " is a file, not a folder");
+    }
+    Path db = folder.resolve(DB_FILE);
+    if (Files.exists(db)) {
+      checkHeader(db);
+    }
+    Files.createDirectories(folder.resolve("thumbnails"));
+    Connection c = null;
+    try {
+      c = DriverManager.getConnection("jdbc:sqlite:" + db);
+      SchemaMigrator migrator = SchemaMigrator.bundled();
+      migrator.checkNotNewer(c);
+      try (Statement s = c.createStatement()) {
+        s.execute("PRAGMA busy_timeout = 15000");
+        s.execute("PRAGMA journal_mode = WAL");
+        s.execute("PRAGMA synchronous = NORMAL");
+        s.execute("PRAGMA foreign_keys = ON");
+      }
+      migrator.migrate(c);
+      return new Catalog(folder, c);
+    } catch (SchemaException e) {
+      closeQuietly(c);
+      throw new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
+    } catch (SQLException e) {
+      closeQuietly(c);
+      throw new MorphscoutException("cannot open catalog database " + db + ": " + describe(e)
+          + ". The file was left untouched; restore it from a backup or choose another catalog folder.", e);
+    }
+  }
+
+  private static void checkHeader(Path db) throws IOException {
+    if (Files.size(db) == 0) {
+      return; // an empty file is a new SQLite database
+    }
+    byte[] head = new byte[SQLITE_MAGIC.length];
+    int n;
+    try (InputStream in = Files.newInputStream(db)) {
+      n = in.readNBytes(head, 0, head.length);
+    }
+    if (n < head.length || !Arrays.equals(head, SQLITE_MAGIC)) {
+      throw new MorphscoutException("cannot open catalog database " + db + ": the file is damaged or is not a "
+          + "SQLite database. It was left untouched; restore it from a backup or choose another catalog folder.");
+    }
+  }
+
+  private static String describe(SQLException e) {
+    String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+    if (m.contains("SQLITE_CORRUPT") || m.contains("SQLITE_NOTADB") || m.contains("malformed")) {
+      return "the database file is damaged (" + m + ")";
+    }
+    return m;
+  }
+
+  private static void closeQuietly(Connection c) {
+    if (c != null) {
+      try {
+        c.close();
+      } catch (SQLException e) {
+        LOG.debug("closing after a failed open", e);
+      }
+    }
+  }
+
+  /** The catalog folder (absolute). */
+  public Path dir() {
+    return dir;
+  }
+
+  /** The folder of the Lucene vector index. */
+  public Path vectorDir() {
+    return dir.resolve("vectors");
+  }
+
+  /** The folder of cached thumbnails. */
+  public Path thumbnailDir() {
+    return dir.resolve("thumbnails");
+  }
+
+  /** The folder of stored model files (the generated descriptor, optional learned silhouettes). */
+  public Path modelDir() {
+    return dir.resolve("models");
+  }
+
+  /** Work on the connection, under the lock, in auto-commit mode (for reads and single statements). */
+  public <T> T read(SqlWork<T> work) {
+    lock.lock();
+    try {
+      return work.run(connection);
+    } catch (SQLException e) {
+      throw new MorphscoutException("catalog " + dir + ": " + describe(e), e);
+    } finally {
+      lock.unlock();
+    }
+  }
+
+  /** Work inside one transaction: committed when {@code work} returns, rolled back when it throws. */
+  public <T> T inTransaction(SqlWork<T> work) {
+    lock.lock();
+    try {
+      connection.setAutoCommit(false);
+      try {
+        T result = work.run(connection);
+        connection.commit();
+        return result;
+      } catch (SQLException | RuntimeException e) {
+        connection.rollback();
+        throw e;
+      } finally {
+        connection.setAutoCommit(true);
+      }
+    } catch (SQLException e) {
+      throw new MorphscoutException("catalog " + dir + ": " + describe(e), e);
+    } finally {
+      lock.unlock();
+    }
+  }
+
+  /** Size of the database files on disk, in bytes. */
+  public long databaseBytes() throws IOException {
+    long total = 0;
+    for (String name : new String[] {DB_FILE, DB_FILE + "-wal", DB_FILE + "-shm"}) {
+      Path p = dir.resolve(name);
+      if (Files.exists(p)) {
+        total += Files.size(p);
+      }
+    }
+    return total;
+  }
+
+  @Override
+  public void close() {
+    lock.lock();
+    try {
+      connection.close();
+    } catch (SQLException e) {
+      LOG.warn("closing catalog {}: {}", dir, e.getMessage());
+    } finally {
+      lock.unlock();
+    }
+  }
+
+  /** A unit of work on the catalog's connection. */
+  @FunctionalInterface
+  public interface SqlWork<T> {
+    T run(Connection connection) throws SQLException;
+  }
+}

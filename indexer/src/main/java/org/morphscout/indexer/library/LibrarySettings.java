@@ -1,0 +1,16 @@
+package org.morphscout.indexer.library;
+
+import java.util.Optional;
+import org.morphscout.indexer.catalog.FeatureStore;
+
+/** Names of catalog-wide settings and typed access to them. */
+public final class LibrarySettings {
+  /** The appearance model whose vectors the catalog holds. */
+  public static final String ACTIVE_MODEL = "active_model";
+
+  private LibrarySettings() {}
+
+  public static Optional<String> activeModel(FeatureStore features) {
+    return features.setting(ACTIVE_MODEL);
+  }
+}
