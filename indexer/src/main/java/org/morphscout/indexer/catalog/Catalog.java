@@ -124,6 +124,26 @@ public final class Catalog implements AutoCloseable {
     return dir.resolve("thumbnails");
   }
 
+  /**
+   * Where the thumbnail of an image goes, without extension ({@code .jpg} for opaque images, {@code .png} when they
+   * carry alpha): {@code thumbnails/<last two hex digits of the id>/<id>}, so no folder grows past a few thousand files.
+   */
+  public Path thumbnailBase(long id) {
+    return thumbnailDir().resolve(String.format("%02x", id & 0xff)).resolve(Long.toString(id));
+  }
+
+  /** The stored thumbnail of an image, when there is one. */
+  public java.util.Optional<Path> thumbnail(long id) {
+    Path base = thumbnailBase(id);
+    for (String ext : new String[] {".jpg", ".png"}) {
+      Path p = base.resolveSibling(base.getFileName() + ext);
+      if (Files.isRegularFile(p)) {
+        return java.util.Optional.of(p);
+      }
+    }
+    return java.util.Optional.empty();
+  }
+
   /** The folder of stored model files (the generated descriptor, optional learned silhouettes). */
   public Path modelDir() {
     return dir.resolve("models");
