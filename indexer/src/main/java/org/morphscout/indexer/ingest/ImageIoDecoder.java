@@ -2,6 +2,7 @@ package org.morphscout.indexer.ingest;
 
 import java.awt.image.BufferedImage;
 import java.io.IOException;
+import java.math.BigDecimal;
 import java.io.InputStream;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
@@ -185,15 +186,20 @@ public final class ImageIoDecoder implements ImageDecoder {
   private void checkPixelCap(Path file, int w, int h) {
     long pixels = (long) w * h;
     if (pixels > options.maxPixels()) {
-      String cap = options.maxPixels() % 1_000_000 == 0
-          ? Long.toString(options.maxPixels() / 1_000_000)
-          : String.format(Locale.ROOT, "%.1f", options.maxPixels() / 1e6);
+      String size = pixels >= 100_000
+          ? String.format(Locale.ROOT, "%.1f", pixels / 1e6)
+          : megapixels(pixels);
       throw new ImageReadException(
           file,
           ReadFailure.TOO_LARGE,
-          String.format(
-              Locale.ROOT, "image too large: %dx%d = %.1f MP exceeds the %s MP cap", w, h, pixels / 1e6, cap));
+          "image too large: " + w + "x" + h + " = " + size + " MP exceeds the " + megapixels(options.maxPixels())
+              + " MP cap");
     }
+  }
+
+  /** Exact megapixels without trailing zeros: 250 000 000 -> "250", 1 500 000 -> "1.5", 5 000 -> "0.005". */
+  private static String megapixels(long pixels) {
+    return BigDecimal.valueOf(pixels).movePointLeft(6).stripTrailingZeros().toPlainString();
   }
 
   /**
