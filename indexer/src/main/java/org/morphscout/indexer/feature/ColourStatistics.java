@@ -35,7 +35,7 @@ public final class ColourStatistics {
   public ColourStats compute(BufferedImage image, Mask mask) {
     int w = image.getWidth();
     int h = image.getHeight();
-    int[] argb = image.getRGB(0, 0, w, h, null, 0, w);
+    int[] argb = ImageResampler.argbPixels(image);
     float[] lab = new float[3 * argb.length];
     CieLab.toLab(argb, lab);
 
