@@ -218,6 +218,9 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
 
   @Override
   public void close() {
+    if (closed) {
+      return;
+    }
     closed = true;
     synchronized (all) {
       all.forEach(Predictor::close);

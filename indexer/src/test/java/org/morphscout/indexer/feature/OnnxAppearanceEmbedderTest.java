@@ -46,6 +46,38 @@ class OnnxAppearanceEmbedderTest {
   }
 
   @Test
+  void concurrentCallersGetTheSameVectorsAsOneCaller() throws Exception {
+    List<BufferedImage> imgs = images(4);
+    try (OnnxAppearanceEmbedder e = OnnxAppearanceEmbedder.builtIn(dir, new EmbedderSettings(2, 1))) {
+      List<float[]> expected = e.embed(imgs);
+      List<List<float[]>> results = java.util.Collections.synchronizedList(new ArrayList<>());
+      List<Throwable> failures = java.util.Collections.synchronizedList(new ArrayList<>());
+      List<Thread> threads = new ArrayList<>();
+      for (int t = 0; t < 3; t++) {
+        Thread thread = new Thread(() -> {
+          try {
+            results.add(e.embed(imgs));
+          } catch (Throwable ex) {
+            failures.add(ex);
+          }
+        }, "embed-test-" + t);
+        threads.add(thread);
+        thread.start();
+      }
+      for (Thread thread : threads) {
+        thread.join();
+      }
+      assertThat(failures).isEmpty();
+      assertThat(results).hasSize(3);
+      for (List<float[]> r : results) {
+        for (int i = 0; i < imgs.size(); i++) {
+          assertThat(r.get(i)).containsExactly(expected.get(i), within(1e-6f));
+        }
+      }
+    }
+  }
+
+  @Test
   void userModelFromJsonWorksAndPoolsLikeTheGraph() throws IOException {
     Files.write(dir.resolve("tiny.onnx"), TinyModels.convNet(1));
     Path json = dir.resolve("tiny.json");
