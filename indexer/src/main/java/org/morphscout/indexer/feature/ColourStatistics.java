@@ -35,7 +35,7 @@ public final class ColourStatistics {
   public ColourStats compute(BufferedImage image, Mask mask) {
     int w = image.getWidth();
     int h = image.getHeight();
-    int[] argb = image.getRGB(0, 0, w, h, null, 0, w);
+    int[] argb = ImageResampler.argbPixels(image);
     float[] lab = new float[3 * argb.length];
     CieLab.toLab(argb, lab);
 
@@ -45,7 +45,6 @@ public final class ColourStatistics {
     double[] bgSq = new double[3];
     long fgCount = 0;
     long bgCount = 0;
-    List<float[]> foreground = new ArrayList<>();
     for (int y = 0; y < h; y++) {
       int my = (int) ((y + 0.5) * mask.height() / h);
       for (int x = 0; x < w; x++) {
@@ -64,9 +63,22 @@ public final class ColourStatistics {
         }
         if (fg) {
           fgCount++;
-          foreground.add(new float[] {lab[3 * i], lab[3 * i + 1], lab[3 * i + 2]});
         } else {
           bgCount++;
+        }
+      }
+    }
+    // Second pass: an evenly strided sample of at most LabKMeans.MAX_SAMPLES foreground pixels, so a large image
+    // does not turn into millions of small arrays.
+    long stride = Math.max(1, (fgCount + LabKMeans.MAX_SAMPLES - 1) / LabKMeans.MAX_SAMPLES);
+    List<float[]> foreground = new ArrayList<>();
+    long seen = 0;
+    for (int y = 0; y < h && fgCount > 0; y++) {
+      int my = (int) ((y + 0.5) * mask.height() / h);
+      for (int x = 0; x < w; x++) {
+        int i = y * w + x;
+        if ((argb[i] >>> 24) != 0 && mask.get((int) ((x + 0.5) * mask.width() / w), my) && seen++ % stride == 0) {
+          foreground.add(new float[] {lab[3 * i], lab[3 * i + 1], lab[3 * i + 2]});
         }
       }
     }

@@ -9,7 +9,7 @@ import java.awt.image.BufferedImage;
  *   <li>The image is stretched to 128x128 with alpha composited over mid-grey ({@link ImageResampler}).
  *   <li>Channel 0: luminance t = L* / 100 in [0, 1], locally contrast-normalised as in the prefilter of Oliva and
  *       Torralba (2001): {@code (t - G*t) / (sqrt(G*(t - G*t)^2) + }{@link #CONTRAST_FLOOR}{@code )}, where G* is a
- *       Gaussian blur of {@link #LCN_SIGMA} px (edges clamped). This removes illumination gradients (wavelengths
+ *       near-Gaussian blur of about 8.5 px ({@link #blur}). This removes illumination gradients (wavelengths
  *       above ~50 px are attenuated) and equalises contrast, so the Gabor energies describe structure, not exposure.
  *       The floor keeps flat, noisy regions from being blown up.
  *   <li>Channels 1..3: L* / 50 - 1, a* / 100, b* / 100 (each roughly in [-1, 1]).
@@ -21,8 +21,11 @@ public final class GistInput {
   public static final int SIZE = GistModelBuilder.SIZE;
   public static final int PLANE = SIZE * SIZE;
 
-  /** Standard deviation of the local mean and local contrast windows, in px of the 128 px input. */
-  public static final double LCN_SIGMA = 8.0;
+  /**
+   * Radius of the box filter whose three-fold repetition gives the local mean and local contrast windows: width 17 px,
+   * an almost Gaussian window of standard deviation about 8.5 px on the 128 px input.
+   */
+  public static final int BOX_RADIUS = 8;
 
   /** Added to the local standard deviation of t (t in [0, 1]) before dividing. */
   public static final double CONTRAST_FLOOR = 0.05;
@@ -56,38 +59,53 @@ public final class GistInput {
     return out;
   }
 
-  /** Separable Gaussian blur of a SIZE x SIZE plane, radius 3 sigma, edges clamped. */
-  private static double[] blur(double[] plane) {
-    int radius = (int) Math.ceil(3 * LCN_SIGMA);
-    double[] k = new double[2 * radius + 1];
-    double sum = 0;
-    for (int i = -radius; i <= radius; i++) {
-      k[i + radius] = Math.exp(-i * i / (2 * LCN_SIGMA * LCN_SIGMA));
-      sum += k[i + radius];
+  /**
+   * Approximately Gaussian blur of a SIZE x SIZE plane: three passes of a {@link #BOX_RADIUS} box filter in each
+   * direction (Wells, "Efficient synthesis of Gaussian filters by cascaded uniform filters", IEEE PAMI 8(2), 1986),
+   * edges clamped. Standard deviation sqrt(3 (w^2 - 1) / 12) with w = 17: about 8.5 px.
+   */
+  static double[] blur(double[] plane) {
+    double[] a = plane.clone();
+    double[] b = new double[PLANE];
+    for (int pass = 0; pass < 3; pass++) {
+      boxRows(a, b);
+      boxColumns(b, a);
     }
-    for (int i = 0; i < k.length; i++) {
-      k[i] /= sum;
-    }
-    double[] tmp = new double[PLANE];
-    double[] out = new double[PLANE];
+    return a;
+  }
+
+  private static void boxRows(double[] in, double[] out) {
+    int r = BOX_RADIUS;
+    double inv = 1.0 / (2 * r + 1);
     for (int y = 0; y < SIZE; y++) {
+      int row = y * SIZE;
+      double sum = 0;
+      for (int j = -r; j <= r; j++) {
+        sum += in[row + clamp(j)];
+      }
       for (int x = 0; x < SIZE; x++) {
-        double s = 0;
-        for (int j = -radius; j <= radius; j++) {
-          s += k[j + radius] * plane[y * SIZE + Math.min(SIZE - 1, Math.max(0, x + j))];
-        }
-        tmp[y * SIZE + x] = s;
+        out[row + x] = sum * inv;
+        sum += in[row + clamp(x + r + 1)] - in[row + clamp(x - r)];
       }
     }
-    for (int y = 0; y < SIZE; y++) {
-      for (int x = 0; x < SIZE; x++) {
-        double s = 0;
-        for (int j = -radius; j <= radius; j++) {
-          s += k[j + radius] * tmp[Math.min(SIZE - 1, Math.max(0, y + j)) * SIZE + x];
-        }
-        out[y * SIZE + x] = s;
+  }
+
+  private static void boxColumns(double[] in, double[] out) {
+    int r = BOX_RADIUS;
+    double inv = 1.0 / (2 * r + 1);
+    for (int x = 0; x < SIZE; x++) {
+      double sum = 0;
+      for (int j = -r; j <= r; j++) {
+        sum += in[clamp(j) * SIZE + x];
+      }
+      for (int y = 0; y < SIZE; y++) {
+        out[y * SIZE + x] = sum * inv;
+        sum += in[clamp(y + r + 1) * SIZE + x] - in[clamp(y - r) * SIZE + x];
       }
     }
-    return out;
+  }
+
+  private static int clamp(int i) {
+    return Math.min(SIZE - 1, Math.max(0, i));
   }
 }

@@ -19,7 +19,7 @@ final class ImageResampler {
   static int[] resize(BufferedImage image, int width, int height) {
     int sw = image.getWidth();
     int sh = image.getHeight();
-    int[] src = image.getRGB(0, 0, sw, sh, null, 0, sw);
+    int[] src = argbPixels(image);
     int[] out = new int[width * height];
     for (int ty = 0; ty < height; ty++) {
       int y0 = (int) ((long) ty * sh / height);
@@ -46,5 +46,18 @@ final class ImageResampler {
       }
     }
     return out;
+  }
+
+  /**
+   * Packed ARGB pixels, row-major. For TYPE_INT_ARGB (the analysis format) the raster already holds exactly that and
+   * is copied directly, which is several times faster than {@code getRGB}; other types go through {@code getRGB}.
+   */
+  static int[] argbPixels(BufferedImage image) {
+    int w = image.getWidth();
+    int h = image.getHeight();
+    if (image.getType() == BufferedImage.TYPE_INT_ARGB) {
+      return (int[]) image.getRaster().getDataElements(0, 0, w, h, null);
+    }
+    return image.getRGB(0, 0, w, h, null, 0, w);
   }
 }

@@ -1,14 +1,13 @@
 package org.morphscout.indexer.feature;
 
+import ai.djl.Device;
 import ai.djl.MalformedModelException;
+import ai.djl.Model;
 import ai.djl.engine.EngineException;
 import ai.djl.inference.Predictor;
 import ai.djl.ndarray.NDArray;
 import ai.djl.ndarray.NDList;
 import ai.djl.ndarray.types.Shape;
-import ai.djl.repository.zoo.Criteria;
-import ai.djl.repository.zoo.ModelNotFoundException;
-import ai.djl.repository.zoo.ZooModel;
 import ai.djl.translate.NoBatchifyTranslator;
 import ai.djl.translate.TranslateException;
 import ai.djl.translate.TranslatorContext;
@@ -21,6 +20,7 @@ import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.ConcurrentLinkedDeque;
 import org.morphscout.indexer.MorphscoutException;
 import org.slf4j.Logger;
@@ -47,7 +47,8 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
   private final Path modelFile;
   private final ModelInput input;
   private final EmbedderSettings settings;
-  private final ZooModel<Batch, float[][]> model;
+  private final Model model;
+  private final BatchTranslator translator;
   private final ConcurrentLinkedDeque<Predictor<Batch, float[][]>> idle = new ConcurrentLinkedDeque<>();
   private final List<Predictor<Batch, float[][]>> all = new ArrayList<>();
   private final int dimension;
@@ -62,18 +63,16 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
     if (!Files.isRegularFile(modelFile)) {
       throw new MorphscoutException("The appearance model " + modelFile + " does not exist or is not a file.");
     }
-    Criteria<Batch, float[][]> criteria =
-        Criteria.builder()
-            .setTypes(Batch.class, float[][].class)
-            .optModelPath(modelFile)
-            .optEngine("OnnxRuntime")
-            .optTranslator(new BatchTranslator(output))
-            .optOption("intraOpNumThreads", Integer.toString(settings.intraOpThreads()))
-            .optOption("interOpNumThreads", "1")
-            .build();
+    this.translator = new BatchTranslator(output);
+    // Model.load on a local file: no model zoo, no repository, nothing that could try to download.
+    this.model = Model.newInstance(modelId, Device.cpu(), "OnnxRuntime");
     try {
-      this.model = criteria.loadModel();
-    } catch (ModelNotFoundException | MalformedModelException | IOException | EngineException e) {
+      model.load(
+          modelFile.toAbsolutePath().getParent(),
+          modelFile.getFileName().toString(),
+          Map.of("intraOpNumThreads", Integer.toString(settings.intraOpThreads()), "interOpNumThreads", "1"));
+    } catch (MalformedModelException | IOException | EngineException e) {
+      model.close();
       throw new MorphscoutException(
           "The appearance model " + modelFile + " could not be loaded (is it an ONNX file?): " + e.getMessage(), e);
     }
@@ -186,7 +185,7 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
   private float[][] run(Batch batch) {
     Predictor<Batch, float[][]> predictor = idle.pollFirst();
     if (predictor == null) {
-      predictor = model.newPredictor();
+      predictor = model.newPredictor(translator);
       synchronized (all) {
         all.add(predictor);
       }
@@ -219,6 +218,9 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
 
   @Override
   public void close() {
+    if (closed) {
+      return;
+    }
     closed = true;
     synchronized (all) {
       all.forEach(Predictor::close);
