@@ -20,9 +20,10 @@ import java.util.Objects;
  * </ol>
  *
  * <p>Confidence, in [0, 1], is the geometric mean of two separations: Otsu's eta (between-class over total variance
- * of the distance map at the threshold used) and the gap {@code 1 - q90(background) / q10(object)} between the 90th
- * percentile of background distances and the 10th percentile of object distances (clamped to [0, 1]). Both are near
- * 1 for a crisp object on a clean background and fall as the two distributions overlap. Empty results have 0.
+ * of the distance map at the threshold t used) and a gap term {@code 1 - n(t/2 < d <= 2t) / n(d > t)}: pixels whose
+ * distance is within a factor of two of the threshold are ambiguous, and a crisp object has few of them (only its
+ * antialiased rim) compared with its area. Both terms are near 1 for a crisp object on a clean background and fall
+ * as object and background distances overlap. Empty results have 0.
  *
  * <p>Immutable and thread-safe.
  */
@@ -91,9 +92,11 @@ public final class BorderModelSilhouettes implements SilhouetteExtractor {
       return empty(outW, outH);
     }
     double eta = Otsu.eta(hist, k);
-    double q10Object = quantile(hist, k + 1, BINS, 0.10) * binWidth;
-    double q90Background = quantile(hist, 0, k + 1, 0.90) * binWidth;
-    double gap = q10Object <= 0 ? 0 : Math.max(0, Math.min(1, 1 - q90Background / q10Object));
+    int ambiguous = 0;
+    for (float v : d) {
+      ambiguous += (v > 0.5 * threshold && v <= 2 * threshold) ? 1 : 0;
+    }
+    double gap = Math.max(0, Math.min(1, 1 - ambiguous / (double) fgCount));
     double confidence = Math.sqrt(Math.max(0, eta) * gap);
     MaskCleanup.Settings settings =
         new MaskCleanup.Settings(options.openRadius(), options.closeRadius(), options.minComponentFraction());
@@ -102,26 +105,6 @@ public final class BorderModelSilhouettes implements SilhouetteExtractor {
 
   private Silhouette empty(int w, int h) {
     return new Silhouette(Mask.empty(w, h), 0, false, 0, 0, name());
-  }
-
-  /** The q-quantile, in bin units (bin centre), of the histogram restricted to bins [from, to). */
-  private static double quantile(int[] hist, int from, int to, double q) {
-    long n = 0;
-    for (int i = from; i < to; i++) {
-      n += hist[i];
-    }
-    if (n == 0) {
-      return 0;
-    }
-    double target = q * n;
-    long acc = 0;
-    for (int i = from; i < to; i++) {
-      acc += hist[i];
-      if (acc >= target) {
-        return i + 0.5;
-      }
-    }
-    return to - 0.5;
   }
 
   /**

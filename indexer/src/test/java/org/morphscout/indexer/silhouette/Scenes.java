@@ -105,13 +105,13 @@ final class Scenes {
       }
       case NOISE -> {
         SplittableRandom rnd = new SplittableRandom(seed);
-        for (int y = 0; y < h; y++) {
-          for (int x = 0; x < w; x++) {
-            int v = 205 + (int) Math.round(rnd.nextGaussian() * 18);
-            v = Math.max(0, Math.min(255, v));
-            img.setRGB(x, y, 0xff000000 | v << 16 | v << 8 | Math.min(255, v + 6));
-          }
+        int[] px = new int[w * h];
+        for (int i = 0; i < px.length; i++) {
+          int v = 205 + (int) Math.round(rnd.nextGaussian() * 18);
+          v = Math.max(0, Math.min(255, v));
+          px[i] = 0xff000000 | v << 16 | v << 8 | Math.min(255, v + 6);
         }
+        img.setRGB(0, 0, w, h, px, 0, w);
       }
       case STRIPES -> {
         for (int x = 0; x < w; x += 6) {
@@ -155,12 +155,9 @@ final class Scenes {
       g.fill(s);
     }
     g.dispose();
-    byte[] data = new byte[w * h];
-    var raster = m.getRaster();
-    for (int y = 0; y < h; y++) {
-      for (int x = 0; x < w; x++) {
-        data[y * w + x] = (byte) (raster.getSample(x, y, 0) > 127 ? 1 : 0);
-      }
+    byte[] data = (byte[]) m.getRaster().getDataElements(0, 0, w, h, new byte[w * h]);
+    for (int i = 0; i < data.length; i++) {
+      data[i] = (byte) ((data[i] & 0xff) > 127 ? 1 : 0);
     }
     return new Mask(w, h, data);
   }
