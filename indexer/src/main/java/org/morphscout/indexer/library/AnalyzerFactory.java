@@ -21,7 +21,7 @@ public final class AnalyzerFactory {
   public static ImageAnalyzer create(Library library, AnalysisSetup setup) throws IOException {
     SilhouetteExtractor silhouettes = switch (setup.silhouettes()) {
       case DEFAULT -> new DefaultSilhouettes();
-      case LEARNED -> new SalientModelSilhouettes(SalientModelStore.installedModel(library.catalog().dir())
+      case LEARNED -> new SalientModelSilhouettes(new SalientModelStore().installedModel(library.catalog().dir())
           .orElseThrow(() -> new MorphscoutException("the learned silhouette model is not installed in "
               + library.catalog().dir() + ": run 'morphscout models add-salient' first")));
     };
