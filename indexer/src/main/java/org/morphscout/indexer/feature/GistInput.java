@@ -54,7 +54,8 @@ public final class GistInput {
     }
     double[] var = blur(d2);
     for (int i = 0; i < PLANE; i++) {
-      out[i] = (float) (d[i] / (Math.sqrt(var[i]) + CONTRAST_FLOOR));
+      // The running-sum blur can leave a variance of -1e-17 where the image is flat; sqrt would give NaN.
+      out[i] = (float) (d[i] / (Math.sqrt(Math.max(0, var[i])) + CONTRAST_FLOOR));
     }
     return out;
   }

@@ -69,7 +69,12 @@ public final class LibraryIndexer {
               org.morphscout.indexer.vector.LuceneIndexOptions.defaults())) {
         String modelId = analyzer.embedder().modelId();
         List<Long> reembed = switchModelIfNeeded(modelId, analyzer.embedder().dimension(), index);
-        int restored = VectorSync.sync(library.features(), index, modelId, options.rebuildVectors());
+        List<Long> invalid = new ArrayList<>();
+        int restored = VectorSync.sync(library.features(), index, modelId, options.rebuildVectors(), invalid);
+        for (long id : invalid) {
+          library.images().setStatus(id, ImageStatus.PENDING);
+          reembed.add(id);
+        }
 
         Map<Long, List<FoundFile>> found = scan(roots, failures, progress, cancel);
         Map<Path, String> hashFailures = new LinkedHashMap<>();
@@ -250,22 +255,33 @@ public final class LibraryIndexer {
       }
       return 0;
     }
+    List<ImageAnalysis> good = new ArrayList<>();
+    List<PreparedImage> goodPrepared = new ArrayList<>();
+    for (int i = 0; i < results.size(); i++) {
+      if (VectorSync.finite(results.get(i).appearance()) && VectorSync.finite(results.get(i).shape().shapeVector())) {
+        good.add(results.get(i));
+        goodPrepared.add(batch.get(i));
+      } else {
+        fail(rows.get(i), "analysis produced an invalid vector (NaN); please report this file", failures);
+      }
+    }
     library.catalog().inTransaction(c -> {
-      for (int i = 0; i < results.size(); i++) {
-        ImageAnalysis a = results.get(i);
-        PreparedImage p = batch.get(i);
+      for (int i = 0; i < good.size(); i++) {
+        ImageAnalysis a = good.get(i);
+        PreparedImage p = goodPrepared.get(i);
         library.features().put(a.id(), a);
         library.images().markReady(a.id(), p.decoded().width(), p.decoded().height(), p.decoded().orientation(),
             p.decoded().format());
       }
       return null;
     });
-    for (ImageAnalysis a : results) {
-      index.upsert(a.id(), a.appearance(), a.shape().shapeVector());
+    for (ImageAnalysis a : good) {
+      index.upsert(a.id(), a.appearance(), VectorSync.nonZeroOrNull(a.shape().shapeVector()));
       analysed.add(a.id());
     }
-    return results.size();
+    return good.size();
   }
+
 
   private void fail(ImageRow row, String reason, List<IndexReport.FileFailure> failures) {
     library.catalog().inTransaction(c -> {

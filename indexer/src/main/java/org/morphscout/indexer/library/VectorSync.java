@@ -20,10 +20,11 @@ public final class VectorSync {
 
   /**
    * @param rebuild clear the index first and add everything again
+   * @param invalid receives ready images whose stored vectors are unusable (not finite); the caller analyses them again
    * @return the number of images whose vectors were (re)added
    */
-  public static int sync(FeatureStore features, VectorIndex index, String modelId, boolean rebuild)
-      throws IOException {
+  public static int sync(FeatureStore features, VectorIndex index, String modelId, boolean rebuild,
+      java.util.List<Long> invalid) throws IOException {
     if (rebuild) {
       index.clear();
     }
@@ -33,8 +34,12 @@ public final class VectorSync {
     IOException[] failure = {null};
     features.forEachVector(v -> {
       if (failure[0] == null && v.modelId().equals(modelId) && !inIndex.contains(v.imageId())) {
+        if (!finite(v.appearance()) || !finite(v.shape())) {
+          invalid.add(v.imageId());
+          return;
+        }
         try {
-          index.upsert(v.imageId(), v.appearance(), v.shape());
+          index.upsert(v.imageId(), v.appearance(), nonZeroOrNull(v.shape()));
           added[0]++;
         } catch (IOException e) {
           failure[0] = e;
@@ -56,5 +61,24 @@ public final class VectorSync {
       LOG.info("vector index brought in line with the catalog: {} added, {} removed", added[0], removed);
     }
     return added[0];
+  }
+
+  static boolean finite(float[] v) {
+    for (float x : v) {
+      if (!Float.isFinite(x)) {
+        return false;
+      }
+    }
+    return true;
+  }
+
+  /** An image without a silhouette has a zero shape vector, which has no direction: it stays out of that field. */
+  static float[] nonZeroOrNull(float[] v) {
+    for (float x : v) {
+      if (x != 0) {
+        return v;
+      }
+    }
+    return null;
   }
 }

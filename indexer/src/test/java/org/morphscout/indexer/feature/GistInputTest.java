@@ -64,4 +64,19 @@ class GistInputTest {
       }
     }
   }
+
+  @Test
+  void cutOutOnTransparentGroundGivesOnlyFiniteValues() {
+    // A product cut-out: an opaque disk on fully transparent pixels, which composite to a perfectly flat mid-grey.
+    // The contrast normalisation must not take the square root of a tiny negative variance there.
+    BufferedImage img = new BufferedImage(300, 400, BufferedImage.TYPE_INT_ARGB);
+    java.awt.Graphics2D g = img.createGraphics();
+    g.setColor(new java.awt.Color(180, 90, 40));
+    g.fillOval(60, 80, 180, 240);
+    g.dispose();
+    float[] t = GistInput.prepare(img);
+    for (int i = 0; i < t.length; i++) {
+      assertThat(Float.isFinite(t[i])).as("component %d", i).isTrue();
+    }
+  }
 }
