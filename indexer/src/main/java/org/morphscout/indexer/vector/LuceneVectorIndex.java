@@ -250,10 +250,14 @@ public final class LuceneVectorIndex implements VectorIndex {
   }
 
   /**
-   * Read-only mode: switches to the newest commit on disk (another process's). Writer mode: nothing new to see, since
-   * {@link #commit()} already refreshes. Returns whether the searched state changed.
+   * Read-only mode: switches to the newest commit on disk (another process's). Writer mode: does nothing, since
+   * {@link #commit()} already refreshes (and refreshing here would expose uncommitted changes). Returns whether the
+   * searched state changed.
    */
   public boolean refresh() throws IOException {
+    if (writer != null) {
+      return false;
+    }
     IndexSearcher before = searchers.acquire();
     try {
       searchers.maybeRefreshBlocking();
