@@ -22,9 +22,8 @@ import java.util.Optional;
  * </ul>
  *
  * <p><b>Simple chains.</b> The optimum above is over walks. A walk that repeats an image can win only when minSteps
- * forces extra steps or when two legs share an image; {@code simple} mode then forbids extending a state to an image
- * already on its own predecessor path (an O(maxSteps) check per step) and turns dominance off. That mode is a
- * heuristic (each state keeps one predecessor), which is why {@link ChainFinder} tries the exact mode first.
+ * forces extra steps or when two legs share an image; {@link ChainFinder} then falls back to
+ * {@link SimpleChainSearch}, which uses this class's transition rules and costs.
  *
  * <p>Not thread-safe; one instance per search.
  */
@@ -38,7 +37,6 @@ final class LayeredChainSearch {
   private final int minSteps;
   private final int maxSteps;
   private final int layers;
-  private boolean[] reached;
   private int[] parentState;
 
   /** A found walk: node indices and the edge slots between them. */
@@ -74,13 +72,24 @@ final class LayeredChainSearch {
     return (wa * g.appearance[e] + ws * g.shape[e] + wc * g.colour[e]) * penalty[u] * penalty[v];
   }
 
-  /** Nodes settled by the last search (any stage): those reachable within the step limit. */
-  boolean[] reached() {
-    return reached;
+  IndexedGraph graph() {
+    return g;
+  }
+
+  boolean blocked(int v) {
+    return blocked[v];
+  }
+
+  int minSteps() {
+    return minSteps;
+  }
+
+  int maxSteps() {
+    return maxSteps;
   }
 
   /** The cheapest walk visiting {@code stops} in order (first = start, last = target), if any. */
-  Optional<Walk> search(int[] stops, boolean simple) {
+  Optional<Walk> search(int[] stops) {
     int n = g.size();
     int legs = stops.length - 1;
     long stateCount = (long) legs * n * layers;
@@ -100,7 +109,6 @@ final class LayeredChainSearch {
     boolean[] settled = new boolean[states];
     int[] bestHop = new int[legs * n]; // per (stage, node): least settled h >= minSteps (dominance)
     Arrays.fill(bestHop, Integer.MAX_VALUE);
-    reached = new boolean[n];
 
     StateHeap heap = new StateHeap(1024);
     int start = state(0, stops[0], 0, n);
@@ -123,14 +131,13 @@ final class LayeredChainSearch {
       int stageNode = st / layers;
       int stage = stageNode / n;
       int u = stageNode % n;
-      if (!simple && h >= minSteps) {
+      if (h >= minSteps) {
         if (bestHop[stageNode] <= h) {
           continue; // dominated by a settled state with fewer (but enough) steps
         }
         bestHop[stageNode] = h;
       }
       settled[st] = true;
-      reached[u] = true;
       int h2 = h + 1;
       if (h2 > maxSteps) {
         continue;
@@ -148,9 +155,6 @@ final class LayeredChainSearch {
         if (h2 + (legs - stage2) > maxSteps) {
           continue; // not enough steps left for the remaining legs
         }
-        if (simple && onPath(st, v, n)) {
-          continue;
-        }
         double c = stepCost(u, e);
         double d2 = d + c * c;
         if (v == target) {
@@ -162,7 +166,7 @@ final class LayeredChainSearch {
           continue;
         }
         int s2 = state(stage2, v, h2, n);
-        if (!simple && h2 >= minSteps && bestHop[stage2 * n + v] <= h2) {
+        if (h2 >= minSteps && bestHop[stage2 * n + v] <= h2) {
           continue;
         }
         if (d2 < dist[s2]) {
@@ -195,16 +199,4 @@ final class LayeredChainSearch {
   private int state(int stage, int node, int h, int n) {
     return (stage * n + node) * layers + h;
   }
-
-  /** Whether node {@code v} lies on the predecessor path of state {@code st} (simple mode only). */
-  private boolean onPath(int st, int v, int n) {
-    // Parent pointers are only read for settled states, which never change once settled.
-    for (int s = st; s >= 0; s = parentState[s]) {
-      if ((s / layers) % n == v) {
-        return true;
-      }
-    }
-    return false;
-  }
-
 }
