@@ -67,13 +67,15 @@ public final class ChainFinder {
     double[] penalty = new double[n];
     Arrays.fill(penalty, 1.0);
 
+    double[][] legDistances = legDistances(stops, query);
+    double[][] bound = stageBounds(stops, legDistances);
     List<Chain> chains = new ArrayList<>();
     List<Set<Integer>> kept = new ArrayList<>();
     int rounds = ROUNDS_PER_ALTERNATIVE * query.alternatives();
     boolean exactSimpleGaveUp = false;
     for (int round = 0; round < rounds && chains.size() < query.alternatives(); round++) {
-      LayeredChainSearch search =
-          new LayeredChainSearch(g, query.costModel(), penalty, blocked, query.minSteps(), query.maxSteps());
+      LayeredChainSearch search = new LayeredChainSearch(
+          g, query.costModel(), penalty, blocked, query.minSteps(), query.maxSteps(), bound);
       Optional<LayeredChainSearch.Walk> walk = search.search(stops);
       if (walk.isPresent() && !walk.get().isSimple()) {
         walk = !exactSimpleGaveUp && affordsExactSimple(stops.length - 1, query.maxSteps())
@@ -81,7 +83,7 @@ public final class ChainFinder {
             : Optional.empty();
         if (walk.isEmpty()) {
           exactSimpleGaveUp = true; // later rounds are penalised variants of the same problem: skip straight on
-          walk = legByLeg(query, stops, penalty, blocked);
+          walk = legByLeg(query, stops, penalty, blocked, legDistances);
         }
       }
       if (walk.isEmpty()) {
@@ -128,7 +130,7 @@ public final class ChainFinder {
    * an image a later leg needed) but always simple.
    */
   private Optional<LayeredChainSearch.Walk> legByLeg(ChainQuery q, int[] stops, double[] penalty,
-      boolean[] blocked) {
+      boolean[] blocked, double[][] legDistances) {
     boolean[] used = blocked.clone();
     List<Integer> nodes = new ArrayList<>();
     List<Integer> edges = new ArrayList<>();
@@ -147,7 +149,8 @@ public final class ChainFinder {
         used[v] = true;
       }
       used[stops[leg]] = false; // the leg's own start must stay usable as its start
-      LayeredChainSearch search = new LayeredChainSearch(g, q.costModel(), penalty, used, min, max);
+      double[][] legBound = legDistances == null ? null : new double[][] {legDistances[leg]};
+      LayeredChainSearch search = new LayeredChainSearch(g, q.costModel(), penalty, used, min, max, legBound);
       int[] legStops = {stops[leg], stops[leg + 1]};
       Optional<LayeredChainSearch.Walk> part = search.search(legStops);
       if (part.isPresent() && !part.get().isSimple()) {
@@ -165,6 +168,52 @@ public final class ChainFinder {
     }
     return Optional.of(new LayeredChainSearch.Walk(
         nodes.stream().mapToInt(Integer::intValue).toArray(), edges.stream().mapToInt(Integer::intValue).toArray()));
+  }
+
+  /**
+   * Per leg, plain distances of every node to the leg's end, capped at a radius (null when the graph is not
+   * symmetric). The radius comes from the leg's plain shortest path: when its step count fits the query, its sum of
+   * squares bounds the optimum from above, and no useful node lies farther than {@link PlainDistances#radiusFor}.
+   * Otherwise the whole graph is searched. Any radius gives a valid bound; a good one just saves work.
+   */
+  private double[][] legDistances(int[] stops, ChainQuery q) {
+    if (!g.symmetric) {
+      return null;
+    }
+    int legs = stops.length - 1;
+    double[][] d = new double[legs][];
+    for (int leg = 0; leg < legs; leg++) {
+      PlainDistances plain = new PlainDistances(g, q.costModel(), stops[leg + 1]);
+      double radius = Double.POSITIVE_INFINITY;
+      if (plain.settle(stops[leg]) < Double.POSITIVE_INFINITY && legs == 1) {
+        double[] path = plain.squaredPathCost(stops[leg]);
+        if (path[1] >= q.minSteps() && path[1] <= q.maxSteps()) {
+          radius = PlainDistances.radiusFor(path[0], q.maxSteps());
+        }
+      }
+      d[leg] = plain.capped(radius);
+    }
+    return d;
+  }
+
+  /** Per stage, plain distance to the stage's next stop plus the plain lengths of the legs after it. */
+  private static double[][] stageBounds(int[] stops, double[][] legDistances) {
+    if (legDistances == null) {
+      return null;
+    }
+    int legs = legDistances.length;
+    double[][] bound = new double[legs][];
+    double tail = 0;
+    for (int s = legs - 1; s >= 0; s--) {
+      bound[s] = legDistances[s].clone();
+      if (tail > 0) {
+        for (int v = 0; v < bound[s].length; v++) {
+          bound[s][v] += tail;
+        }
+      }
+      tail += legDistances[s][stops[s]];
+    }
+    return bound;
   }
 
   /** Whether {@link SimpleChainSearch}'s bound (legs x layers x steps relaxations) fits the work budget. */
