@@ -35,7 +35,7 @@ import picocli.CommandLine.Spec;
       DecideCommand.class,
       DecisionsCommand.class,
       ChainCommand.class,
-      //TODO WalkCommand.class,
+      WalkCommand.class,
       //TODO PreviewCommand.class,
       //TODO ModelsCommand.class,
       //TODO BrowseCommand.class,
