@@ -1,9 +1,12 @@
 package org.morphscout.indexer.ingest;
 
+import java.awt.color.ColorSpace;
+import java.awt.color.ICC_Profile;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.io.InputStream;
+import java.nio.channels.ClosedByInterruptException;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -13,6 +16,7 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.Optional;
 import javax.imageio.IIOException;
 import javax.imageio.ImageIO;
 import javax.imageio.ImageReadParam;
@@ -31,7 +35,8 @@ import org.slf4j.LoggerFactory;
  * end marker ({@link DataEndCheck}), header dimensions against the pixel cap (no pixels decoded), EXIF
  * orientation, then a decode with source subsampling so that the decoded picture's long side stays about twice the
  * analysis size (memory per image is bounded even for 100 MP files; the factor of two leaves room for the area
- * average to remove the aliasing of point subsampling), conversion to sRGB ARGB ({@link SrgbConverter}), area
+ * average to remove the aliasing of point subsampling), conversion to sRGB ARGB ({@link SrgbConverter}; ICC
+ * profiles embedded in JPEG and TIFF are applied by TwelveMonkeys, those in PNG by {@link PngColourProfile}), area
  * downscale to at most the analysis size ({@link AreaDownscaler}) and finally orientation ({@link Orientation}).
  *
  * <p>Thread-safe: every call uses its own reader. Decoding stops early (reported as {@link ReadFailure#TIMED_OUT})
@@ -59,6 +64,9 @@ public final class ImageIoDecoder implements ImageDecoder {
       throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
     } catch (AccessDeniedException e) {
       throw new ImageReadException(file, ReadFailure.UNREADABLE, "file not readable (permission denied)", e);
+    } catch (ClosedByInterruptException e) {
+      // File channels close when their thread is interrupted: that is a stop request, not a disk failure.
+      throw interrupted(file);
     }
   }
 
@@ -151,9 +159,6 @@ public final class ImageIoDecoder implements ImageDecoder {
       try {
         raw = reader.read(0, param);
       } catch (IIOException | RuntimeException e) {
-        if (Thread.currentThread().isInterrupted()) {
-          throw interrupted(file);
-        }
         throw decoderFailed(file, format, e);
       }
       if (watch.aborted) {
@@ -166,7 +171,14 @@ public final class ImageIoDecoder implements ImageDecoder {
         LOG.debug("{}: decoder warning: {}", file, warning);
       }
       boolean hasAlpha = raw.getColorModel().hasAlpha();
+      boolean rgbSamples = raw.getColorModel().getColorSpace().getType() == ColorSpace.TYPE_RGB;
       BufferedImage srgb = SrgbConverter.toSrgbArgb(raw);
+      if (format == FileFormat.PNG && rgbSamples) {
+        Optional<ICC_Profile> profile = PngColourProfile.embeddedRgbProfile(reader);
+        if (profile.isPresent()) {
+          srgb = PngColourProfile.toSrgb(srgb, profile.get());
+        }
+      }
       raw = null; // let the decoded picture go before allocating the next one
       int[] target = AreaDownscaler.fitWithin(w, h, options.analysisLongSide());
       BufferedImage small =
@@ -222,6 +234,9 @@ public final class ImageIoDecoder implements ImageDecoder {
   }
 
   private static ImageReadException decoderFailed(Path file, FileFormat format, Exception e) {
+    if (Thread.currentThread().isInterrupted()) {
+      return interrupted(file); // the reader's stream was closed by the interrupt; the data may be fine
+    }
     if (e instanceof IIOException && e.getCause() instanceof java.io.EOFException) {
       return truncated(file, format, e);
     }

@@ -142,6 +142,31 @@ class ImageIoDecoderFormatsTest {
   }
 
   @Test
+  void pngWithIccpChunkIsConvertedToSrgb() throws Exception {
+    // Same check as for JPEG, with the profile in an iCCP chunk (ISO/IEC 15948 section 11.3.3.3: profile name,
+    // NUL, compression method 0, zlib-compressed profile), placed right after IHDR.
+    byte[] plain = TestImages.encode(TestImages.rgb(TestImages.filled(16, 16, 0xFF808080)), "png");
+    byte[] icc = ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData();
+    ByteArrayOutputStream data = new ByteArrayOutputStream();
+    data.writeBytes("linear\0".getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
+    data.write(0);
+    try (var z = new java.util.zip.DeflaterOutputStream(data)) {
+      z.write(icc);
+    }
+    byte[] chunk = TestImages.pngChunk("iCCP", data.toByteArray());
+    int afterIhdr = 8 + 12 + 13; // signature, IHDR length/type/CRC + 13 data bytes
+    byte[] tagged = new byte[plain.length + chunk.length];
+    System.arraycopy(plain, 0, tagged, 0, afterIhdr);
+    System.arraycopy(chunk, 0, tagged, afterIhdr, chunk.length);
+    System.arraycopy(plain, afterIhdr, tagged, afterIhdr + chunk.length, plain.length - afterIhdr);
+
+    DecodedImage d = decoder.decode(TestImages.write(dir, "linear-icc.png", tagged));
+    int p = d.analysis().getRGB(8, 8);
+    int expected = (int) Math.round(255 * (1.055 * Math.pow(128 / 255.0, 1 / 2.4) - 0.055)); // IEC 61966-2-1
+    assertThat(red(p)).as("%08x vs sRGB %d", p, expected).isBetween(expected - 4, expected + 4);
+  }
+
+  @Test
   void png8BitRgb() throws Exception {
     BufferedImage rgb = TestImages.rgb(halves());
     DecodedImage d = decoder.decode(TestImages.write(dir, "rgb8.png", TestImages.encode(rgb, "png")));
@@ -268,6 +293,25 @@ class ImageIoDecoderFormatsTest {
   }
 
   @Test
+  void tiffWithEmbeddedIccProfileIsConvertedToSrgb() throws Exception {
+    // Samples 128 in the JDK's linear-light RGB space; the TIFF writer embeds the profile (TIFF tag 34675,
+    // ICC.1:2010 Annex B.3) and the result must be sRGB 188 (IEC 61966-2-1, see the JPEG case).
+    ComponentColorModel cm = new ComponentColorModel(
+        ColorSpace.getInstance(ColorSpace.CS_LINEAR_RGB), false, false, Transparency.OPAQUE, DataBuffer.TYPE_BYTE);
+    WritableRaster r = cm.createCompatibleWritableRaster(16, 16);
+    for (int y = 0; y < 16; y++) {
+      for (int x = 0; x < 16; x++) {
+        r.setPixel(x, y, new int[] {128, 128, 128});
+      }
+    }
+    byte[] bytes = TestImages.encode(new BufferedImage(cm, r, false, null), "tiff");
+    DecodedImage d = decoder.decode(TestImages.write(dir, "linear.tif", bytes));
+    int p = d.analysis().getRGB(8, 8);
+    int expected = (int) Math.round(255 * (1.055 * Math.pow(128 / 255.0, 1 / 2.4) - 0.055));
+    assertThat(red(p)).as("%08x vs sRGB %d", p, expected).isBetween(expected - 4, expected + 4);
+  }
+
+  @Test
   void bmp() throws Exception {
     BufferedImage bgr = new BufferedImage(64, 32, BufferedImage.TYPE_3BYTE_BGR);
     bgr.createGraphics().drawImage(halves(), 0, 0, null);
@@ -343,27 +387,47 @@ class ImageIoDecoderFormatsTest {
   }
 
   @Test
-  void bigImageIsSubsampledAndAreaAveraged() throws Exception {
-    // 3000 x 2000 (6 MP): vertical stripes 1 px black / 1 px white. A point-subsampled image would be all black or
-    // all white (aliasing); an area average is mid grey (about 128). Left third is a solid red block.
-    BufferedImage img = new BufferedImage(3000, 2000, BufferedImage.TYPE_INT_RGB);
-    int[] row = new int[3000];
-    for (int x = 0; x < 3000; x++) {
-      row[x] = x < 1000 ? 0xFF0000 : (x % 2 == 0 ? 0x000000 : 0xFFFFFF);
+  void fineDetailIsAreaAveragedNotAliased() throws Exception {
+    // 1600 x 1000 (decoded at full size: 1600 / 1536 gives step 1): 1 px black / 1 px white vertical stripes. Point
+    // sampling down to 768 px would give black or white columns (aliasing); an area average gives mid grey
+    // (127.5). The left quarter is solid red and must stay exactly red.
+    BufferedImage img = new BufferedImage(1600, 1000, BufferedImage.TYPE_INT_RGB);
+    int[] row = new int[1600];
+    for (int x = 0; x < 1600; x++) {
+      row[x] = x < 400 ? 0xFF0000 : (x % 2 == 0 ? 0x000000 : 0xFFFFFF);
     }
-    for (int y = 0; y < 2000; y++) {
-      img.setRGB(0, y, 3000, 1, row, 0, 3000);
+    for (int y = 0; y < 1000; y++) {
+      img.setRGB(0, y, 1600, 1, row, 0, 1600);
     }
-    Path file = TestImages.write(dir, "big.png", TestImages.encode(img, "png"));
-    DecodedImage d = decoder.decode(file);
-    assertThat(d.width()).isEqualTo(3000);
-    assertThat(d.height()).isEqualTo(2000);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "stripes.png", TestImages.encode(img, "png")));
     assertThat(d.analysis().getWidth()).isEqualTo(768);
-    assertThat(d.analysis().getHeight()).isEqualTo(512);
+    assertThat(d.analysis().getHeight()).isEqualTo(480);
     assertThat(d.analysis().getRGB(100, 200)).isEqualTo(0xFFFF0000);
-    // Stripes sampled with subsampling step 1 (3000 / 1536 = 1): average of black and white, within rounding.
-    int stripes = d.analysis().getRGB(600, 300);
-    assertThat(red(stripes)).as("%08x", stripes).isBetween(120, 135);
+    for (int x = 300; x < 760; x += 7) {
+      int p = d.analysis().getRGB(x, 240);
+      assertThat(red(p)).as("x=%d: %08x", x, p).isBetween(118, 137);
+    }
+  }
+
+  @Test
+  void wideImageIsSubsampledToTheAnalysisSize() throws Exception {
+    // 4000 x 500: step 4000 / 1536 = 2, decoded 2000 x 250, then averaged to 768 x 96. Full size is reported.
+    BufferedImage img = new BufferedImage(4000, 500, BufferedImage.TYPE_INT_RGB);
+    int[] row = new int[4000];
+    for (int x = 0; x < 4000; x++) {
+      row[x] = x < 1000 ? 0xFF0000 : x < 3000 ? 0x00FF00 : 0x0000FF;
+    }
+    for (int y = 0; y < 500; y++) {
+      img.setRGB(0, y, 4000, 1, row, 0, 4000);
+    }
+    DecodedImage d = decoder.decode(TestImages.write(dir, "wide.png", TestImages.encode(img, "png")));
+    assertThat(d.width()).isEqualTo(4000);
+    assertThat(d.height()).isEqualTo(500);
+    assertThat(d.analysis().getWidth()).isEqualTo(768);
+    assertThat(d.analysis().getHeight()).isEqualTo(96);
+    assertThat(d.analysis().getRGB(50, 50)).isEqualTo(0xFFFF0000);
+    assertThat(d.analysis().getRGB(384, 50)).isEqualTo(0xFF00FF00);
+    assertThat(d.analysis().getRGB(700, 50)).isEqualTo(0xFF0000FF);
   }
 
   @Test
