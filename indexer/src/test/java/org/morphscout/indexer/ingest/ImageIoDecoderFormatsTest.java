@@ -109,11 +109,34 @@ class ImageIoDecoderFormatsTest {
     assertThat(sofComponentCount(bytes)).as("a 4-component (CMYK) frame").isEqualTo(4);
 
     DecodedImage d = decoder.decode(TestImages.write(dir, "cmyk.jpg", bytes));
-    BufferedImage a = d.analysis();
     // Expected colours from the common-practice CMYK -> RGB relation R = 255(1-C)(1-K), G = 255(1-M)(1-K),
     // B = 255(1-Y)(1-K): cyan (0,255,255), white (255,255,255), black (0,0,0). An ICC-managed conversion lands
     // near these but not on them (printing inks are duller: SWOP cyan is about (0,160,230), from memory), hence
     // the wide tolerance on cyan's green and blue.
+    assertCyanWhiteBlack(d.analysis());
+  }
+
+  @org.junit.jupiter.params.ParameterizedTest(name = "YCCK {0}")
+  @org.junit.jupiter.params.provider.ValueSource(booleans = {false, true})
+  void adobeCmykAndYcckJpegsComeOutInRgb(boolean ycck) throws Exception {
+    // Hand-laid Adobe JPEG (see AdobeJpegBuilder): 48 x 16, cyan | paper white | full black.
+    int[][] inks = new int[48 * 16][];
+    int[][] blocks = {{255, 0, 0, 0}, {0, 0, 0, 0}, {0, 0, 0, 255}};
+    for (int i = 0; i < inks.length; i++) {
+      inks[i] = blocks[(i % 48) / 16];
+    }
+    byte[] bytes = AdobeJpegBuilder.build(48, 16, inks, ycck);
+    assertThat(sofComponentCount(bytes)).isEqualTo(4);
+    // APP14 right after SOI (offset 2): FF EE, length (2), "Adobe" (5), version (2), flags0 (2), flags1 (2), then
+    // the transform byte at file offset 2 + 2 + 2 + 5 + 6 = 17.
+    assertThat(new String(bytes, 6, 5, java.nio.charset.StandardCharsets.US_ASCII)).isEqualTo("Adobe");
+    assertThat(bytes[17]).as("Adobe transform byte").isEqualTo((byte) (ycck ? 2 : 0));
+    DecodedImage d = decoder.decode(TestImages.write(dir, ycck ? "ycck.jpg" : "adobe-cmyk.jpg", bytes));
+    assertCyanWhiteBlack(d.analysis());
+  }
+
+  /** Cyan, white, black blocks of 16 px: see {@link #cmykJpegComesOutInRgb()} for the expected values. */
+  private static void assertCyanWhiteBlack(BufferedImage a) {
     int cyan = a.getRGB(8, 8);
     assertThat(red(cyan)).as("cyan R %08x", cyan).isLessThan(60);
     assertThat(green(cyan)).as("cyan G %08x", cyan).isGreaterThan(140);
@@ -164,6 +187,28 @@ class ImageIoDecoderFormatsTest {
     int p = d.analysis().getRGB(8, 8);
     int expected = (int) Math.round(255 * (1.055 * Math.pow(128 / 255.0, 1 / 2.4) - 0.055)); // IEC 61966-2-1
     assertThat(red(p)).as("%08x vs sRGB %d", p, expected).isBetween(expected - 4, expected + 4);
+  }
+
+  @Test
+  void pngExifChunkOrientationIsApplied() throws Exception {
+    // PNG eXIf chunk (Extensions to the PNG 1.2 Specification, version 1.5.0, section 3.7; PNG 3rd edition
+    // section 11.3.6.1): the chunk data is the Exif TIFF structure without the "Exif\0\0" prefix. Orientation 6
+    // (rotate 90 CW to view) turns the stored 64 x 32 into 32 x 64 with the stored top-left block at top-right.
+    byte[] plain = TestImages.encode(TestImages.rgb(halves()), "png");
+    byte[] app1 = TestImages.exifOrientationApp1(6, true);
+    byte[] tiff = java.util.Arrays.copyOfRange(app1, 4 + 6, app1.length);
+    byte[] chunk = TestImages.pngChunk("eXIf", tiff);
+    int afterIhdr = 8 + 12 + 13;
+    byte[] tagged = new byte[plain.length + chunk.length];
+    System.arraycopy(plain, 0, tagged, 0, afterIhdr);
+    System.arraycopy(chunk, 0, tagged, afterIhdr, chunk.length);
+    System.arraycopy(plain, afterIhdr, tagged, afterIhdr + chunk.length, plain.length - afterIhdr);
+
+    DecodedImage d = decoder.decode(TestImages.write(dir, "exif.png", tagged));
+    assertThat(d.orientation()).isEqualTo(6);
+    assertThat(d.width()).isEqualTo(32);
+    assertThat(d.height()).isEqualTo(64);
+    assertThat(d.analysis().getRGB(29, 2)).isEqualTo(YELLOW);
   }
 
   @Test
@@ -411,23 +456,23 @@ class ImageIoDecoderFormatsTest {
 
   @Test
   void wideImageIsSubsampledToTheAnalysisSize() throws Exception {
-    // 4000 x 500: step 4000 / 1536 = 2, decoded 2000 x 250, then averaged to 768 x 96. Full size is reported.
-    BufferedImage img = new BufferedImage(4000, 500, BufferedImage.TYPE_INT_RGB);
+    // 4000 x 250: step 4000 / 1536 = 2, decoded 2000 x 125, then averaged to 768 x 48. Full size is reported.
+    BufferedImage img = new BufferedImage(4000, 250, BufferedImage.TYPE_INT_RGB);
     int[] row = new int[4000];
     for (int x = 0; x < 4000; x++) {
       row[x] = x < 1000 ? 0xFF0000 : x < 3000 ? 0x00FF00 : 0x0000FF;
     }
-    for (int y = 0; y < 500; y++) {
+    for (int y = 0; y < 250; y++) {
       img.setRGB(0, y, 4000, 1, row, 0, 4000);
     }
     DecodedImage d = decoder.decode(TestImages.write(dir, "wide.png", TestImages.encode(img, "png")));
     assertThat(d.width()).isEqualTo(4000);
-    assertThat(d.height()).isEqualTo(500);
+    assertThat(d.height()).isEqualTo(250);
     assertThat(d.analysis().getWidth()).isEqualTo(768);
-    assertThat(d.analysis().getHeight()).isEqualTo(96);
-    assertThat(d.analysis().getRGB(50, 50)).isEqualTo(0xFFFF0000);
-    assertThat(d.analysis().getRGB(384, 50)).isEqualTo(0xFF00FF00);
-    assertThat(d.analysis().getRGB(700, 50)).isEqualTo(0xFF0000FF);
+    assertThat(d.analysis().getHeight()).isEqualTo(48);
+    assertThat(d.analysis().getRGB(50, 20)).isEqualTo(0xFFFF0000);
+    assertThat(d.analysis().getRGB(384, 20)).isEqualTo(0xFF00FF00);
+    assertThat(d.analysis().getRGB(700, 20)).isEqualTo(0xFF0000FF);
   }
 
   @Test
