@@ -143,6 +143,23 @@ final class DataEndCheck {
     }
   }
 
+  /**
+   * GIF89a specification section 27: the data stream ends with the Trailer byte 0x3B. Only consulted after the
+   * decoder failed (a valid GIF may be followed by junk, so a missing trailer alone does not condemn a file).
+   */
+  static boolean gifHasTrailer(Path file) throws IOException {
+    try (java.nio.channels.SeekableByteChannel ch = Files.newByteChannel(file)) {
+      long size = ch.size();
+      if (size == 0) {
+        return false;
+      }
+      java.nio.ByteBuffer last = java.nio.ByteBuffer.allocate(1);
+      ch.position(size - 1);
+      ch.read(last);
+      return last.get(0) == 0x3B;
+    }
+  }
+
   /** RFC 9649 section 2.5: the RIFF header's size field counts the bytes after it; a shorter file is truncated. */
   static Completeness riff(Path file) throws IOException {
     long size = Files.size(file);

@@ -3,6 +3,7 @@ package org.morphscout.indexer.ingest;
 import java.awt.color.ColorSpace;
 import java.awt.color.ICC_Profile;
 import java.awt.image.BufferedImage;
+import java.io.EOFException;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.io.InputStream;
@@ -17,7 +18,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
-import javax.imageio.IIOException;
 import javax.imageio.ImageIO;
 import javax.imageio.ImageReadParam;
 import javax.imageio.ImageReader;
@@ -142,7 +142,7 @@ public final class ImageIoDecoder implements ImageDecoder {
       try {
         w = reader.getWidth(0);
         h = reader.getHeight(0);
-      } catch (IIOException | RuntimeException e) {
+      } catch (IOException | RuntimeException e) {
         throw decoderFailed(file, format, e);
       }
       if (w <= 0 || h <= 0) {
@@ -158,8 +158,13 @@ public final class ImageIoDecoder implements ImageDecoder {
       BufferedImage raw;
       try {
         raw = reader.read(0, param);
-      } catch (IIOException | RuntimeException e) {
+      } catch (IOException | RuntimeException e) {
         throw decoderFailed(file, format, e);
+      } catch (OutOfMemoryError e) {
+        // The pixel cap and subsampling should prevent this; if a decoder still allocates too much, the large
+        // buffer is unreachable once we unwind, so report this file and let indexing go on.
+        throw new ImageReadException(
+            file, ReadFailure.DECODER_FAILED, "decoder failed: not enough memory to decode " + w + "x" + h, e);
       }
       if (watch.aborted) {
         throw interrupted(file);
@@ -233,11 +238,20 @@ public final class ImageIoDecoder implements ImageDecoder {
     return new ImageReadException(file, ReadFailure.TIMED_OUT, "decoding stopped (time limit or cancel)");
   }
 
-  private static ImageReadException decoderFailed(Path file, FileFormat format, Exception e) {
-    if (Thread.currentThread().isInterrupted()) {
+  /**
+   * Classifies what a reader threw. Readers declare plain {@link IOException} for bad data as well as for I/O
+   * (an {@link EOFException} usually means truncation), so everything except a vanished or forbidden file is
+   * reported as this file's failure rather than as a machine failure.
+   */
+  private static ImageReadException decoderFailed(Path file, FileFormat format, Exception e) throws IOException {
+    if (e instanceof NoSuchFileException || e instanceof AccessDeniedException) {
+      throw (IOException) e; // mapped to VANISHED / UNREADABLE in decode()
+    }
+    if (Thread.currentThread().isInterrupted() || e instanceof ClosedByInterruptException) {
       return interrupted(file); // the reader's stream was closed by the interrupt; the data may be fine
     }
-    if (e instanceof IIOException && e.getCause() instanceof java.io.EOFException) {
+    if (e instanceof EOFException || e.getCause() instanceof EOFException
+        || (format == FileFormat.GIF && !DataEndCheck.gifHasTrailer(file))) {
       return truncated(file, format, e);
     }
     String cause = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();

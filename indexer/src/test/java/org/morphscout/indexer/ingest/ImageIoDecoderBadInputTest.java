@@ -84,6 +84,18 @@ class ImageIoDecoderBadInputTest {
     assertThat(e.reason()).isEqualTo("truncated PNG data");
   }
 
+  @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
+  @org.junit.jupiter.params.provider.ValueSource(strings = {"tiff", "bmp", "gif", "png", "jpeg"})
+  void truncatedFilesOfEveryFormatGiveAReasonNotAPartialPicture(String format) throws Exception {
+    BufferedImage img = photoLike(120, 90, 14);
+    byte[] full = format.equals("gif") ? TestImages.encode(img, "gif")
+        : format.equals("jpeg") ? TestImages.jpeg(img, false) : TestImages.encode(img, format);
+    Path file = TestImages.write(dir, "cut." + format, Arrays.copyOf(full, full.length / 2));
+    ImageReadException e = failure(file);
+    assertThat(e.failure()).as(e.reason()).isEqualTo(ReadFailure.TRUNCATED);
+    assertThat(e.reason()).isEqualTo("truncated " + FileFormat.valueOf(format.toUpperCase(java.util.Locale.ROOT)).label() + " data");
+  }
+
   @Test
   void randomBytesNamedJpg() throws Exception {
     long seed = 20261201L;

@@ -149,6 +149,23 @@ class LibraryScannerTest {
   }
 
   @Test
+  void brokenLinkIsReportedWhenFollowingLinks() throws Exception {
+    assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
+    Path root = tmp.resolve("lib");
+    Path ok = touch(root.resolve("ok.jpg"));
+    Path dangling = Files.createSymbolicLink(root.resolve("moved.jpg"), tmp.resolve("not-there.jpg"));
+
+    ScanResult ignoring = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root));
+    assertThat(paths(ignoring)).containsExactly(ok);
+    assertThat(ignoring.problems()).isEmpty();
+
+    ScanResult following = new LibraryScanner(ScanOptions.defaults().withLinks(ScanOptions.LinkPolicy.ANY))
+        .scan(List.of(root));
+    assertThat(paths(following)).containsExactly(ok);
+    assertThat(following.problems()).containsExactly(new ScanProblem(dangling, "broken symbolic link"));
+  }
+
+  @Test
   void missingRootAndUnreadableFolderAreProblemsNotFailures() throws Exception {
     Path root = tmp.resolve("lib");
     Path ok = touch(root.resolve("ok.jpg"));
