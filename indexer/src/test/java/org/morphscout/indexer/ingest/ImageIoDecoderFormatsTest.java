@@ -432,6 +432,55 @@ class ImageIoDecoderFormatsTest {
   }
 
   @Test
+  void losslessWebPWithAlpha() throws Exception {
+    boolean[] pattern = new boolean[16 * 8];
+    pattern[0] = true;
+    byte[] webp = WebPLosslessBuilder.build(16, 8, pattern, 10, 20, 200, 30, 128);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "alpha.webp", webp));
+    assertThat(d.hasAlpha()).isTrue();
+    assertThat(d.analysis().getRGB(0, 0)).isEqualTo(0x800AC81E);
+    assertThat(d.analysis().getRGB(5, 5)).isEqualTo(0x800A141E);
+  }
+
+  @Test
+  void extendedWebPWithExifOrientation() throws Exception {
+    // VP8X container with an EXIF chunk carrying orientation 8 (rotate 270 CW to view): stored 64 x 32 with the
+    // marked block at the stored top-left ends up at the upright bottom-left (CIPA DC-008-2019: 8 = left/bottom).
+    boolean[] pattern = new boolean[64 * 32];
+    for (int y = 0; y < 8; y++) {
+      for (int x = 0; x < 8; x++) {
+        pattern[y * 64 + x] = true;
+      }
+    }
+    byte[] simple = WebPLosslessBuilder.build(64, 32, pattern, 255, 0, 255, 0, 255);
+    byte[] app1 = TestImages.exifOrientationApp1(8, false);
+    byte[] tiff = java.util.Arrays.copyOfRange(app1, 4 + 6, app1.length);
+    byte[] webp = WebPLosslessBuilder.withExif(simple, 64, 32, false, tiff);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "exif.webp", webp));
+    assertThat(d.orientation()).isEqualTo(8);
+    assertThat(d.width()).isEqualTo(32);
+    assertThat(d.height()).isEqualTo(64);
+    assertThat(d.analysis().getRGB(2, 61)).isEqualTo(YELLOW);
+    assertThat(d.analysis().getRGB(2, 2)).isEqualTo(RED);
+  }
+
+  @Test
+  void wideWebPIsSubsampled() throws Exception {
+    // 3200 x 8: step 3200 / 1536 = 2; left half yellow, right half red.
+    boolean[] pattern = new boolean[3200 * 8];
+    for (int i = 0; i < pattern.length; i++) {
+      pattern[i] = i % 3200 < 1600;
+    }
+    byte[] webp = WebPLosslessBuilder.build(3200, 8, pattern, 255, 0, 255, 0, 255);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "wide.webp", webp));
+    assertThat(d.width()).isEqualTo(3200);
+    assertThat(d.analysis().getWidth()).isEqualTo(768);
+    assertThat(d.analysis().getHeight()).isEqualTo(2);
+    assertThat(d.analysis().getRGB(100, 1)).isEqualTo(YELLOW);
+    assertThat(d.analysis().getRGB(700, 1)).isEqualTo(RED);
+  }
+
+  @Test
   void fineDetailIsAreaAveragedNotAliased() throws Exception {
     // 1600 x 1000 (decoded at full size: 1600 / 1536 gives step 1): 1 px black / 1 px white vertical stripes. Point
     // sampling down to 768 px would give black or white columns (aliasing); an area average gives mid grey
