@@ -86,21 +86,26 @@ public final class LibraryScanner {
     }
     found.sort(Comparator.comparing(FoundFile::path));
     problems.sort(Comparator.comparing(ScanProblem::path));
-    List<FoundFile> unique = options.links() == ScanOptions.LinkPolicy.NONE ? found : dropDuplicates(found);
+    List<FoundFile> unique = dropDuplicates(found, options.links() != ScanOptions.LinkPolicy.NONE);
     progress.finished();
     return new ScanResult(unique, problems);
   }
 
-  /** The same real file reached through several links is listed once, under its first path in sorted order. */
-  private static List<FoundFile> dropDuplicates(List<FoundFile> sorted) {
+  /**
+   * Lists each file once: overlapping roots yield the same path twice, and (when following links) the same real
+   * file may be reached through several links; the first path in sorted order is kept.
+   */
+  private static List<FoundFile> dropDuplicates(List<FoundFile> sorted, boolean byRealPath) {
     Set<Path> seen = new HashSet<>();
     List<FoundFile> out = new ArrayList<>();
     for (FoundFile f : sorted) {
-      Path real;
-      try {
-        real = f.path().toRealPath();
-      } catch (IOException e) {
-        real = f.path(); // vanished since: keep it, the decoder will report it
+      Path real = f.path().toAbsolutePath().normalize();
+      if (byRealPath) {
+        try {
+          real = f.path().toRealPath();
+        } catch (IOException e) {
+          // vanished since: keep it under its own path, the decoder will report it
+        }
       }
       if (seen.add(real)) {
         out.add(f);

@@ -62,6 +62,15 @@ class LibraryScannerTest {
   }
 
   @Test
+  void overlappingRootsListEachFileOnce() throws Exception {
+    Path root = tmp.resolve("lib");
+    Path a = touch(root.resolve("2024/a.jpg"));
+    Path b = touch(root.resolve("b.png"));
+    ScanResult r = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root.resolve("2024"), root));
+    assertThat(paths(r)).containsExactly(a, b);
+  }
+
+  @Test
   void oddNamesWork() throws Exception {
     Path root = tmp.resolve("lib");
     Path spaces = touch(root.resolve("holiday photos/beach at noon.jpeg"));
