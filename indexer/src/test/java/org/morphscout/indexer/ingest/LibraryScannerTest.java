@@ -143,6 +143,27 @@ class LibraryScannerTest {
   }
 
   @Test
+  void rootThatIsALinkIsEntered() throws Exception {
+    assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
+    Path disk = tmp.resolve("external-disk/photos");
+    touch(disk.resolve("a.jpg"));
+    Path root = Files.createSymbolicLink(tmp.resolve("Pictures"), disk);
+    ScanResult r = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root));
+    assertThat(paths(r)).containsExactly(root.resolve("a.jpg"));
+  }
+
+  @Test
+  void loopIsSilentlyIgnoredWhenNotFollowingLinks() throws Exception {
+    assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
+    Path root = tmp.resolve("lib");
+    Path a = touch(root.resolve("a/pic.jpg"));
+    Files.createSymbolicLink(root.resolve("a/back-to-root"), root);
+    ScanResult r = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root));
+    assertThat(paths(r)).containsExactly(a);
+    assertThat(r.problems()).isEmpty();
+  }
+
+  @Test
   void symlinkLoopEndsAndIsReported() throws Exception {
     assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
     Path root = tmp.resolve("lib");
