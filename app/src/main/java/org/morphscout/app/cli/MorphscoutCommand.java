@@ -37,7 +37,7 @@ import picocli.CommandLine.Spec;
       ChainCommand.class,
       WalkCommand.class,
       PreviewCommand.class,
-      //TODO ModelsCommand.class,
+      ModelsCommand.class,
       //TODO BrowseCommand.class,
     })
 public final class MorphscoutCommand implements Callable<Integer> {

@@ -125,22 +125,32 @@ public final class LibraryIndexer {
     }
   }
 
-  /** When the catalog's vectors came from another model, every ready image is re-embedded with this one. */
+  /**
+   * When the catalog's vectors came from another model, or its silhouettes from another extractor, every ready image
+   * is analysed again with the current ones: vectors and silhouettes of two setups are never mixed.
+   */
   private List<Long> switchModelIfNeeded(String modelId, int dimension, VectorIndex index) throws IOException {
     library.features().registerModel(modelId, dimension,
         setup.model().isPresent() ? "user model " + setup.model().get().modelFile() : "built-in GIST + CIELAB layout");
     String active = LibrarySettings.activeModel(library.features()).orElse(null);
+    String silhouettes = setup.silhouettes().name().toLowerCase(java.util.Locale.ROOT);
+    String activeSilhouettes = library.features().setting(LibrarySettings.ACTIVE_SILHOUETTES).orElse(silhouettes);
     List<Long> reembed = new ArrayList<>();
-    if (active != null && !active.equals(modelId)) {
-      LOG.warn("appearance model changed from {} to {}: every image is analysed again", active, modelId);
+    boolean modelChanged = active != null && !active.equals(modelId);
+    if (modelChanged || !activeSilhouettes.equals(silhouettes)) {
+      LOG.warn("analysis changed (model {} -> {}, silhouettes {} -> {}): every image is analysed again", active,
+          modelId, activeSilhouettes, silhouettes);
       for (ImageRow row : library.images().withStatus(ImageStatus.READY)) {
         reembed.add(row.id());
       }
-      index.clear();
-      index.commit();
+      if (modelChanged) {
+        index.clear();
+        index.commit();
+      }
       library.neighbours().clear();
     }
     library.features().putSetting(LibrarySettings.ACTIVE_MODEL, modelId);
+    library.features().putSetting(LibrarySettings.ACTIVE_SILHOUETTES, silhouettes);
     return reembed;
   }
 
