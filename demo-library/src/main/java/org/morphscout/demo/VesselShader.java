@@ -118,12 +118,12 @@ final class VesselShader {
     double h = tmp[0];
     double u = tmp[1];
     double cosT = Math.sqrt(Math.max(0, 1 - u * u));
-    double slope = geo.profile.slopeAt(h);
+    double slope = geo.slope(h);
     double nlen = Math.sqrt(1 + slope * slope);
     double nx = u / nlen;
     double ny = -slope / nlen;
     double nz = cosT / nlen;
-    double gloss = surface.albedo(StrictMath.asin(u) * maxRadiusCm, h, alb);
+    double gloss = surface.albedo(Noise.asin(u) * maxRadiusCm, h, alb);
     // Contact darkening: the floor blocks part of the fill light in the lowest centimetre.
     double contact = 0.72 + 0.28 * Noise.smoothstep(0, 1.2, h);
     light(nx, ny, nz, gloss, contact, out);
@@ -131,7 +131,7 @@ final class VesselShader {
 
   private void rim(double x, double[] out) {
     double u = Noise.clamp((x - geo.cx) / Math.max(1e-6, geo.lipR), -1, 1);
-    surface.albedo(StrictMath.asin(u) * maxRadiusCm, geo.heightCm, alb);
+    surface.albedo(Noise.asin(u) * maxRadiusCm, geo.heightCm, alb);
     // The rim top faces up; glaze breaks thin and lighter on the edge.
     for (int c = 0; c < 3; c++) {
       alb[c] = Math.min(1, alb[c] * 1.12 + 0.02);
@@ -142,7 +142,7 @@ final class VesselShader {
   private void interior(double x, double y, double[] out) {
     double ex = Noise.clamp((x - geo.cx) / geo.innerR, -1, 1);
     double ey = Noise.clamp((y - geo.lipY) / Math.max(1e-6, geo.innerR * geo.tilt), -1, 1);
-    surface.interior(StrictMath.asin(ex) * maxRadiusCm, ey, alb);
+    surface.interior(Noise.asin(ex) * maxRadiusCm, ey, alb);
     // Far wall (top of the ellipse) faces the camera and the light; the near wall's inside is in its own shadow.
     double b = openness * (0.5 - 0.28 * ey);
     // The inner wall opposite the light is the lit one.

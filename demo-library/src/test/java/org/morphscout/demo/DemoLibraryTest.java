@@ -22,9 +22,9 @@ import org.junit.jupiter.api.io.TempDir;
 
 class DemoLibraryTest {
   private static final long SEED = 0x5EED_0004L;
-  /** Small library: 20 products (so one near-duplicate), the problem set, 6 shelf views. */
+  /** Small library: 12 products (so one near-duplicate), the problem set, 5 shelf views. */
   private static final DemoOptions OPTIONS =
-      DemoOptions.defaults().withSeed(SEED).withProductCount(20).withShelfViews(6).withThreads(2);
+      DemoOptions.defaults().withSeed(SEED).withProductCount(12).withShelfViews(5).withThreads(2);
 
   @TempDir
   static Path first;
@@ -57,7 +57,7 @@ class DemoLibraryTest {
     assertThat(rows.stream().map(ManifestRow::file).collect(Collectors.toSet())).isEqualTo(pictures);
     assertThat(rows).hasSize(pictures.size());
     assertThat(summary.pictures()).isEqualTo(pictures.size());
-    assertThat(summary.products()).isEqualTo(20);
+    assertThat(summary.products()).isEqualTo(12);
     for (ManifestRow r : rows) {
       byte[] bytes = Files.readAllBytes(first.resolve(r.file()));
       assertThat(r.file()).startsWith(r.problem().isEmpty() ? r.productLine() + "/" : "problems/");
@@ -137,7 +137,7 @@ class DemoLibraryTest {
   @Test
   void shelfViewsHaveAShuffledTrueOrderAndNeighboursLookAlike() throws IOException {
     List<ManifestRow> shelf = new ArrayList<>(rows.stream().filter(r -> r.shelfOrder() >= 0).toList());
-    assertThat(shelf).hasSize(6);
+    assertThat(shelf).hasSize(5);
     shelf.sort((a, b) -> Integer.compare(a.shelfOrder(), b.shelfOrder()));
     for (int i = 0; i < shelf.size(); i++) {
       assertThat(shelf.get(i).shelfOrder()).isEqualTo(i);
