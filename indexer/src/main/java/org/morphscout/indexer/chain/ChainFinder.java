@@ -31,6 +31,12 @@ public final class ChainFinder {
   private static final int ROUNDS_PER_ALTERNATIVE = 4;
   /** Relaxations allowed for the exact simple-chain bound (~0.1 s); beyond it the leg-by-leg heuristic runs. */
   private static final long SIMPLE_SEARCH_BUDGET = 30_000_000L;
+  /**
+   * Nodes the backward search for the A* bound may settle per leg. On local graphs the radius cut stops it much
+   * earlier; on small-world graphs (everything within a few steps) a full backward search would cost more than it
+   * saves, so the bound is left flat beyond this many nodes.
+   */
+  private static final int BOUND_BUDGET = 20_000;
 
   private final IndexedGraph g;
 
@@ -191,7 +197,7 @@ public final class ChainFinder {
           radius = PlainDistances.radiusFor(path[0], q.maxSteps());
         }
       }
-      d[leg] = plain.capped(radius);
+      d[leg] = plain.capped(radius, BOUND_BUDGET);
     }
     return d;
   }

@@ -45,7 +45,7 @@ class LayeredChainSearchTest {
       double[][] bound = new double[stops.length - 1][];
       double tail = 0;
       for (int s = stops.length - 2; s >= 0; s--) {
-        bound[s] = new PlainDistances(g, model, stops[s + 1]).capped(Double.POSITIVE_INFINITY);
+        bound[s] = new PlainDistances(g, model, stops[s + 1]).capped(Double.POSITIVE_INFINITY, Integer.MAX_VALUE);
         double[] withTail = bound[s].clone();
         for (int v = 0; v < n; v++) {
           withTail[v] += tail;
