@@ -29,6 +29,8 @@ public final class ChainFinder {
   private static final Logger LOG = LoggerFactory.getLogger(ChainFinder.class);
   /** Search rounds per wanted alternative before giving up on finding more diverse chains. */
   private static final int ROUNDS_PER_ALTERNATIVE = 4;
+  /** Most layered states per search (about 17 bytes each, so ~700 MB at the limit). */
+  private static final long MAX_STATES = 40_000_000L;
   /** Relaxations allowed for the exact simple-chain bound (~0.1 s); beyond it the leg-by-leg heuristic runs. */
   private static final long SIMPLE_SEARCH_BUDGET = 30_000_000L;
   /**
@@ -49,7 +51,7 @@ public final class ChainFinder {
    *
    * @param distanceToTarget the cost model's distance of any image to {@code query.to()}, used only to name the
    *     closest reachable image when no chain exists
-   * @throws MorphscoutException when an end, waypoint is not in the graph
+   * @throws MorphscoutException when an end or waypoint is not in the graph, or the search would be too large
    */
   public ChainResult find(ChainQuery query, DistanceToTarget distanceToTarget) {
     int n = g.size();
@@ -59,6 +61,11 @@ public final class ChainFinder {
       stops[i + 1] = indexOrThrow(query.via().get(i), "waypoint");
     }
     stops[stops.length - 1] = indexOrThrow(query.to(), "target");
+    long states = (long) (stops.length - 1) * n * (query.maxSteps() + 1);
+    if (states > MAX_STATES) {
+      throw new MorphscoutException("A chain search over " + n + " images with " + query.maxSteps() + " steps and "
+          + query.via().size() + " waypoints needs too much memory; lower the step limit or use fewer waypoints.");
+    }
     boolean[] blocked = new boolean[n];
     for (long id : query.avoid()) {
       int i = g.index(id);
