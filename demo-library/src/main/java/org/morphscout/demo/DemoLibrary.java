@@ -38,6 +38,11 @@ public final class DemoLibrary {
 
   private DemoLibrary() {}
 
+  /** Generates the default library ({@link DemoOptions#defaults()}) into {@code dir}. */
+  public static LibrarySummary generate(Path dir) throws IOException {
+    return generate(dir, DemoOptions.defaults());
+  }
+
   /** Generates the library into {@code dir} (created if missing). */
   public static LibrarySummary generate(Path dir, DemoOptions options) throws IOException {
     Objects.requireNonNull(dir, "dir");
