@@ -26,7 +26,7 @@ import picocli.CommandLine.Spec;
     synopsisSubcommandLabel = "<command>",
     subcommands = {
       CommandLine.HelpCommand.class,
-      //TODO DemoCommand.class,
+      DemoCommand.class,
       IndexCommand.class,
       StatusCommand.class,
       SimilarCommand.class,
