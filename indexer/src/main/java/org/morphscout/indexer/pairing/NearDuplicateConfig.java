@@ -6,7 +6,7 @@ package org.morphscout.indexer.pairing;
  *
  * @param minCosine smallest cosine of the appearance vectors, in [0, 1] (default 0.98; recompression and resizing
  *     keep learned embeddings within about 0.99, a different photo of the same object rarely exceeds 0.97)
- * @param maxShapeDistance largest Euclidean distance of the L2-normalised shape vectors, in [0, 2] (default 0.2, a shape cosine of 0.98: a light crop moves the outline a little)
+ * @param maxShapeDistance largest Euclidean distance of the L2-normalised shape vectors, in [0, 2] (default 0.16, a shape cosine of 0.987: a light crop moves the outline a little)
  * @param maxDeltaE largest CIEDE2000 difference of the foreground means (default 4.0: a light exposure or colour edit
  *     moves it by 2-3; about 1 is a just noticeable difference)
  * @param maxAspectGap largest relative difference of the image aspect ratios, in [0, 1] (default 0.02)
@@ -18,7 +18,7 @@ package org.morphscout.indexer.pairing;
 public record NearDuplicateConfig(double minCosine, double maxShapeDistance, double maxDeltaE, double maxAspectGap,
     double maxBackgroundDeltaE, double maxBackgroundStdGap) {
 
-  public static final NearDuplicateConfig DEFAULTS = new NearDuplicateConfig(0.98, 0.2, 4.0, 0.02, 4.0, 1.5);
+  public static final NearDuplicateConfig DEFAULTS = new NearDuplicateConfig(0.98, 0.16, 4.0, 0.02, 4.0, 1.5);
 
   public NearDuplicateConfig {
     if (!(minCosine >= 0 && minCosine <= 1)) {
