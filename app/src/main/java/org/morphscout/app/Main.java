@@ -39,5 +39,8 @@ public final class Main {
     System.setProperty("org.slf4j.simpleLogger.showThreadName", "false");
     System.setProperty("org.slf4j.simpleLogger.showShortLogName", "true");
     System.setProperty("org.slf4j.simpleLogger.levelInBrackets", "true");
+    // ONNX Runtime's Java package ships CPU and GPU providers; on a machine without CUDA, DJL warns at every start
+    // that the GPU provider is missing. Morphscout runs on the CPU by design, so that warning is noise.
+    System.setProperty("org.slf4j.simpleLogger.log.ai.djl.onnxruntime.engine.OrtEngine", "error");
   }
 }

@@ -18,10 +18,12 @@ import picocli.CommandLine.Spec;
     versionProvider = VersionProvider.class,
     header = "Find which images of your library morph well, and in what order, before you render.",
     description = {
-      "Indexes your own image library on the CPU, scores how morph-friendly pairs are, finds chains of similar real",
-      "images between two endpoints, orders sets into smooth walkthroughs, and previews and exports your choices.",
+      "Indexes your own image library on the CPU, scores how morph-friendly pairs are, finds chains of similar real "
+          + "images between two endpoints, orders sets into smooth walkthroughs, and previews and exports your "
+          + "choices.",
       "",
-      "The catalog folder is --catalog DIR, else $MORPHSCOUT_CATALOG, else ./morphscout-catalog.",
+      "The catalog folder is --catalog DIR, else $MORPHSCOUT_CATALOG, else ./morphscout-catalog. Start with "
+          + "'morphscout demo', or 'morphscout index <folder>' on your own pictures.",
     },
     synopsisSubcommandLabel = "<command>",
     subcommands = {

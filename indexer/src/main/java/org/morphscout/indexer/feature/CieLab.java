@@ -83,8 +83,13 @@ public final class CieLab {
     }
   }
 
+  /** Linear-light value of an 8-bit sRGB code (table lookup; only the low 8 bits of {@code code} are used). */
+  public static double linear(int code) {
+    return LINEAR[code & 0xFF];
+  }
+
   /** Linear RGB (each in [0, 1]) to Lab, written into {@code lab}. */
-  static void linearToLab(double r, double g, double b, double[] lab) {
+  public static void linearToLab(double r, double g, double b, double[] lab) {
     double x = RGB_TO_XYZ[0][0] * r + RGB_TO_XYZ[0][1] * g + RGB_TO_XYZ[0][2] * b;
     double y = RGB_TO_XYZ[1][0] * r + RGB_TO_XYZ[1][1] * g + RGB_TO_XYZ[1][2] * b;
     double z = RGB_TO_XYZ[2][0] * r + RGB_TO_XYZ[2][1] * g + RGB_TO_XYZ[2][2] * b;

@@ -2,6 +2,7 @@ package org.morphscout.indexer.silhouette;
 
 import java.awt.image.BufferedImage;
 import java.util.Objects;
+import org.morphscout.indexer.feature.CieLab;
 
 /**
  * The default silhouette extractor for photographs of an object in front of a background: it learns the background
@@ -148,15 +149,15 @@ public final class BorderModelSilhouettes implements SilhouetteExtractor {
         for (int x = 0; x < bigW; x++) {
           int p = argb[base + x];
           int c = colOf[x];
-          sr[c] += LabPixels.linear(p >> 16);
-          sg[c] += LabPixels.linear(p >> 8);
-          sb[c] += LabPixels.linear(p);
+          sr[c] += CieLab.linear(p >> 16);
+          sg[c] += CieLab.linear(p >> 8);
+          sb[c] += CieLab.linear(p);
           cnt[c]++;
         }
       }
       for (int x = 0; x < w; x++) {
         int n = Math.max(1, cnt[x]);
-        LabPixels.toLab(sr[x] / n, sg[x] / n, sb[x] / n, out);
+        CieLab.linearToLab(sr[x] / n, sg[x] / n, sb[x] / n, out);
         int i = y * w + x;
         l[i] = (float) out[0];
         a[i] = (float) out[1];

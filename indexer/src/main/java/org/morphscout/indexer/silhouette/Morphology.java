@@ -17,8 +17,6 @@ public final class Morphology {
     SQUARE
   }
 
-  private static final float INF = 1e20f;
-
   private Morphology() {}
 
   public static byte[] dilate(byte[] mask, int width, int height, Element element, int radius) {
@@ -84,75 +82,14 @@ public final class Morphology {
    * is none.
    */
   static float[] squaredDistance(byte[] mask, int width, int height, byte feature) {
-    float[] g = new float[mask.length];
-    for (int i = 0; i < g.length; i++) {
-      g[i] = (mask[i] != 0) == (feature != 0) ? 0f : INF;
-    }
-    int n = Math.max(width, height);
-    float[] f = new float[n];
-    float[] out = new float[n];
-    int[] v = new int[n];
-    float[] z = new float[n + 1];
-    for (int x = 0; x < width; x++) {
-      for (int y = 0; y < height; y++) {
-        f[y] = g[y * width + x];
-      }
-      transform1d(f, height, out, v, z);
-      for (int y = 0; y < height; y++) {
-        g[y * width + x] = out[y];
-      }
-    }
-    for (int y = 0; y < height; y++) {
-      System.arraycopy(g, y * width, f, 0, width);
-      transform1d(f, width, out, v, z);
-      System.arraycopy(out, 0, g, y * width, width);
-    }
-    return g;
+    return DistanceTransform.squared(mask, width, height, feature);
   }
+
 
   /** Felzenszwalb-Huttenlocher lower envelope of parabolas for one line of length {@code n}. */
-  private static void transform1d(float[] f, int n, float[] d, int[] v, float[] z) {
-    int k = 0;
-    int first = 0;
-    while (first < n && f[first] >= INF) {
-      first++;
-    }
-    if (first == n) {
-      for (int q = 0; q < n; q++) {
-        d[q] = INF;
-      }
-      return;
-    }
-    v[0] = first;
-    z[0] = Float.NEGATIVE_INFINITY;
-    z[1] = Float.POSITIVE_INFINITY;
-    for (int q = first + 1; q < n; q++) {
-      if (f[q] >= INF) {
-        continue; // infinite parabolas never form part of the envelope
-      }
-      float s = intersection(f, q, v[k]);
-      while (s <= z[k]) {
-        k--;
-        s = intersection(f, q, v[k]);
-      }
-      k++;
-      v[k] = q;
-      z[k] = s;
-      z[k + 1] = Float.POSITIVE_INFINITY;
-    }
-    k = 0;
-    for (int q = 0; q < n; q++) {
-      while (z[k + 1] < q) {
-        k++;
-      }
-      float dq = q - v[k];
-      d[q] = dq * dq + f[v[k]];
-    }
-  }
 
-  private static float intersection(float[] f, int q, int p) {
-    return ((f[q] + (float) q * q) - (f[p] + (float) p * p)) / (2f * q - 2f * p);
-  }
+
+
 
   /** Marks pixels whose (2r+1)-square window holds at least one pixel with value {@code feature}. */
   private static byte[] squareAny(byte[] mask, int width, int height, int r, byte feature) {
