@@ -89,6 +89,11 @@ public final class ChainsViewModel {
       message.set("Start and end are the same image; choose two different images.");
       return;
     }
+    if (minSteps.get() > maxSteps.get()) {
+      message.set("The fewest steps (" + minSteps.get() + ") cannot be more than the most steps (" + maxSteps.get()
+          + ").");
+      return;
+    }
     ChainRequest request;
     try {
       request = new ChainRequest(alternatives.get(), minSteps.get(), maxSteps.get(), shapeWeight.get(),
