@@ -38,7 +38,7 @@ import picocli.CommandLine.Spec;
       //TODO WalkCommand.class,
       //TODO PreviewCommand.class,
       //TODO ModelsCommand.class,
-      //TODO BrowseCommand.class,
+      BrowseCommand.class,
     })
 public final class MorphscoutCommand implements Callable<Integer> {
 

@@ -55,6 +55,11 @@ public final class Session {
     rowsById = m;
   }
 
+  /** Every row the library pane loaded, in no particular order. */
+  public java.util.Collection<ImageRow> rows() {
+    return java.util.Collections.unmodifiableCollection(rowsById.values());
+  }
+
   public Optional<ImageRow> row(long id) {
     return Optional.ofNullable(rowsById.get(id));
   }

@@ -1,0 +1,56 @@
+package org.morphscout.app.cli;
+
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import org.morphscout.app.gui.DisplayCheck;
+import org.morphscout.app.gui.MorphscoutApp;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout browse}: the desktop browser on the catalog. */
+@Command(
+    name = "browse",
+    mixinStandardHelpOptions = true,
+    header = "Open the desktop browser on the catalog.",
+    description = {
+      "Opens a window to look through the catalog: a thumbnail grid with filters and similarity search, an",
+      "inspector, chains between two images, pair suggestions to approve or reject (the same decisions the",
+      "decide and decisions commands use), walkthrough ordering, and indexing. Needs a display; press F1 in the",
+      "window for the keyboard shortcuts. When the catalog folder holds no catalog yet, the window says how to",
+      "make one.",
+    })
+final class BrowseCommand implements Callable<Integer> {
+  private static final Logger LOG = LoggerFactory.getLogger(BrowseCommand.class);
+
+  @ParentCommand MorphscoutCommand root;
+  @Spec CommandSpec spec;
+
+  /** The environment consulted for a display; replaced by tests. */
+  Map<String, String> env = System.getenv();
+
+  @Override
+  public Integer call() {
+    Optional<String> problem = DisplayCheck.problem(env, System.getProperty("os.name", ""),
+        System.getProperty("java.awt.headless"));
+    if (problem.isPresent()) {
+      spec.commandLine().getErr().println("browse: cannot open a window: " + problem.get() + ".");
+      return ExitCodes.ERROR;
+    }
+    Path catalog = root.catalogDir();
+    try {
+      MorphscoutApp.launch(catalog);
+      return ExitCodes.OK;
+    } catch (RuntimeException e) {
+      // JavaFX reports a missing or refusing display as an unchecked exception from its startup
+      LOG.debug("window startup failed", e);
+      spec.commandLine().getErr().println("browse: cannot open a window: " + e.getMessage());
+      return ExitCodes.ERROR;
+    }
+  }
+}
