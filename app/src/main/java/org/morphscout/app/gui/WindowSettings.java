@@ -10,19 +10,19 @@ package org.morphscout.app.gui;
  * @param height window height, at least 420 (default 820)
  * @param maximized whether the window was maximised
  * @param pane the pane shown last
- * @param inspectorDivider position of the divider between panes and inspector, in (0, 1) (default 0.74)
+ * @param inspectorDivider position of the divider between panes and inspector, in (0, 1) (default 0.76)
  */
 public record WindowSettings(String lastCatalog, double x, double y, double width, double height, boolean maximized,
     Pane pane, double inspectorDivider) {
   public static final WindowSettings DEFAULTS =
-      new WindowSettings("", Double.NaN, Double.NaN, 1280, 820, false, Pane.LIBRARY, 0.74);
+      new WindowSettings("", Double.NaN, Double.NaN, 1280, 820, false, Pane.LIBRARY, 0.76);
 
   public WindowSettings {
     lastCatalog = lastCatalog == null ? "" : lastCatalog;
     width = Double.isFinite(width) ? Math.max(640, width) : 1280;
     height = Double.isFinite(height) ? Math.max(420, height) : 820;
     pane = pane == null ? Pane.LIBRARY : pane;
-    inspectorDivider = inspectorDivider > 0.2 && inspectorDivider < 0.95 ? inspectorDivider : 0.74;
+    inspectorDivider = inspectorDivider > 0.2 && inspectorDivider < 0.95 ? inspectorDivider : 0.76;
   }
 
   public WindowSettings withLastCatalog(String dir) {

@@ -307,7 +307,7 @@ public final class ChainsView extends BorderPane {
         cost.getStyleClass().add("step-largest");
       }
       StringBuilder tip = new StringBuilder("Step size " + String.format(Locale.ROOT, "%.3f", s.cost()));
-      VBox box = new VBox(2, new Label("→"), cost);
+      VBox box = new VBox(2, cost);
       for (Map.Entry<String, Double> e : s.components().entrySet()) {
         tip.append('\n').append(e.getKey()).append(": ").append(String.format(Locale.ROOT, "%.3f", e.getValue()));
         Label part = new Label(String.format(Locale.ROOT, "%s %.2f", abbreviate(e.getKey()), e.getValue()));

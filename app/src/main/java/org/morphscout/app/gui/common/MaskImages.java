@@ -15,13 +15,24 @@ public final class MaskImages {
 
   private MaskImages() {}
 
-  /** The object pixels in {@code tint}, the rest transparent. */
+  /**
+   * The object in a translucent {@code tint} with its outline (object pixels with a background 4-neighbour, or on
+   * the border) opaque, the rest transparent: the outline stays visible on any image.
+   */
   public static WritableImage overlay(Mask m, Color tint) {
     WritableImage img = new WritableImage(m.width(), m.height());
     PixelWriter w = img.getPixelWriter();
+    Color fill = Color.color(tint.getRed(), tint.getGreen(), tint.getBlue(), 0.35);
+    Color edge = Color.color(tint.getRed(), tint.getGreen(), tint.getBlue(), 1.0);
     for (int y = 0; y < m.height(); y++) {
       for (int x = 0; x < m.width(); x++) {
-        w.setColor(x, y, m.get(x, y) ? tint : Color.TRANSPARENT);
+        if (!m.get(x, y)) {
+          w.setColor(x, y, Color.TRANSPARENT);
+          continue;
+        }
+        boolean outline = x == 0 || y == 0 || x == m.width() - 1 || y == m.height() - 1 || !m.get(x - 1, y)
+            || !m.get(x + 1, y) || !m.get(x, y - 1) || !m.get(x, y + 1);
+        w.setColor(x, y, outline ? edge : fill);
       }
     }
     return img;

@@ -51,9 +51,17 @@ public final class IndexingView extends BorderPane {
     Label summary = new Label();
     summary.getStyleClass().add("search-title");
     summary.textProperty().bind(vm.summaryProperty());
+    for (Label l : java.util.List.of(phase, item, summary)) {
+      l.visibleProperty().bind(l.textProperty().isNotEmpty());
+      l.managedProperty().bind(l.visibleProperty());
+    }
+    Label explain = new Label("Adds a folder (and its subfolders) to the catalog and analyses every image in it. "
+        + "Finished images are kept when you cancel; files that cannot be read are listed below with the reason.");
+    explain.setWrapText(true);
+    explain.getStyleClass().add("summary");
     HBox controls = new HBox(10, add, cancel, bar);
     controls.setAlignment(Pos.CENTER_LEFT);
-    VBox top = new VBox(8, controls, phase, item, summary, MessageLine.error(vm.messageProperty()));
+    VBox top = new VBox(8, explain, controls, phase, item, summary, MessageLine.error(vm.messageProperty()));
     top.getStyleClass().add("toolbar");
     top.setPadding(new Insets(12));
     setTop(top);

@@ -60,7 +60,7 @@ public final class InspectorView extends ScrollPane {
     vm.fileProperty().addListener((o, a, f) -> picture.setImage(f == null ? null
         : new Image(f.toUri().toString(), IMAGE * 2, IMAGE * 2, true, true, true)));
     vm.maskProperty().addListener((o, a, m) -> silhouette.setImage(m == null ? null
-        : MaskImages.overlay(m, Color.web("#2f7fb8", 0.55))));
+        : MaskImages.overlay(m, Color.web("#0e8fa3"))));
 
     ToggleButton overlay = new ToggleButton("Silhouette");
     overlay.setId("overlay-toggle");

@@ -85,7 +85,7 @@ public final class LibraryView extends BorderPane {
     setCenter(grid);
   }
 
-  private HBox toolbar() {
+  private VBox toolbar() {
     ComboBox<ImageStore.Root> root = new ComboBox<>();
     root.setId("root-filter");
     ObservableList<ImageStore.Root> items = FXCollections.observableArrayList();
@@ -146,10 +146,16 @@ public final class LibraryView extends BorderPane {
     summary.textProperty().bind(vm.summaryProperty());
     Region spacer = new Region();
     HBox.setHgrow(spacer, Priority.ALWAYS);
-    HBox bar = new HBox(10, root, folder, new Label("Show only:"), flags, spacer, new Label("Sort by"), sort, busy,
-        summary);
+    HBox top = new HBox(10, root, folder, new Label("Sort by"), sort, spacer, busy, summary);
+    top.setAlignment(Pos.CENTER_LEFT);
+    Label only = new Label("Show only:");
+    only.getStyleClass().add("summary");
+    flags.getChildren().add(0, only);
+    VBox bar = new VBox(8, top, flags);
     bar.getStyleClass().add("toolbar");
-    bar.setAlignment(Pos.CENTER_LEFT);
+    for (javafx.scene.Node n : List.of(summary, sort, only)) {
+      ((Region) n).setMinWidth(Region.USE_PREF_SIZE);
+    }
     return bar;
   }
 

@@ -76,7 +76,7 @@ public final class PairsView extends BorderPane {
     });
 
     SplitPane split = new SplitPane(table, detail());
-    split.setDividerPositions(0.64);
+    split.setDividerPositions(0.68);
     setCenter(split);
   }
 
@@ -129,12 +129,15 @@ public final class PairsView extends BorderPane {
     componentColumns.clear();
     componentColumns.addAll(keys);
     List<TableColumn<PairRow, ?>> cols = new ArrayList<>();
-    cols.add(text("First", r -> r.nameA(), 130));
-    cols.add(text("Second", r -> r.nameB(), 130));
+    cols.add(text("First", r -> r.nameA(), 118));
+    cols.add(text("Second", r -> r.nameB(), 118));
     TableColumn<PairRow, Number> score = number("Score", r -> r.suggestion().score());
     cols.add(score);
     for (String k : keys) {
-      cols.add(number(k, r -> r.suggestion().components().getOrDefault(k, Double.NaN)));
+      TableColumn<PairRow, Number> col = number(header(k), r -> r.suggestion().components().getOrDefault(k,
+          Double.NaN));
+      col.setUserData(k);
+      cols.add(col);
     }
     TableColumn<PairRow, PairVerdict> verdict = new TableColumn<>("Verdict");
     verdict.setCellValueFactory(c -> new ReadOnlyObjectWrapper<>(c.getValue().suggestion().verdict()));
@@ -149,11 +152,11 @@ public final class PairsView extends BorderPane {
         }
       }
     });
-    verdict.setPrefWidth(70);
+    verdict.setPrefWidth(62);
     cols.add(verdict);
     TableColumn<PairRow, String> decision = new TableColumn<>("Decision");
     decision.setCellValueFactory(c -> c.getValue().decisionProperty());
-    decision.setPrefWidth(80);
+    decision.setPrefWidth(78);
     cols.add(decision);
     TableColumn<PairRow, String> reasons = text("Reasons", r -> String.join("; ", r.suggestion().reasons()), 260);
     cols.add(reasons);
@@ -181,9 +184,20 @@ public final class PairsView extends BorderPane {
             : String.format(Locale.ROOT, Math.abs(v.doubleValue()) >= 10 ? "%.1f" : "%.3f", v.doubleValue()));
       }
     });
-    c.setPrefWidth(76);
+    c.setPrefWidth(title.length() > 6 ? 80 : 60);
+    c.setMinWidth(50);
     c.getStyleClass().add("numeric");
     return c;
+  }
+
+  /** Short column headers for the components shown as numbers; the full name goes in the tooltip. */
+  static String header(String component) {
+    return switch (component) {
+      case "appearance" -> "Look";
+      case "shape" -> "Shape";
+      case "colour" -> "ΔE";
+      default -> component.length() > 10 ? component.substring(0, 10) : component;
+    };
   }
 
   private VBox detail() {

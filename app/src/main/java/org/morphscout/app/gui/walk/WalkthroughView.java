@@ -67,7 +67,7 @@ public final class WalkthroughView extends BorderPane {
     setCenter(strip);
   }
 
-  private HBox toolbar() {
+  private VBox toolbar() {
     Button selection = new Button("Use Library selection");
     selection.setId("walk-use-selection");
     selection.setOnAction(e -> vm.useSelection());
@@ -114,9 +114,17 @@ public final class WalkthroughView extends BorderPane {
     summary.textProperty().bind(vm.summaryProperty());
     Region spacer = new Region();
     HBox.setHgrow(spacer, Priority.ALWAYS);
-    HBox bar = new HBox(10, selection, folder, order, left, right, remove, spacer, busy, summary, export);
+    HBox buttons = new HBox(10, selection, folder, order, left, right, remove, spacer, export);
+    buttons.setAlignment(Pos.CENTER_LEFT);
+    for (javafx.scene.Node n : buttons.getChildren()) {
+      if (n instanceof Button b) {
+        b.setMinWidth(Region.USE_PREF_SIZE);
+      }
+    }
+    HBox status = new HBox(8, busy, summary);
+    status.setAlignment(Pos.CENTER_LEFT);
+    VBox bar = new VBox(6, buttons, status);
     bar.getStyleClass().add("toolbar");
-    bar.setAlignment(Pos.CENTER_LEFT);
     return bar;
   }
 
