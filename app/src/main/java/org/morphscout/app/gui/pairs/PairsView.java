@@ -55,7 +55,7 @@ public final class PairsView extends BorderPane {
     sorted.comparatorProperty().bind(table.comparatorProperty());
     table.setItems(sorted);
     table.setPlaceholder(new Label("Suggest pairs for the whole library, or pick an image and press P."));
-    table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
+    table.setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
     table.setRowFactory(t -> new TableRow<>() {
       @Override
       protected void updateItem(PairRow r, boolean empty) {
@@ -76,7 +76,7 @@ public final class PairsView extends BorderPane {
     });
 
     SplitPane split = new SplitPane(table, detail());
-    split.setDividerPositions(0.68);
+    split.setDividerPositions(0.73);
     setCenter(split);
   }
 
@@ -129,8 +129,8 @@ public final class PairsView extends BorderPane {
     componentColumns.clear();
     componentColumns.addAll(keys);
     List<TableColumn<PairRow, ?>> cols = new ArrayList<>();
-    cols.add(text("First", r -> r.nameA(), 118));
-    cols.add(text("Second", r -> r.nameB(), 118));
+    cols.add(text("First", r -> r.nameA(), 104));
+    cols.add(text("Second", r -> r.nameB(), 104));
     TableColumn<PairRow, Number> score = number("Score", r -> r.suggestion().score());
     cols.add(score);
     for (String k : keys) {
@@ -158,7 +158,7 @@ public final class PairsView extends BorderPane {
     decision.setCellValueFactory(c -> c.getValue().decisionProperty());
     decision.setPrefWidth(78);
     cols.add(decision);
-    TableColumn<PairRow, String> reasons = text("Reasons", r -> String.join("; ", r.suggestion().reasons()), 260);
+    TableColumn<PairRow, String> reasons = text("Reasons", r -> String.join("; ", r.suggestion().reasons()), 300);
     cols.add(reasons);
     table.getColumns().setAll(cols);
     table.getSortOrder().setAll(score);
@@ -184,8 +184,8 @@ public final class PairsView extends BorderPane {
             : String.format(Locale.ROOT, Math.abs(v.doubleValue()) >= 10 ? "%.1f" : "%.3f", v.doubleValue()));
       }
     });
-    c.setPrefWidth(title.length() > 6 ? 80 : 60);
-    c.setMinWidth(50);
+    c.setPrefWidth(title.length() > 6 ? 80 : 56);
+    c.setMinWidth(48);
     c.getStyleClass().add("numeric");
     return c;
   }
