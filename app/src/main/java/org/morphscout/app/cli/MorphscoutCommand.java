@@ -27,9 +27,9 @@ import picocli.CommandLine.Spec;
     subcommands = {
       CommandLine.HelpCommand.class,
       //TODO DemoCommand.class,
-      //TODO IndexCommand.class,
+      IndexCommand.class,
       StatusCommand.class,
-      //TODO SimilarCommand.class,
+      SimilarCommand.class,
       //TODO PairsCommand.class,
       //TODO ScreenCommand.class,
       DecideCommand.class,

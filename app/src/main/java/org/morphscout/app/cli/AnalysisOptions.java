@@ -1,0 +1,73 @@
+package org.morphscout.app.cli;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.feature.ModelDescription;
+import org.morphscout.indexer.ingest.DecodeOptions;
+import org.morphscout.indexer.library.AnalysisSetup;
+import picocli.CommandLine.Option;
+
+/** Options that choose how images are analysed: shared by index and the commands that analyse files on the fly. */
+final class AnalysisOptions {
+  @Option(names = "--model", paramLabel = "<file.onnx|file.json>",
+      description = "Your own ONNX image model (or a JSON model description) instead of the built-in descriptor. "
+          + "Changing the model re-analyses the library; vectors of two models are never mixed.")
+  Path model;
+
+  @Option(names = "--model-input", paramLabel = "<w>x<h>", description = "Input size of --model (default 224x224).")
+  String modelInput;
+
+  @Option(names = "--model-output", paramLabel = "<name>", description = "Output tensor of --model (default: first).")
+  String modelOutput;
+
+  @Option(names = "--model-pool", negatable = true, defaultValue = "true", fallbackValue = "true",
+      description = "Average-pool a 4-D output of --model over its spatial axes (default); --no-model-pool "
+          + "flattens it.")
+  boolean modelPool = true;
+
+  @Option(names = "--silhouettes", paramLabel = "default|learned", defaultValue = "default",
+      description = "Silhouette extractor: default (alpha cut-outs, else a background model from the border) or "
+          + "learned (the optional salient-object model; see 'models add-salient'). Default: ${DEFAULT-VALUE}.")
+  AnalysisSetup.SilhouetteMode silhouettes;
+
+  @Option(names = "--max-megapixels", paramLabel = "<mp>", defaultValue = "250",
+      description = "Refuse images larger than this before decoding (default: ${DEFAULT-VALUE}).")
+  double maxMegapixels;
+
+  AnalysisSetup setup() {
+    AnalysisSetup s = AnalysisSetup.defaults()
+        .withDecode(DecodeOptions.defaults().withMaxPixels((long) (maxMegapixels * 1_000_000)))
+        .withSilhouettes(silhouettes);
+    if (model != null) {
+      s = s.withModel(description());
+    }
+    return s;
+  }
+
+  private ModelDescription description() {
+    try {
+      if (model.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".json")) {
+        return ModelDescription.fromJson(model);
+      }
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+    ModelDescription d = ModelDescription.defaults(model);
+    int w = d.inputWidth();
+    int h = d.inputHeight();
+    if (modelInput != null) {
+      String[] wh = modelInput.toLowerCase(java.util.Locale.ROOT).split("x");
+      try {
+        w = Integer.parseInt(wh[0].trim());
+        h = Integer.parseInt(wh[1].trim());
+      } catch (RuntimeException e) {
+        throw new MorphscoutException("--model-input takes <w>x<h>, for example 224x224; got " + modelInput);
+      }
+    }
+    d = new ModelDescription(model, w, h, d.channelOrder(), d.mean(), d.std(), d.scale(), d.layout(),
+        modelOutput == null ? d.outputName() : modelOutput, modelPool);
+    return d;
+  }
+}

@@ -1,0 +1,155 @@
+package org.morphscout.app.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import org.morphscout.indexer.library.IndexOptions;
+import org.morphscout.indexer.library.IndexReport;
+import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.LibraryIndexer;
+import org.morphscout.indexer.progress.CancellationToken;
+import org.morphscout.indexer.progress.ProgressListener;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout index PATH...}: add folders to the catalog and analyse new and changed images. */
+@Command(
+    name = "index",
+    mixinStandardHelpOptions = true,
+    header = "Add folders to the catalog and analyse new and changed images (incremental).",
+    description = {
+      "Registers each folder as a library root and scans it recursively. Unchanged files are skipped; changed files "
+          + "are analysed again; a file moved or renamed inside the roots keeps its identity and your decisions; "
+          + "deleted files are marked missing, never dropped. Reads JPEG, PNG, TIFF, BMP, GIF (first frame) and WebP; "
+          + "applies EXIF orientation and converts colour profiles to sRGB. Files that cannot be read are listed "
+          + "with the reason and the run goes on. Ctrl-C stops cleanly; the next run resumes.",
+    })
+final class IndexCommand implements Callable<Integer> {
+  @ParentCommand MorphscoutCommand root;
+  @Spec CommandSpec spec;
+  @Mixin AnalysisOptions analysis;
+
+  @Parameters(arity = "0..*", paramLabel = "<folder>", description = "Library folders to add and scan (default: the "
+      + "catalog's known roots).")
+  List<Path> folders = new ArrayList<>();
+
+  @Option(names = "--json", description = "Write the summary as JSON to stdout (no progress bar).")
+  boolean json;
+
+  @Option(names = "--threads", paramLabel = "<n>", description = "Worker threads (default: all cores).")
+  Integer threads;
+
+  @Option(names = "--follow-links", description = "Also follow symbolic links that lead out of the roots.")
+  boolean followLinks;
+
+  @Option(names = "--rebuild-vectors", description = "Rebuild the vector index from the vectors in the catalog.")
+  boolean rebuildVectors;
+
+  @Option(names = "--time-limit", paramLabel = "<seconds>", defaultValue = "60",
+      description = "A file taking longer than this to read and analyse fails (default: ${DEFAULT-VALUE}).")
+  int timeLimit;
+
+  @Option(names = "--neighbours", paramLabel = "<k>", defaultValue = "24",
+      description = "Neighbours kept per image in the chain graph (default: ${DEFAULT-VALUE}).")
+  int neighbours;
+
+  @Override
+  public Integer call() throws Exception {
+    PrintWriter out = spec.commandLine().getOut();
+    IndexOptions options = IndexOptions.defaults()
+        .withFollowLinks(followLinks)
+        .withRebuildVectors(rebuildVectors)
+        .withPerFileTimeLimit(Duration.ofSeconds(timeLimit))
+        .withNeighbours(neighbours);
+    if (threads != null) {
+      options = options.withThreads(threads);
+    }
+    try (Library library = Library.open(root.catalogDir())) {
+      List<Path> roots = new ArrayList<>(folders);
+      if (roots.isEmpty()) {
+        library.images().roots().forEach(r -> roots.add(Path.of(r.path())));
+        if (roots.isEmpty()) {
+          spec.commandLine().getErr().println("index: name at least one folder to index (the catalog has no roots "
+              + "yet)");
+          return ExitCodes.USAGE;
+        }
+      }
+      IndexReport report = run(library, analysis.setup(), options, roots, TerminalProgress.forTerminal(json));
+      print(out, report);
+      if (report.cancelled()) {
+        return ExitCodes.CANCELLED;
+      }
+      return report.failed() > 0 ? ExitCodes.FINISHED_WITH_FAILURES : ExitCodes.OK;
+    }
+  }
+
+  /** Runs the indexer, turning Ctrl-C into a clean cancellation that keeps finished work. */
+  static IndexReport run(Library library, org.morphscout.indexer.library.AnalysisSetup setup, IndexOptions options,
+      List<Path> roots, ProgressListener progress) throws java.io.IOException {
+    CancellationToken cancel = new CancellationToken();
+    CountDownLatch stopped = new CountDownLatch(1);
+    Thread hook = new Thread(() -> {
+      cancel.cancel();
+      try {
+        stopped.await(60, TimeUnit.SECONDS);
+      } catch (InterruptedException e) {
+        Thread.currentThread().interrupt();
+      }
+    }, "morphscout-ctrl-c");
+    Runtime.getRuntime().addShutdownHook(hook);
+    try {
+      return new LibraryIndexer(library, setup, options).index(roots, progress, cancel);
+    } finally {
+      try {
+        Runtime.getRuntime().removeShutdownHook(hook);
+      } catch (IllegalStateException shuttingDown) {
+        // Ctrl-C: the hook is running and waits for us.
+      }
+      stopped.countDown();
+    }
+  }
+
+  private void print(PrintWriter out, IndexReport r) {
+    if (json) {
+      Map<String, Object> doc = new LinkedHashMap<>();
+      doc.put("indexed", r.indexed());
+      doc.put("unchanged", r.unchanged());
+      doc.put("failed", r.failed());
+      List<Map<String, String>> failures = new ArrayList<>();
+      r.failures().forEach(f -> failures.add(Map.of("path", f.path(), "reason", f.reason())));
+      doc.put("failures", failures);
+      doc.put("moved", r.moved());
+      doc.put("missing", r.missing());
+      doc.put("vectorsRestored", r.vectorsRestored());
+      doc.put("cancelled", r.cancelled());
+      doc.put("model", r.modelId());
+      doc.put("seconds", r.elapsed().toMillis() / 1000.0);
+      JsonOut.write(out, doc);
+      return;
+    }
+    out.printf("%s %d indexed, %d unchanged, %d moved, %d missing, %d failed in %s s%n",
+        r.cancelled() ? "cancelled after" : "done:", r.indexed(), r.unchanged(), r.moved(), r.missing(), r.failed(),
+        Text.num(r.elapsed().toMillis() / 1000.0, 1));
+    if (r.vectorsRestored() > 0) {
+      out.printf("vector index: %d images restored from the catalog%n", r.vectorsRestored());
+    }
+    if (!r.failures().isEmpty()) {
+      out.println("failures:");
+      for (IndexReport.FileFailure f : r.failures()) {
+        out.printf("  %s%n    %s%n", f.path(), f.reason());
+      }
+    }
+  }
+}

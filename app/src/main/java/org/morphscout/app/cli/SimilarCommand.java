@@ -1,0 +1,82 @@
+package org.morphscout.app.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.QueryContext;
+import org.morphscout.indexer.library.SimilarityService;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout similar IMAGE}: nearest images by appearance, shape or both. */
+@Command(
+    name = "similar",
+    mixinStandardHelpOptions = true,
+    header = "List the catalog images most similar to an image, by appearance, by shape, or both.",
+    description = "IMAGE may be a catalog image or any image file (analysed on the fly with the catalog's model). "
+        + "Distance is 1 - cosine similarity (0 = the same, 1 = unrelated); the query itself is left out.")
+final class SimilarCommand implements Callable<Integer> {
+  @ParentCommand MorphscoutCommand root;
+  @Spec CommandSpec spec;
+  @Mixin AnalysisOptions analysis;
+
+  @Parameters(index = "0", paramLabel = "<image>", description = "The query image.")
+  String image;
+
+  @Option(names = "-k", paramLabel = "<n>", defaultValue = "10", description = "How many (default: ${DEFAULT-VALUE}).")
+  int k;
+
+  @Option(names = "--by", paramLabel = "appearance|shape|both", defaultValue = "appearance",
+      description = "What similar means (default: ${DEFAULT-VALUE}).")
+  SimilarityService.By by;
+
+  @Option(names = "--json", description = "Write JSON to stdout.")
+  boolean json;
+
+  @Override
+  public Integer call() throws Exception {
+    if (k < 1) {
+      throw new picocli.CommandLine.ParameterException(spec.commandLine(), "-k must be at least 1");
+    }
+    PrintWriter out = spec.commandLine().getOut();
+    try (Library library = Library.openExisting(root.catalogDir());
+        QueryContext context = new QueryContext(library, analysis.setup())) {
+      ImageAnalysis query = context.resolve(image);
+      List<SimilarityService.Hit> hits = new SimilarityService(context).similar(query, k, by);
+      if (json) {
+        List<Map<String, Object>> results = new ArrayList<>();
+        for (SimilarityService.Hit h : hits) {
+          Map<String, Object> r = new LinkedHashMap<>();
+          r.put("path", h.path());
+          r.put("distance", round(h.distance()));
+          results.add(r);
+        }
+        Map<String, Object> doc = new LinkedHashMap<>();
+        doc.put("query", query.path());
+        doc.put("by", by.name().toLowerCase(java.util.Locale.ROOT));
+        doc.put("results", results);
+        JsonOut.write(out, doc);
+      } else {
+        out.printf("nearest to %s by %s:%n", query.path(), by.name().toLowerCase(java.util.Locale.ROOT));
+        for (SimilarityService.Hit h : hits) {
+          out.printf("  %s  %s%n", Text.num(h.distance(), 3), h.path());
+        }
+      }
+      return ExitCodes.OK;
+    }
+  }
+
+  static double round(double v) {
+    return Math.round(v * 10000) / 10000.0;
+  }
+}

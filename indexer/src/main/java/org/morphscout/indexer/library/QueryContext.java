@@ -1,0 +1,132 @@
+package org.morphscout.indexer.library;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Optional;
+import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.analysis.ImageAnalyzer;
+import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.ingest.ImageReadException;
+import org.morphscout.indexer.vector.LuceneIndexOptions;
+import org.morphscout.indexer.vector.LuceneVectorIndex;
+import org.morphscout.indexer.vector.VectorIndex;
+
+/**
+ * What query services share: the library, a read-only view of the vector index (so queries work while another process
+ * indexes), a cache of stored analyses, and an analyser for images outside the catalog, created on first need with the
+ * catalog's own appearance model. Thread-safe. Close it when done.
+ */
+public final class QueryContext implements AutoCloseable {
+  private final Library library;
+  private final AnalysisSetup setup;
+  private final AnalysisCache cache;
+  private LuceneVectorIndex index;
+  private ImageAnalyzer analyzer;
+
+  public QueryContext(Library library, AnalysisSetup setup) {
+    this.library = library;
+    this.setup = setup;
+    this.cache = new AnalysisCache(library, 20_000);
+  }
+
+  public Library library() {
+    return library;
+  }
+
+  public AnalysisCache cache() {
+    return cache;
+  }
+
+  /** The vector index as last committed; reopened to see newer commits. */
+  public synchronized VectorIndex index() throws IOException {
+    if (index == null) {
+      if (!Files.isDirectory(library.catalog().vectorDir())) {
+        throw new MorphscoutException("the catalog " + library.catalog().dir() + " has no vector index yet: run "
+            + "morphscout index <folder> first");
+      }
+      index = LuceneVectorIndex.openReadOnly(library.catalog().vectorDir(), LuceneIndexOptions.defaults());
+    } else {
+      index.refresh();
+    }
+    return index;
+  }
+
+  /** The catalog's active appearance model. */
+  public String modelId() {
+    return LibrarySettings.activeModel(library.features()).orElseThrow(() -> new MorphscoutException(
+        "the catalog " + library.catalog().dir() + " holds no analysed images yet: run morphscout index first"));
+  }
+
+  /**
+   * The analysis of an image named on the command line or picked in the browser: the stored one when the file is a
+   * ready catalog image, else computed on the fly from the file.
+   *
+   * @throws MorphscoutException naming the path when the file is neither in the catalog nor readable
+   */
+  public ImageAnalysis resolve(String pathArgument) {
+    Path path = Path.of(pathArgument).toAbsolutePath().normalize();
+    Optional<ImageRow> row = library.images().byPath(path.toString());
+    if (row.isPresent() && row.get().status() == ImageStatus.READY) {
+      Optional<ImageAnalysis> stored = cache.get(row.get().id());
+      if (stored.isPresent() && stored.get().modelId().equals(modelId())) {
+        return stored.get();
+      }
+    }
+    if (!Files.isRegularFile(path)) {
+      throw new MorphscoutException("image not found: " + path);
+    }
+    try {
+      ImageAnalysis a = analyzer().analyze(path);
+      return row.isPresent() ? withId(a, row.get().id()) : a;
+    } catch (ImageReadException e) {
+      throw new MorphscoutException(path + ": " + e.reason(), e);
+    } catch (IOException e) {
+      throw new UncheckedIOException(e);
+    }
+  }
+
+  private static ImageAnalysis withId(ImageAnalysis a, long id) {
+    return new ImageAnalysis(id, a.path(), a.width(), a.height(), a.format(), a.appearance(), a.modelId(),
+        a.silhouette(), a.shape(), a.colour(), a.contentHash());
+  }
+
+  /** The id of a catalog image with the same bytes as {@code a}, when there is one (to leave the query out). */
+  public Optional<Long> sameContent(ImageAnalysis a) {
+    if (a.id() >= 0) {
+      return Optional.of(a.id());
+    }
+    if (a.contentHash().isEmpty()) {
+      return Optional.empty();
+    }
+    return library.images().byHash(a.contentHash()).stream().map(ImageRow::id).findFirst();
+  }
+
+  /** An analyser with the catalog's model, for images outside it. */
+  public synchronized ImageAnalyzer analyzer() throws IOException {
+    if (analyzer == null) {
+      analyzer = AnalyzerFactory.create(library, setup);
+      if (!analyzer.embedder().modelId().equals(modelId())) {
+        String made = analyzer.embedder().modelId();
+        analyzer.embedder().close();
+        analyzer = null;
+        throw new MorphscoutException("the catalog's vectors come from model " + modelId() + ", but this command "
+            + "would analyse with " + made + ": give the same --model options the catalog was indexed with");
+      }
+    }
+    return analyzer;
+  }
+
+  @Override
+  public synchronized void close() throws IOException {
+    if (analyzer != null) {
+      analyzer.embedder().close();
+    }
+    if (index != null) {
+      index.close();
+    }
+  }
+}

@@ -1,0 +1,155 @@
+package org.morphscout.indexer.library;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.catalog.ImageStore;
+import org.morphscout.indexer.ingest.ContentHash;
+import org.morphscout.indexer.ingest.FoundFile;
+
+/**
+ * Compares what a scan found with what the catalog holds and updates the catalog in one transaction: new files are
+ * added as pending, changed files set back to pending, moved files (same content hash, old path gone) keep their
+ * identity, and files no longer found are marked missing. Unchanged files (same size and mtime, or same hash) are left
+ * alone.
+ */
+final class ScanReconciler {
+  private final Library library;
+
+  ScanReconciler(Library library) {
+    this.library = library;
+  }
+
+  /** The outcome: images to analyse, and counts. */
+  record Plan(List<ImageRow> toAnalyse, int unchanged, int moved, List<Long> nowMissing, List<Long> changedReady) {}
+
+  /**
+   * @param found per root id, the files found under it
+   * @param hashFailures receives files whose hash could not be computed (path, reason)
+   */
+  Plan reconcile(Map<Long, List<FoundFile>> found, Map<Path, String> hashFailures) throws IOException {
+    ImageStore images = library.images();
+    Set<String> foundPaths = new HashSet<>();
+    found.values().forEach(list -> list.forEach(f -> foundPaths.add(key(f.path()))));
+
+    // Rows that were under a scanned root but are not there any more, or were missing already: move sources.
+    Map<String, List<ImageRow>> vanishedByHash = new HashMap<>();
+    List<ImageRow> vanished = new ArrayList<>();
+    for (long rootId : found.keySet()) {
+      for (ImageRow row : images.underRoot(rootId)) {
+        if (!foundPaths.contains(row.path())) {
+          vanished.add(row);
+        }
+      }
+    }
+    for (ImageRow row : images.withStatus(ImageStatus.MISSING)) {
+      if (!foundPaths.contains(row.path()) && vanished.stream().noneMatch(v -> v.id() == row.id())) {
+        vanished.add(row);
+      }
+    }
+    for (ImageRow row : vanished) {
+      if (row.contentHash() != null) {
+        vanishedByHash.computeIfAbsent(row.contentHash(), h -> new ArrayList<>()).add(row);
+      }
+    }
+
+    // Decide per found file (hashing outside the transaction: it reads files).
+    List<Runnable> writes = new ArrayList<>();
+    List<Long> pendingIds = new ArrayList<>();
+    List<Long> changedReady = new ArrayList<>();
+    Set<Long> reused = new HashSet<>();
+    int unchanged = 0;
+    int moved = 0;
+    Map<String, Object[]> inserts = new LinkedHashMap<>();
+    for (Map.Entry<Long, List<FoundFile>> e : found.entrySet()) {
+      long rootId = e.getKey();
+      for (FoundFile f : e.getValue()) {
+        String path = key(f.path());
+        long mtime = f.mtime().toEpochMilli();
+        ImageRow row = images.byPath(path).orElse(null);
+        if (row != null && row.status() != ImageStatus.MISSING && row.size() == f.size() && row.mtimeMs() == mtime
+            && row.status() != ImageStatus.PENDING) {
+          unchanged++;
+          continue;
+        }
+        String hash;
+        try {
+          hash = ContentHash.sha256Hex(f.path());
+        } catch (IOException ex) {
+          hashFailures.put(f.path(), "cannot read the file: " + ex.getMessage());
+          continue;
+        }
+        if (row != null) {
+          boolean same = hash.equals(row.contentHash()) && row.status() != ImageStatus.PENDING;
+          ImageStatus status = same && row.status() != ImageStatus.MISSING ? row.status()
+              : same ? ImageStatus.READY : ImageStatus.PENDING;
+          if (status == ImageStatus.READY && !library.features().load(row).isPresent()) {
+            status = ImageStatus.PENDING;
+          }
+          ImageStatus next = status;
+          writes.add(() -> images.updateFile(row.id(), rootId, path, f.size(), mtime, hash, next));
+          if (next == ImageStatus.PENDING) {
+            pendingIds.add(row.id());
+            if (row.status() == ImageStatus.READY) {
+              changedReady.add(row.id());
+            }
+          } else {
+            unchanged++;
+          }
+          continue;
+        }
+        List<ImageRow> sources = vanishedByHash.getOrDefault(hash, List.of());
+        ImageRow source = sources.stream().filter(s -> !reused.contains(s.id())).findFirst().orElse(null);
+        if (source != null) {
+          reused.add(source.id());
+          boolean hasFeatures = library.features().load(source).isPresent();
+          ImageStatus next = hasFeatures ? ImageStatus.READY : ImageStatus.PENDING;
+          writes.add(() -> images.updateFile(source.id(), rootId, path, f.size(), mtime, hash, next));
+          if (next == ImageStatus.PENDING) {
+            pendingIds.add(source.id());
+          }
+          moved++;
+          continue;
+        }
+        inserts.put(path, new Object[] {rootId, f.size(), mtime, hash});
+      }
+    }
+    List<Long> nowMissing = new ArrayList<>();
+    for (ImageRow row : vanished) {
+      if (!reused.contains(row.id()) && row.status() != ImageStatus.MISSING) {
+        nowMissing.add(row.id());
+      }
+    }
+    library.catalog().inTransaction(c -> {
+      writes.forEach(Runnable::run);
+      inserts.forEach((path, v) -> pendingIds.add(
+          images.insertPending((Long) v[0], path, (Long) v[1], (Long) v[2], (String) v[3])));
+      nowMissing.forEach(id -> images.setStatus(id, ImageStatus.MISSING));
+      return null;
+    });
+    List<ImageRow> toAnalyse = new ArrayList<>();
+    for (long id : pendingIds) {
+      images.byId(id).ifPresent(toAnalyse::add);
+    }
+    // Also pick up images left pending by an earlier, interrupted run.
+    Set<Long> queued = new HashSet<>(pendingIds);
+    for (ImageRow row : images.withStatus(ImageStatus.PENDING)) {
+      if (!queued.contains(row.id()) && foundPaths.contains(row.path())) {
+        toAnalyse.add(row);
+      }
+    }
+    return new Plan(toAnalyse, unchanged, moved, nowMissing, changedReady);
+  }
+
+  static String key(Path p) {
+    return p.toAbsolutePath().normalize().toString();
+  }
+}

@@ -1,0 +1,73 @@
+package org.morphscout.indexer.library;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.vector.VectorIndex;
+import org.morphscout.indexer.vector.VectorMath;
+
+/** Finds the catalog images nearest to a query image by appearance, by silhouette shape, or both. */
+public final class SimilarityService {
+  private final QueryContext context;
+
+  public SimilarityService(QueryContext context) {
+    this.context = context;
+  }
+
+  /** What "similar" means. */
+  public enum By {
+    /** The appearance vector (texture, layout, colour). */
+    APPEARANCE,
+    /** The normalised silhouette (outline compatibility, whatever the surface). */
+    SHAPE,
+    /** The mean of both distances. */
+    BOTH
+  }
+
+  /**
+   * One result.
+   *
+   * @param distance 1 - cosine similarity of the chosen vectors (for BOTH, the mean of the two), in [0, 2]; lower is
+   *     closer
+   */
+  public record Hit(long id, String path, double distance) {}
+
+  /** The {@code k} nearest catalog images, nearest first, the query itself (or a file with its bytes) left out. */
+  public List<Hit> similar(ImageAnalysis query, int k, By by) throws IOException {
+    VectorIndex index = context.index();
+    Set<Long> exclude = new HashSet<>();
+    context.sameContent(query).ifPresent(exclude::add);
+    Set<Long> candidates = new LinkedHashSet<>();
+    int fetch = by == By.BOTH ? Math.max(3 * k, 30) : k;
+    if (by != By.SHAPE) {
+      index.search(VectorIndex.Field.APPEARANCE, query.appearance(), fetch, exclude).forEach(h -> candidates.add(h.id()));
+    }
+    if (by != By.APPEARANCE) {
+      index.search(VectorIndex.Field.SHAPE, query.shape().shapeVector(), fetch, exclude)
+          .forEach(h -> candidates.add(h.id()));
+    }
+    List<Hit> hits = new ArrayList<>();
+    for (long id : candidates) {
+      Optional<ImageAnalysis> a = context.cache().get(id);
+      if (a.isEmpty()) {
+        continue;
+      }
+      double app = 1 - VectorMath.dot(query.appearance(), a.get().appearance());
+      double shape = 1 - VectorMath.dot(query.shape().shapeVector(), a.get().shape().shapeVector());
+      double d = switch (by) {
+        case APPEARANCE -> app;
+        case SHAPE -> shape;
+        case BOTH -> (app + shape) / 2;
+      };
+      hits.add(new Hit(id, a.get().path(), Math.max(0, d)));
+    }
+    hits.sort(Comparator.comparingDouble(Hit::distance).thenComparingLong(Hit::id));
+    return hits.size() > k ? List.copyOf(hits.subList(0, k)) : hits;
+  }
+}

@@ -1,0 +1,71 @@
+package org.morphscout.indexer.pairing;
+
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.feature.ColourStats;
+
+/**
+ * Decides whether two analyses show the same picture, resized, recompressed or lightly edited: identical file
+ * hashes, or appearance cosine, shape vector distance, foreground colour difference and aspect ratio all within
+ * {@link NearDuplicateConfig}. Such pairs are no morph; the pair finder lists them apart. Immutable, thread-safe.
+ */
+public final class NearDuplicates {
+  private final NearDuplicateConfig config;
+  private final ColourDifference colour;
+
+  public NearDuplicates(NearDuplicateConfig config, ColourDifference colour) {
+    this.config = config;
+    this.colour = colour;
+  }
+
+  public NearDuplicateConfig config() {
+    return config;
+  }
+
+  public boolean areDuplicates(ImageAnalysis a, ImageAnalysis b) {
+    if (!a.contentHash().isEmpty() && a.contentHash().equals(b.contentHash())) {
+      return true;
+    }
+    if (a.appearance() == null || b.appearance() == null || a.appearance().length != b.appearance().length
+        || a.appearance().length == 0 || !a.modelId().equals(b.modelId())) {
+      return false;
+    }
+    if (PairMeasures.cosine(a.appearance(), b.appearance()) < config.minCosine()) {
+      return false;
+    }
+    float[] sa = a.shape().shapeVector();
+    float[] sb = b.shape().shapeVector();
+    if (sa.length != sb.length || sa.length == 0 || distance(sa, sb) > config.maxShapeDistance()) {
+      return false;
+    }
+    double ra = a.width() / (double) a.height();
+    double rb = b.width() / (double) b.height();
+    if (Math.abs(ra / rb - 1) > config.maxAspectGap()) {
+      return false;
+    }
+    ColourStats ca = a.colour();
+    ColourStats cb = b.colour();
+    if (ca == null || cb == null || ca.foregroundMean() == null || cb.foregroundMean() == null) {
+      return false;
+    }
+    double d = colour.deltaE(ca.foregroundMean(), cb.foregroundMean());
+    return d <= config.maxDeltaE(); // NaN (no foreground colour) is never a duplicate
+  }
+
+  /** Euclidean distance of two vectors after L2 normalisation. */
+  static double distance(float[] p, float[] q) {
+    double np = 0;
+    double nq = 0;
+    for (int i = 0; i < p.length; i++) {
+      np += (double) p[i] * p[i];
+      nq += (double) q[i] * q[i];
+    }
+    np = np == 0 ? 1 : Math.sqrt(np);
+    nq = nq == 0 ? 1 : Math.sqrt(nq);
+    double s = 0;
+    for (int i = 0; i < p.length; i++) {
+      double d = p[i] / np - q[i] / nq;
+      s += d * d;
+    }
+    return Math.sqrt(s);
+  }
+}

@@ -1,0 +1,104 @@
+package org.morphscout.indexer.pairing;
+
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.feature.ColourStats;
+import org.morphscout.indexer.warp.WarpResult;
+
+/**
+ * The raw measures of a pair, before they are turned into sub-scores. NaN marks a measure whose inputs are missing
+ * (no appearance vectors of the same model, no colour statistics).
+ *
+ * @param appearanceDistance 1 - cosine of the appearance vectors, in [0, 2]
+ * @param deltaE00 colour difference of the foreground means (the configured formula, CIEDE2000 in production)
+ * @param lightnessA foreground mean L* of A, in [0, 100]
+ * @param lightnessB foreground mean L* of B
+ * @param stdRatio smaller over larger foreground L* standard deviation, in [0, 1]
+ * @param aspectRatioGap |ln(aspect A / aspect B)| of the image aspect ratios (width over height)
+ * @param resolutionRatio sqrt(smaller pixel count / larger), in (0, 1]
+ * @param scaleRatio sqrt(smaller object area fraction / larger), in [0, 1]
+ * @param offset distance between the object centroids in image fractions, in [0, sqrt 2]
+ * @param backgroundDeltaE colour difference of the background means
+ */
+record PairMeasures(
+    WarpResult warp,
+    double appearanceDistance,
+    double deltaE00,
+    double lightnessA,
+    double lightnessB,
+    double stdA,
+    double stdB,
+    double stdRatio,
+    double aspectRatioGap,
+    double resolutionRatio,
+    double scaleRatio,
+    double offset,
+    double backgroundDeltaE) {
+
+  static PairMeasures of(ImageAnalysis a, ImageAnalysis b, WarpResult warp, ColourDifference colour) {
+    double appearance = Double.NaN;
+    if (a.appearance() != null && b.appearance() != null && a.appearance().length == b.appearance().length
+        && a.appearance().length > 0 && a.modelId().equals(b.modelId())) {
+      appearance = 1 - cosine(a.appearance(), b.appearance());
+    }
+    ColourStats ca = a.colour();
+    ColourStats cb = b.colour();
+    double deltaE = Double.NaN;
+    double la = Double.NaN;
+    double lb = Double.NaN;
+    double sa = Double.NaN;
+    double sb = Double.NaN;
+    double stdRatio = Double.NaN;
+    double bgDeltaE = Double.NaN;
+    if (ca != null && cb != null) {
+      if (finite(ca.foregroundMean()) && finite(cb.foregroundMean())) {
+        deltaE = colour.deltaE(ca.foregroundMean(), cb.foregroundMean());
+        la = ca.foregroundMean()[0];
+        lb = cb.foregroundMean()[0];
+      }
+      if (finite(ca.foregroundStd()) && finite(cb.foregroundStd())) {
+        sa = ca.foregroundStd()[0];
+        sb = cb.foregroundStd()[0];
+        double hi = Math.max(sa, sb);
+        stdRatio = hi <= 1e-9 ? 1 : Math.min(sa, sb) / hi;
+      }
+      if (finite(ca.backgroundMean()) && finite(cb.backgroundMean())) {
+        bgDeltaE = colour.deltaE(ca.backgroundMean(), cb.backgroundMean());
+      }
+    }
+    double aspectGap = Math.abs(Math.log((a.width() / (double) a.height()) / (b.width() / (double) b.height())));
+    double pa = (double) a.width() * a.height();
+    double pb = (double) b.width() * b.height();
+    double resolution = Math.sqrt(Math.min(pa, pb) / Math.max(pa, pb));
+    double fa = a.shape().areaFraction();
+    double fb = b.shape().areaFraction();
+    double scale = Math.max(fa, fb) <= 0 ? 0 : Math.sqrt(Math.min(fa, fb) / Math.max(fa, fb));
+    double offset = Math.hypot(a.shape().centroidX() - b.shape().centroidX(),
+        a.shape().centroidY() - b.shape().centroidY());
+    return new PairMeasures(warp, appearance, deltaE, la, lb, sa, sb, stdRatio, aspectGap, resolution, scale, offset,
+        bgDeltaE);
+  }
+
+  static double cosine(float[] p, float[] q) {
+    double dot = 0;
+    double np = 0;
+    double nq = 0;
+    for (int i = 0; i < p.length; i++) {
+      dot += (double) p[i] * q[i];
+      np += (double) p[i] * p[i];
+      nq += (double) q[i] * q[i];
+    }
+    return np == 0 || nq == 0 ? 0 : dot / Math.sqrt(np * nq);
+  }
+
+  private static boolean finite(double[] v) {
+    if (v == null || v.length < 3) {
+      return false;
+    }
+    for (double x : v) {
+      if (!Double.isFinite(x)) {
+        return false;
+      }
+    }
+    return true;
+  }
+}

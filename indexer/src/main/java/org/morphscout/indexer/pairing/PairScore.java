@@ -1,0 +1,38 @@
+package org.morphscout.indexer.pairing;
+
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.morphscout.indexer.warp.WarpResult;
+
+/**
+ * How well image A morphs into image B.
+ *
+ * @param score 0..100, higher is better
+ * @param verdict pass, warn or fail from the score thresholds and framing faults
+ * @param components sub-scores in [0, 1] (1 best), in a fixed order: overlap, warpEffort, foldSafety, appearance,
+ *     colour, lightness, contrast, aspect, resolution, objectScale, placement, background (a sub-score whose inputs
+ *     are missing, e.g. no colour statistics, is left out)
+ * @param measures the raw measures behind them, in a fixed order: iouBefore, alignedIou, warpedIou,
+ *     meanDisplacement, maxDisplacement, foldFraction, appearanceDistance, deltaE00, lightnessGap, stdRatio,
+ *     aspectRatioGap, resolutionRatio, scaleRatio, offset, backgroundDeltaE00 (missing ones left out)
+ * @param reasons plain-language findings for a photographer, most important first; empty for a clean pair
+ * @param warp the warp between the silhouettes; empty when either image has no silhouette
+ */
+public record PairScore(
+    double score,
+    Verdict verdict,
+    Map<String, Double> components,
+    Map<String, Double> measures,
+    List<String> reasons,
+    Optional<WarpResult> warp) {
+
+  public PairScore {
+    if (!(score >= 0 && score <= 100)) {
+      throw new IllegalArgumentException("score must be in [0, 100], got " + score);
+    }
+    components = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(components));
+    measures = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(measures));
+    reasons = List.copyOf(reasons);
+  }
+}

@@ -1,0 +1,55 @@
+package org.morphscout.indexer.pairing;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Properties;
+import org.morphscout.indexer.MorphscoutException;
+
+/** Reads a flat settings file ({@code .json} object of scalars, or {@code .properties}) into key/value strings. */
+final class SettingsFiles {
+  private static final ObjectMapper JSON = new ObjectMapper();
+
+  private SettingsFiles() {}
+
+  static Map<String, String> read(Path file) throws IOException {
+    String name = file.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+    Map<String, String> out = new LinkedHashMap<>();
+    if (name.endsWith(".json")) {
+      JsonNode root;
+      try {
+        root = JSON.readTree(file.toFile());
+      } catch (JsonProcessingException e) {
+        throw new MorphscoutException("settings file " + file + " is not valid JSON: " + e.getOriginalMessage(), e);
+      }
+      if (root == null || !root.isObject()) {
+        throw new MorphscoutException("settings file " + file + " must hold one JSON object of name: value pairs");
+      }
+      for (Map.Entry<String, JsonNode> e : root.properties()) {
+        if (!e.getValue().isValueNode()) {
+          throw new MorphscoutException("setting " + e.getKey() + " in " + file + " must be a number or boolean");
+        }
+        out.put(e.getKey(), e.getValue().asText());
+      }
+      return out;
+    }
+    if (name.endsWith(".properties")) {
+      Properties p = new Properties();
+      try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+        p.load(r);
+      }
+      for (String key : p.stringPropertyNames()) {
+        out.put(key, p.getProperty(key));
+      }
+      return out;
+    }
+    throw new MorphscoutException("settings file " + file + " must end in .json or .properties");
+  }
+}

@@ -1,0 +1,304 @@
+package org.morphscout.indexer.vector;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Objects;
+import java.util.Set;
+import java.util.concurrent.locks.ReentrantLock;
+import org.apache.lucene.codecs.KnnVectorsFormat;
+import org.apache.lucene.index.DirectoryReader;
+import org.apache.lucene.index.IndexWriter;
+import org.apache.lucene.index.IndexWriterConfig;
+import org.apache.lucene.search.IndexSearcher;
+import org.apache.lucene.search.KnnFloatVectorQuery;
+import org.apache.lucene.search.Query;
+import org.apache.lucene.search.SearcherManager;
+import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.store.Directory;
+import org.apache.lucene.store.FSDirectory;
+import org.apache.lucene.store.LockObtainFailedException;
+import org.apache.lucene.util.IOUtils;
+import org.morphscout.indexer.MorphscoutException;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * The vector index on Apache Lucene's HNSW graphs: one document per image holding up to two unit vectors
+ * ("appearance", "shape"), searched by cosine similarity.
+ *
+ * <p>Two modes. {@link #open} takes the folder's single writer (Lucene's {@code write.lock}; a second process gets a
+ * {@link MorphscoutException}) and serves searches from a {@link SearcherManager} refreshed at every {@link
+ * #commit()}. {@link #openReadOnly} only reads the last commit, so query-only commands can run while another process
+ * indexes; {@link #refresh()} picks up that process's later commits, and all write methods throw.
+ *
+ * <p>Searches see committed state only. {@link #close()} discards uncommitted changes (like rolling back a database
+ * transaction), so a cancelled indexing run cannot leave vectors of images the catalog never recorded.
+ *
+ * <p>Thread-safety: all methods may be called from any thread. Writes are serialised by a lock; searches take no
+ * lock and run concurrently with writes and commits.
+ */
+public final class LuceneVectorIndex implements VectorIndex {
+  private static final Logger LOG = LoggerFactory.getLogger(LuceneVectorIndex.class);
+
+  private final Path path;
+  private final LuceneIndexOptions options;
+  private final Directory directory;
+  /** Absent in read-only mode (Lucene's IndexWriter has no null-object form). */
+  private final IndexWriter writer;
+  private final SearcherManager searchers;
+  /** Dimensions of everything written so far, committed or not; only used by the writer. */
+  private final FieldDimensions dimensions = new FieldDimensions();
+  private final ReentrantLock writeLock = new ReentrantLock();
+
+  private LuceneVectorIndex(
+      Path path, LuceneIndexOptions options, Directory directory, IndexWriter writer, SearcherManager searchers)
+      throws IOException {
+    this.path = path;
+    this.options = options;
+    this.directory = directory;
+    this.writer = writer;
+    this.searchers = searchers;
+    IndexSearcher searcher = searchers.acquire();
+    try {
+      for (Field field : Field.values()) {
+        dimensions.set(field, LuceneSchema.dimension(searcher.getIndexReader(), field));
+      }
+    } finally {
+      searchers.release(searcher);
+    }
+  }
+
+  /**
+   * Opens (creating if needed) the index in {@code dir} for reading and writing.
+   *
+   * @throws MorphscoutException when another process (or another open index in this one) holds the folder, or the
+   *     index there is damaged or from an unsupported Lucene version
+   */
+  public static LuceneVectorIndex open(Path dir, LuceneIndexOptions options) throws IOException {
+    Objects.requireNonNull(options, "options");
+    Files.createDirectories(dir);
+    Directory directory = FSDirectory.open(dir);
+    IndexWriter writer = null;
+    try {
+      IndexWriterConfig config = new IndexWriterConfig()
+          .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
+          .setCodec(new VectorFieldCodec(options))
+          .setRAMBufferSizeMB(options.ramBufferMb())
+          .setCommitOnClose(false);
+      writer = new IndexWriter(directory, config);
+      if (!DirectoryReader.indexExists(directory)) {
+        writer.commit(); // an empty first commit, so read-only openers find an index at once
+      }
+      LuceneVectorIndex index = new LuceneVectorIndex(dir, options, directory, writer, new SearcherManager(writer, null));
+      LOG.debug("Opened vector index {} for writing with {}", dir, options);
+      return index;
+    } catch (LockObtainFailedException e) {
+      IOUtils.closeWhileHandlingException(writer, directory);
+      throw new MorphscoutException("catalog in use by another Morphscout process (vector index locked): " + dir, e);
+    } catch (IOException | RuntimeException e) {
+      IOUtils.closeWhileHandlingException(writer, directory);
+      throw LuceneFailures.translate(e, dir);
+    }
+  }
+
+  /**
+   * Opens the last commit in {@code dir} for searching only; takes no lock, so another process may be indexing.
+   *
+   * @throws MorphscoutException when {@code dir} holds no index yet, or a damaged or unsupported one
+   */
+  public static LuceneVectorIndex openReadOnly(Path dir) throws IOException {
+    return openReadOnly(dir, LuceneIndexOptions.defaults());
+  }
+
+  /** As {@link #openReadOnly(Path)}; only the search fan-out of {@code options} matters when reading. */
+  public static LuceneVectorIndex openReadOnly(Path dir, LuceneIndexOptions options) throws IOException {
+    Objects.requireNonNull(options, "options");
+    if (!Files.isDirectory(dir)) {
+      throw new MorphscoutException("No vector index at " + dir + ": index the catalog first.");
+    }
+    Directory directory = FSDirectory.open(dir);
+    try {
+      if (!DirectoryReader.indexExists(directory)) {
+        throw new MorphscoutException("No vector index at " + dir + ": index the catalog first.");
+      }
+      SearcherManager searchers = new SearcherManager(directory, null);
+      return new LuceneVectorIndex(dir, options, directory, null, searchers);
+    } catch (IOException | RuntimeException e) {
+      IOUtils.closeWhileHandlingException(directory);
+      throw LuceneFailures.translate(e, dir);
+    }
+  }
+
+  /** The folder this index lives in. */
+  public Path path() {
+    return path;
+  }
+
+  public boolean isReadOnly() {
+    return writer == null;
+  }
+
+  @Override
+  public void upsert(long id, float[] appearance, float[] shape) throws IOException {
+    requireWritable();
+    if (appearance == null && shape == null) {
+      delete(id); // an image with no vectors has nothing to find; keeps ids() = images with a vector
+      return;
+    }
+    float[] unitAppearance = appearance == null ? null : unit(id, Field.APPEARANCE, appearance);
+    float[] unitShape = shape == null ? null : unit(id, Field.SHAPE, shape);
+    writeLock.lock();
+    try {
+      dimensions.admit(id, unitAppearance, unitShape);
+      writer.updateDocument(LuceneSchema.idTerm(id), LuceneSchema.document(id, unitAppearance, unitShape));
+    } finally {
+      writeLock.unlock();
+    }
+  }
+
+  @Override
+  public void delete(long id) throws IOException {
+    requireWritable();
+    writeLock.lock();
+    try {
+      writer.deleteDocuments(LuceneSchema.idTerm(id));
+    } finally {
+      writeLock.unlock();
+    }
+  }
+
+  @Override
+  public void commit() throws IOException {
+    requireWritable();
+    writeLock.lock();
+    try {
+      writer.commit();
+      // Refreshing under the write lock means the new searcher holds exactly the committed state.
+      searchers.maybeRefreshBlocking();
+    } finally {
+      writeLock.unlock();
+    }
+  }
+
+  /**
+   * Removes everything (visible after {@link #commit()}). Also forgets the vector dimensions, so a catalog re-indexed
+   * with a different model can start afresh.
+   */
+  @Override
+  public void clear() throws IOException {
+    requireWritable();
+    writeLock.lock();
+    try {
+      writer.deleteAll(); // also drops Lucene's field schema, so new dimensions are accepted
+      dimensions.reset();
+    } finally {
+      writeLock.unlock();
+    }
+  }
+
+  @Override
+  public List<Hit> search(Field field, float[] query, int k, Set<Long> exclude) throws IOException {
+    Objects.requireNonNull(field, "field");
+    int candidates = options.candidates(k);
+    IndexSearcher searcher = searchers.acquire();
+    try {
+      int indexed = LuceneSchema.dimension(searcher.getIndexReader(), field);
+      if (indexed == 0) {
+        return List.of(); // no image has this vector yet
+      }
+      if (indexed != query.length) {
+        throw FieldDimensions.queryMismatch(field, indexed, query.length);
+      }
+      float[] unitQuery = VectorMath.unitCopy(query, "The " + FieldDimensions.label(field) + " query vector");
+      String name = LuceneSchema.fieldName(field);
+      Query knn = new KnnFloatVectorQuery(name, unitQuery, candidates, LuceneSchema.excludeFilter(exclude));
+      TopDocs top = searcher.search(knn, candidates);
+      return ExactRescorer.rescore(searcher, top.scoreDocs, name, unitQuery, k);
+    } finally {
+      searchers.release(searcher);
+    }
+  }
+
+  @Override
+  public Set<Long> ids() throws IOException {
+    IndexSearcher searcher = searchers.acquire();
+    try {
+      return Set.copyOf(LuceneSchema.ids(searcher.getIndexReader()));
+    } finally {
+      searchers.release(searcher);
+    }
+  }
+
+  /** Number of images in the committed state. */
+  public int count() throws IOException {
+    IndexSearcher searcher = searchers.acquire();
+    try {
+      return searcher.getIndexReader().numDocs();
+    } finally {
+      searchers.release(searcher);
+    }
+  }
+
+  /**
+   * Read-only mode: switches to the newest commit on disk (another process's). Writer mode: nothing new to see, since
+   * {@link #commit()} already refreshes. Returns whether the searched state changed.
+   */
+  public boolean refresh() throws IOException {
+    IndexSearcher before = searchers.acquire();
+    try {
+      searchers.maybeRefreshBlocking();
+    } finally {
+      searchers.release(before);
+    }
+    IndexSearcher after = searchers.acquire();
+    try {
+      return after != before;
+    } finally {
+      searchers.release(after);
+    }
+  }
+
+  /**
+   * Maintenance: merges the index down to at most {@code maxSegments} segments (1 = fastest searches; rebuilds the
+   * graphs, so it takes about as long as indexing everything again). Call {@link #commit()} afterwards.
+   */
+  public void forceMerge(int maxSegments) throws IOException {
+    requireWritable();
+    writeLock.lock();
+    try {
+      writer.forceMerge(maxSegments);
+    } finally {
+      writeLock.unlock();
+    }
+  }
+
+  /** Uncommitted changes are discarded (see the class comment). */
+  @Override
+  public void close() throws IOException {
+    writeLock.lock();
+    try {
+      IOUtils.close(searchers, writer, directory);
+    } finally {
+      writeLock.unlock();
+    }
+  }
+
+  private float[] unit(long id, Field field, float[] vector) {
+    if (vector.length > KnnVectorsFormat.DEFAULT_MAX_DIMENSIONS) {
+      throw new MorphscoutException(
+          "Image " + id + ": " + FieldDimensions.label(field) + " vector has " + vector.length
+              + " dimensions; the Lucene vector index supports at most " + KnnVectorsFormat.DEFAULT_MAX_DIMENSIONS
+              + ". Choose a smaller feature model.");
+    }
+    return VectorMath.unitCopy(vector, "Image " + id + ": " + FieldDimensions.label(field) + " vector");
+  }
+
+  private void requireWritable() {
+    if (writer == null) {
+      throw new MorphscoutException(
+          "The vector index at " + path + " is open read-only (for queries); it cannot be changed from here.");
+    }
+  }
+}

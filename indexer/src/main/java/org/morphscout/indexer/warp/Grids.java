@@ -1,0 +1,157 @@
+package org.morphscout.indexer.warp;
+
+import org.morphscout.indexer.silhouette.Mask;
+
+/** Flat-array helpers for small float grids (row-major, index coordinates: pixel {@code i} centred at {@code i}). */
+final class Grids {
+  /** Sub-pixel offsets of the 2x2 supersampling used when a mask is resampled onto a grid. */
+  private static final double[] SUB = {-0.25, 0.25};
+
+  private Grids() {}
+
+  /** A's mask on the canvas: per-pixel object coverage in [0, 1], from 2x2 supersampling. */
+  static float[] rasterise(Mask a, Canvas canvas) {
+    return rasterise(a, canvas, new double[] {1, 0, 0, 0, 1, 0});
+  }
+
+  /** B's mask on the canvas through the similarity that maps B onto A. */
+  static float[] rasterise(Mask b, Canvas canvas, Similarity sim) {
+    return rasterise(b, canvas, sim.inverseMatrix());
+  }
+
+  /**
+   * @param m 2x3 matrix from A-mask coordinates to the sampled mask's coordinates
+   */
+  private static float[] rasterise(Mask mask, Canvas canvas, double[] m) {
+    int n = canvas.size();
+    int w = mask.width();
+    int h = mask.height();
+    byte[] d = mask.data();
+    float[] out = new float[n * n];
+    for (int j = 0; j < n; j++) {
+      for (int i = 0; i < n; i++) {
+        int hits = 0;
+        for (double oy : SUB) {
+          double ay = canvas.maskY(j + oy);
+          for (double ox : SUB) {
+            double ax = canvas.maskX(i + ox);
+            int x = (int) Math.floor(m[0] * ax + m[1] * ay + m[2]);
+            int y = (int) Math.floor(m[3] * ax + m[4] * ay + m[5]);
+            if (x >= 0 && y >= 0 && x < w && y < h && d[y * w + x] != 0) {
+              hits++;
+            }
+          }
+        }
+        out[j * n + i] = hits * 0.25f;
+      }
+    }
+    return out;
+  }
+
+  /** A mask resampled onto an n x n grid in image-relative coordinates (the grid spans the whole image). */
+  static float[] imageRelative(Mask mask, int n) {
+    int w = mask.width();
+    int h = mask.height();
+    byte[] d = mask.data();
+    float[] out = new float[n * n];
+    for (int j = 0; j < n; j++) {
+      for (int i = 0; i < n; i++) {
+        int hits = 0;
+        for (double oy : SUB) {
+          int y = Math.min(h - 1, (int) Math.floor((j + 0.5 + oy) / n * h));
+          for (double ox : SUB) {
+            int x = Math.min(w - 1, (int) Math.floor((i + 0.5 + ox) / n * w));
+            hits += d[y * w + x];
+          }
+        }
+        out[j * n + i] = hits * 0.25f;
+      }
+    }
+    return out;
+  }
+
+  /**
+   * Soft intersection over union of two coverage grids: sum of minima over sum of maxima, which equals the usual IoU
+   * for 0/1 grids. 1 when both are empty.
+   */
+  static double iou(float[] a, float[] b) {
+    double inter = 0;
+    double union = 0;
+    for (int i = 0; i < a.length; i++) {
+      inter += Math.min(a[i], b[i]);
+      union += Math.max(a[i], b[i]);
+    }
+    return union == 0 ? 1.0 : inter / union;
+  }
+
+  static double sum(float[] a) {
+    double s = 0;
+    for (float v : a) {
+      s += v;
+    }
+    return s;
+  }
+
+  /** Bilinear sample at index coordinates, clamping to the border. */
+  static float bilinear(float[] img, int w, int h, double x, double y) {
+    if (x < 0) {
+      x = 0;
+    } else if (x > w - 1) {
+      x = w - 1;
+    }
+    if (y < 0) {
+      y = 0;
+    } else if (y > h - 1) {
+      y = h - 1;
+    }
+    int x0 = (int) x;
+    int y0 = (int) y;
+    int x1 = Math.min(x0 + 1, w - 1);
+    int y1 = Math.min(y0 + 1, h - 1);
+    float fx = (float) (x - x0);
+    float fy = (float) (y - y0);
+    int r0 = y0 * w;
+    int r1 = y1 * w;
+    float top = img[r0 + x0] + fx * (img[r0 + x1] - img[r0 + x0]);
+    float bottom = img[r1 + x0] + fx * (img[r1 + x1] - img[r1 + x0]);
+    return top + fy * (bottom - top);
+  }
+
+  /** out(x) = img(x + u(x)), bilinear with border clamping, on a w x h grid. */
+  static void warp(float[] img, int w, int h, float[] ux, float[] uy, float[] out) {
+    float maxX = w - 1;
+    float maxY = h - 1;
+    for (int y = 0, i = 0; y < h; y++) {
+      for (int x = 0; x < w; x++, i++) {
+        float px = x + ux[i];
+        float py = y + uy[i];
+        px = px < 0 ? 0 : (px > maxX ? maxX : px);
+        py = py < 0 ? 0 : (py > maxY ? maxY : py);
+        int x0 = (int) px;
+        int y0 = (int) py;
+        int x1 = x0 < w - 1 ? x0 + 1 : x0;
+        int y1 = y0 < h - 1 ? y0 + 1 : y0;
+        float fx = px - x0;
+        float fy = py - y0;
+        float top = img[y0 * w + x0] + fx * (img[y0 * w + x1] - img[y0 * w + x0]);
+        float bottom = img[y1 * w + x0] + fx * (img[y1 * w + x1] - img[y1 * w + x0]);
+        out[i] = top + fy * (bottom - top);
+      }
+    }
+  }
+
+  /** Halves a grid by 2x2 averaging; w and h must be even. */
+  static float[] downsample(float[] img, int w, int h) {
+    int w2 = w / 2;
+    int h2 = h / 2;
+    float[] out = new float[w2 * h2];
+    for (int y = 0; y < h2; y++) {
+      int r0 = 2 * y * w;
+      int r1 = r0 + w;
+      for (int x = 0; x < w2; x++) {
+        out[y * w2 + x] = 0.25f * (img[r0 + 2 * x] + img[r0 + 2 * x + 1] + img[r1 + 2 * x] + img[r1 + 2 * x + 1]);
+      }
+    }
+    return out;
+  }
+}

@@ -1,0 +1,67 @@
+package org.morphscout.indexer.ingest;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.time.Duration;
+import org.junit.jupiter.api.Test;
+
+class TimeLimitedDecoderTest {
+  private static final Path FILE = Path.of("slow.jpg");
+  private static final DecodedImage IMAGE =
+      new DecodedImage(new BufferedImage(1, 1, BufferedImage.TYPE_INT_ARGB), 1, 1, "jpeg", 1, false);
+
+  @Test
+  void slowDecodeIsCutOffWithATimeOutReason() {
+    ImageDecoder slow = file -> {
+      try {
+        Thread.sleep(10_000);
+      } catch (InterruptedException e) {
+        Thread.currentThread().interrupt();
+      }
+      return IMAGE;
+    };
+    try (TimeLimitedDecoder limited = new TimeLimitedDecoder(slow, Duration.ofMillis(200))) {
+      long t0 = System.nanoTime();
+      assertThatThrownBy(() -> limited.decode(FILE))
+          .isInstanceOfSatisfying(ImageReadException.class, e -> {
+            assertThat(e.failure()).isEqualTo(ReadFailure.TIMED_OUT);
+            assertThat(e.reason()).isEqualTo("decoding took longer than the 200 ms limit");
+          });
+      assertThat((System.nanoTime() - t0) / 1_000_000).isLessThan(5_000);
+    }
+  }
+
+  @Test
+  void resultsAndFailuresPassThrough() throws Exception {
+    try (TimeLimitedDecoder ok = new TimeLimitedDecoder(file -> IMAGE, Duration.ofSeconds(5))) {
+      assertThat(ok.decode(FILE)).isSameAs(IMAGE);
+    }
+    ImageDecoder failing = file -> {
+      throw new ImageReadException(file, ReadFailure.EMPTY, "empty file (0 bytes)");
+    };
+    try (TimeLimitedDecoder limited = new TimeLimitedDecoder(failing, Duration.ofSeconds(5))) {
+      assertThatThrownBy(() -> limited.decode(FILE)).isInstanceOf(ImageReadException.class)
+          .hasMessageContaining("empty file");
+    }
+    ImageDecoder ioFailing = file -> {
+      throw new IOException("disk on fire");
+    };
+    try (TimeLimitedDecoder limited = new TimeLimitedDecoder(ioFailing, Duration.ofSeconds(5))) {
+      assertThatThrownBy(() -> limited.decode(FILE)).isInstanceOf(IOException.class).hasMessage("disk on fire");
+    }
+  }
+
+  @Test
+  void workerThreadsAreNamed() throws Exception {
+    try (TimeLimitedDecoder limited = new TimeLimitedDecoder(file -> {
+      assertThat(Thread.currentThread().getName()).startsWith("morphscout-decode-");
+      return IMAGE;
+    }, Duration.ofSeconds(5))) {
+      assertThat(limited.decode(FILE)).isSameAs(IMAGE);
+    }
+  }
+}

@@ -1,0 +1,112 @@
+package org.morphscout.indexer.pairing;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.function.UnaryOperator;
+import org.junit.jupiter.api.Test;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.warp.TestMasks;
+import org.morphscout.indexer.warp.WarpEstimator;
+
+class PairScorerTest {
+  private final PairScorer scorer =
+      new PairScorer(ScoreConfig.DEFAULTS, ColourDifference.cie76(), new WarpEstimator());
+
+  private static ImageAnalysis clean(long id) {
+    return Analyses.builder(id).build();
+  }
+
+  @Test
+  void aCleanPairPassesWithoutReasons() {
+    PairScore s = scorer.score(clean(1), clean(2));
+    assertThat(s.reasons()).isEmpty();
+    assertThat(s.verdict()).isEqualTo(Verdict.PASS);
+    assertThat(s.score()).isGreaterThan(90);
+    assertThat(s.components().keySet()).startsWith("overlap", "warpEffort", "foldSafety", "appearance");
+    assertThat(s.components().values()).allSatisfy(v -> assertThat(v).isBetween(0.0, 1.0));
+    assertThat(s.measures()).containsKeys("alignedIou", "warpedIou", "meanDisplacement", "foldFraction",
+        "appearanceDistance", "deltaE00", "lightnessGap", "stdRatio", "aspectRatioGap", "resolutionRatio",
+        "scaleRatio", "offset");
+    assertThat(s.warp()).isPresent();
+  }
+
+  @Test
+  void growingSilhouetteDifferenceLowersTheScoreMonotonically() {
+    // A vase whose neck widens with t: each step moves further from t = 0 (by construction), so the score must fall.
+    ImageAnalysis a = Analyses.builder(1).object(TestMasks.vase(0)).build();
+    double previous = Double.POSITIVE_INFINITY;
+    for (double t : new double[] {0, 0.25, 0.5, 0.75, 1.0}) {
+      ImageAnalysis b = Analyses.builder(2).object(TestMasks.vase(t)).build();
+      double score = scorer.score(a, b).score();
+      assertThat(score).as("score at t=%s", t).isLessThan(previous);
+      previous = score;
+    }
+  }
+
+  @Test
+  void eachScreeningReasonIsTriggeredByThePairBuiltForIt() {
+    expectReason(b -> b.cutOff(), "object cut off by the frame in B");
+    expectReason(b -> b.components(2), "two objects in B");
+    expectReason(b -> b.size(1080, 1920), "aspect ratios differ (4:3 vs 9:16)");
+    expectReason(b -> b.size(120, 90), "B is tiny (120x90 px)");
+    // CIE76 in tests: sqrt(0^2 + 30^2 + 40^2) = 50 against the default foreground (50, 10, 20) -> (50, 40, 60).
+    expectReason(b -> b.foreground(50, 40, 60), "large colour gap (ΔE00 50)");
+    // Lightness gap 42 > default threshold 40.
+    expectReason(b -> b.foreground(92, 10, 20), "dark vs bright (L* 50 vs 92)");
+  }
+
+  @Test
+  void darkVersusBrightNamesBothLightnesses() {
+    ImageAnalysis a = Analyses.builder(1).foreground(18, 0, 0).build();
+    ImageAnalysis b = Analyses.builder(2).foreground(82, 0, 0).build();
+    assertThat(scorer.score(a, b).reasons()).contains("dark vs bright (L* 18 vs 82)");
+    assertThat(scorer.score(b, a).reasons()).contains("bright vs dark (L* 82 vs 18)");
+  }
+
+  @Test
+  void twoObjectsInAAreNamedForA() {
+    PairScore s = scorer.score(Analyses.builder(1).components(2).build(), clean(2));
+    assertThat(s.reasons()).contains("two objects in A");
+  }
+
+  @Test
+  void framingFaultsLowerTheScoreAndCapTheVerdict() {
+    PairScore ok = scorer.score(clean(1), clean(2));
+    PairScore cut = scorer.score(clean(1), Analyses.builder(2).cutOff().build());
+    assertThat(cut.score()).isLessThan(ok.score());
+    assertThat(cut.verdict()).isNotEqualTo(Verdict.PASS);
+  }
+
+  @Test
+  void aPairWithoutSilhouetteFails() {
+    PairScore s = scorer.score(clean(1), Analyses.builder(2).noObject().build());
+    assertThat(s.verdict()).isEqualTo(Verdict.FAIL);
+    assertThat(s.score()).isZero();
+    assertThat(s.reasons()).containsExactly("no object found in B");
+    assertThat(s.warp()).isEmpty();
+  }
+
+  @Test
+  void poorOverlapIsReported() {
+    // A tall thin bar against a disc: after alignment the IoU is far below 0.6 by geometry.
+    ImageAnalysis a = Analyses.builder(1).object(new java.awt.geom.Rectangle2D.Double(-5, -40, 10, 80)).build();
+    ImageAnalysis b = Analyses.builder(2).object(new java.awt.geom.Ellipse2D.Double(-20, -20, 40, 40)).build();
+    PairScore s = scorer.score(a, b);
+    assertThat(s.reasons().get(0)).startsWith("silhouettes overlap poorly after alignment (IoU 0.");
+    assertThat(s.verdict()).isNotEqualTo(Verdict.PASS);
+  }
+
+  @Test
+  void verdictIsWrittenLowerCase() {
+    assertThat(Verdict.PASS.toString()).isEqualTo("pass");
+    assertThat(Verdict.WARN.label()).isEqualTo("warn");
+    assertThat(Verdict.FAIL.toString()).isEqualTo("fail");
+  }
+
+  private void expectReason(UnaryOperator<Analyses.Builder> change, String reason) {
+    ImageAnalysis a = clean(1);
+    assertThat(scorer.score(a, clean(2)).reasons()).as("clean pair").doesNotContain(reason);
+    ImageAnalysis b = change.apply(Analyses.builder(2)).build();
+    assertThat(scorer.score(a, b).reasons()).as("pair built for: " + reason).contains(reason);
+  }
+}

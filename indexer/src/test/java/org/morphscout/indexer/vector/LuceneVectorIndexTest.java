@@ -1,0 +1,109 @@
+package org.morphscout.indexer.vector;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.vector.VectorIndex.Field;
+import org.morphscout.indexer.vector.VectorIndex.Hit;
+
+/** The behavioural contract on the Lucene index (float graphs), plus what only a folder on disk can show. */
+class LuceneVectorIndexTest extends VectorIndexContractTest {
+  @TempDir Path temp;
+
+  private Path dir() {
+    return temp.resolve("vectors");
+  }
+
+  @Override
+  protected VectorIndex newIndex() throws IOException {
+    return LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults());
+  }
+
+  @Test
+  void reopeningKeepsCommittedDataAndDropsUncommitted() throws IOException {
+    float[][] vectors = fill(0, 50);
+    index.upsert(1000, TestVectors.randomUnit(random, APPEARANCE_DIM), null);
+    index.close();
+    index = LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults());
+    assertThat(index.ids()).hasSize(50).doesNotContain(1000L);
+    assertThat(index.search(Field.APPEARANCE, vectors[17], 1, Set.of())).extracting(Hit::id).containsExactly(17L);
+    assertThatThrownBy(() -> index.upsert(2000, TestVectors.randomUnit(random, APPEARANCE_DIM + 1), null))
+        .as("the dimension survives a reopen")
+        .isInstanceOf(MorphscoutException.class)
+        .hasMessageContaining("expects " + APPEARANCE_DIM);
+  }
+
+  @Test
+  void aSecondWriterOnTheSameFolderIsToldTheCatalogIsInUse() {
+    assertThatThrownBy(() -> LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults()))
+        .isInstanceOf(MorphscoutException.class)
+        .hasMessage("catalog in use by another Morphscout process (vector index locked): " + dir());
+  }
+
+  @Test
+  void theFolderCanBeOpenedAgainAfterClose() throws IOException {
+    fill(0, 3);
+    index.close();
+    index = LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults().withGraph(8, 50));
+    assertThat(((LuceneVectorIndex) index).count()).isEqualTo(3);
+  }
+
+  @Test
+  void aReadOnlyIndexSeesNewCommitsAfterRefresh() throws IOException {
+    float[][] first = fill(0, 10);
+    try (LuceneVectorIndex reader = LuceneVectorIndex.openReadOnly(dir())) {
+      assertThat(reader.isReadOnly()).isTrue();
+      assertThat(reader.ids()).hasSize(10);
+      assertThat(reader.search(Field.APPEARANCE, first[4], 1, Set.of())).extracting(Hit::id).containsExactly(4L);
+
+      fill(10, 5);
+      index.delete(0);
+      index.commit();
+      assertThat(reader.ids()).as("no refresh yet").hasSize(10);
+      assertThat(reader.refresh()).isTrue();
+      assertThat(reader.ids()).hasSize(14).doesNotContain(0L);
+      assertThat(reader.refresh()).as("nothing new").isFalse();
+
+      assertThatThrownBy(() -> reader.upsert(99, first[0], null))
+          .isInstanceOf(MorphscoutException.class)
+          .hasMessageContaining("read-only");
+      assertThatThrownBy(reader::clear).isInstanceOf(MorphscoutException.class);
+    }
+  }
+
+  @Test
+  void aReadOnlyOpenWithoutAnIndexSaysSo() {
+    Path nowhere = temp.resolve("missing");
+    assertThatThrownBy(() -> LuceneVectorIndex.openReadOnly(nowhere))
+        .isInstanceOf(MorphscoutException.class)
+        .hasMessageContaining("No vector index at " + nowhere);
+  }
+
+  @Test
+  void aFreshWriterMakesTheFolderReadableAtOnce() throws IOException {
+    try (LuceneVectorIndex reader = LuceneVectorIndex.openReadOnly(dir())) {
+      assertThat(reader.ids()).isEmpty();
+      List<Hit> hits = reader.search(Field.SHAPE, TestVectors.randomUnit(random, SHAPE_DIM), 3, Set.of());
+      assertThat(hits).isEmpty();
+    }
+  }
+
+  @Test
+  void forceMergeKeepsEveryImage() throws IOException {
+    LuceneVectorIndex lucene = (LuceneVectorIndex) index;
+    for (int batch = 0; batch < 4; batch++) {
+      fill(batch * 25L, 25); // each commit writes a segment
+    }
+    lucene.forceMerge(1);
+    lucene.commit();
+    assertThat(lucene.count()).isEqualTo(100);
+    assertThat(lucene.ids()).hasSize(100);
+  }
+}
