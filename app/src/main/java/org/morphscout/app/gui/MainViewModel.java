@@ -52,7 +52,7 @@ public final class MainViewModel implements AutoCloseable {
     this.chains = new ChainsViewModel(session, runner);
     this.pairs = new PairsViewModel(session, runner);
     this.walkthrough = new WalkthroughViewModel(session, runner);
-    this.indexing = new IndexingViewModel(session, runner, library::reload);
+    this.indexing = new IndexingViewModel(session, runner, this::afterIndexing);
     session.partnersRequestProperty().addListener((o, a, r) -> {
       if (r != null) {
         session.paneProperty().set(Pane.PAIRS);
@@ -91,7 +91,11 @@ public final class MainViewModel implements AutoCloseable {
     }, opened -> {
       opening.set(false);
       Library old = session.library();
+      Backends oldBackends = session.backends();
       session.install(opened.library(), opened.backends());
+      if (oldBackends != null) {
+        oldBackends.close();
+      }
       catalogDir.set(opened.library().catalog().dir());
       title.set("Morphscout — " + opened.library().catalog().dir());
       message.set("");
@@ -104,6 +108,30 @@ public final class MainViewModel implements AutoCloseable {
     });
   }
 
+  /**
+   * After indexing, the backends are rebuilt (their cached vectors and the vector index reader predate the new
+   * images) and the grid reloads.
+   */
+  private void afterIndexing() {
+    Library lib = session.library();
+    if (lib == null) {
+      return;
+    }
+    runner.submit("refresh services", token -> backends.create(lib), fresh -> {
+      Backends old = session.backends();
+      if (session.library() == lib) {
+        session.refreshBackends(fresh);
+        library.reload();
+      } else {
+        fresh.close();
+        return;
+      }
+      if (old != null) {
+        old.close();
+      }
+    }, e -> message.set(Messages.of(e)));
+  }
+
   /** Shows a message in the window's message line (for view-level problems such as a failed file dialog). */
   public void say(String text) {
     message.set(text);
@@ -112,7 +140,11 @@ public final class MainViewModel implements AutoCloseable {
   @Override
   public void close() {
     Library lib = session.library();
+    Backends b = session.backends();
     session.install(null, null);
+    if (b != null) {
+      b.close();
+    }
     if (lib != null) {
       closeQuietly(lib);
     }

@@ -6,7 +6,7 @@ import javafx.application.Application;
 import javafx.stage.Stage;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.service.Backends;
-import org.morphscout.app.gui.service.InterimBackends;
+import org.morphscout.app.gui.service.LibraryBackends;
 import org.morphscout.app.gui.task.FxTaskRunner;
 
 /**
@@ -15,7 +15,7 @@ import org.morphscout.app.gui.task.FxTaskRunner;
  */
 public final class MorphscoutApp extends Application {
   /** Which implementation serves each job; the one place to wire the library's services in. */
-  static final Backends.Factory BACKENDS = InterimBackends::create;
+  static final Backends.Factory BACKENDS = LibraryBackends::create;
   /** Thumbnails kept decoded (at {@link #THUMB_SIZE} px about 80 KB each). */
   static final int THUMB_CAPACITY = 1500;
   static final double THUMB_SIZE = 144;

@@ -46,6 +46,11 @@ public final class Session {
     library.set(lib);
   }
 
+  /** Replaces the backends of the open library (after indexing changed what they hold). */
+  public void refreshBackends(Backends b) {
+    backends.set(b);
+  }
+
   /** Records the rows the library pane loaded, so other panes can name images by id. */
   public void rows(List<ImageRow> rows) {
     Map<Long, ImageRow> m = new HashMap<>(rows.size() * 2);

@@ -1,0 +1,58 @@
+package org.morphscout.app.gui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.Color;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.app.gui.service.LibraryBackends;
+import org.morphscout.app.gui.service.ServiceSimilarity;
+import org.morphscout.app.gui.service.SimilarityMode;
+import org.morphscout.app.gui.task.DirectTaskRunner;
+import org.morphscout.indexer.catalog.ImageRow;
+
+/** The browser on the library's real services: a new catalog, indexing a folder, then a similarity search. */
+class RealServicesTest {
+  @TempDir Path tmp;
+
+  @Test
+  void newCatalogIndexAFolderAndFindSimilarShapes() throws Exception {
+    Path photos = Files.createDirectories(tmp.resolve("photos"));
+    String[] kinds = {"round", "square", "star"};
+    Color[] colours = {new Color(0xC0504D), new Color(0x4F81BD), new Color(0x9BBB59)};
+    for (String kind : kinds) {
+      for (int i = 0; i < 3; i++) {
+        SampleCatalog.Picture p = new SampleCatalog.Picture("", kind + "-" + i + ".png", kind, 0.5 + 0.15 * i,
+            colours[i], 0, 0, false);
+        ImageIO.write(SampleCatalog.draw(p, 320, 240, true), "png", photos.resolve(p.name()).toFile());
+      }
+    }
+    Files.write(photos.resolve("broken.jpg"), new byte[] {(byte) 0xFF, (byte) 0xD8, 0, 1});
+
+    try (MainViewModel vm = new MainViewModel(new DirectTaskRunner(), LibraryBackends::create)) {
+      vm.open(tmp.resolve("catalog"), true);
+      assertThat(vm.messageProperty().get()).isEmpty();
+      assertThat(vm.library().visible()).isEmpty();
+      vm.indexing().add(photos);
+      assertThat(vm.indexing().messageProperty().get()).isEmpty();
+      assertThat(vm.indexing().summaryProperty().get()).isEqualTo("10 found, 9 ready, 1 failed");
+      assertThat(vm.indexing().failures()).singleElement().satisfies(f -> {
+        assertThat(f.path()).endsWith("broken.jpg");
+        assertThat(f.reason()).isNotBlank();
+      });
+      assertThat(vm.library().visible()).hasSize(10);
+      assertThat(vm.session().backends().similarity()).isInstanceOf(ServiceSimilarity.class);
+
+      ImageRow round = vm.library().visible().stream().filter(r -> r.path().endsWith("round-0.png")).findFirst()
+          .orElseThrow();
+      vm.library().findSimilar(round, SimilarityMode.SHAPE);
+      assertThat(vm.library().messageProperty().get()).isEmpty();
+      // discs differ only in size and colour; the shape vector is scale-normalised, so they come first
+      assertThat(vm.library().visible().subList(0, 2)).extracting(ImageRow::path)
+          .allMatch(p -> p.contains("round-"));
+    }
+  }
+}
