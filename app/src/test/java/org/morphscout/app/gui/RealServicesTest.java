@@ -9,6 +9,7 @@ import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.gui.service.LibraryBackends;
+import org.morphscout.app.gui.service.ServicePairs;
 import org.morphscout.app.gui.service.ServiceSimilarity;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
@@ -53,6 +54,24 @@ class RealServicesTest {
       // discs differ only in size and colour; the shape vector is scale-normalised, so they come first
       assertThat(vm.library().visible().subList(0, 2)).extracting(ImageRow::path)
           .allMatch(p -> p.contains("round-"));
+
+      // partners through the real pair scorer: scores on the command line's 0..100 scale, a disc first
+      assertThat(vm.session().backends().pairs()).isInstanceOf(ServicePairs.class);
+      vm.pairs().showFor(round);
+      assertThat(vm.pairs().messageProperty().get()).isEmpty();
+      assertThat(vm.pairs().rows()).isNotEmpty().allSatisfy(r -> {
+        assertThat(r.suggestion().score()).isBetween(0.0, 100.0);
+        assertThat(r.suggestion().a()).isEqualTo(round.id());
+        assertThat(r.suggestion().components()).containsKeys("overlap", "warpEffort");
+      });
+      // a disc against a disc overlaps fully once aligned; against a star it cannot (overlap sub-score in [0, 1])
+      double discs = vm.pairs().rows().stream().filter(r -> r.nameB().startsWith("round-"))
+          .mapToDouble(r -> r.suggestion().components().get("overlap")).min().orElseThrow();
+      double stars = vm.pairs().rows().stream().filter(r -> r.nameB().startsWith("star-"))
+          .mapToDouble(r -> r.suggestion().components().get("overlap")).max().orElseThrow();
+      assertThat(discs).isGreaterThan(stars);
+      vm.pairs().approve(vm.pairs().rows().get(0));
+      assertThat(vm.pairs().rows().get(0).decisionProperty().get()).isEqualTo("approved");
     }
   }
 }

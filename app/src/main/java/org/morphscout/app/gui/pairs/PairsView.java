@@ -181,7 +181,7 @@ public final class PairsView extends BorderPane {
       protected void updateItem(Number v, boolean empty) {
         super.updateItem(v, empty);
         setText(empty || v == null || Double.isNaN(v.doubleValue()) ? null
-            : String.format(Locale.ROOT, Math.abs(v.doubleValue()) >= 10 ? "%.1f" : "%.3f", v.doubleValue()));
+            : String.format(Locale.ROOT, Math.abs(v.doubleValue()) >= 10 ? "%.1f" : "%.2f", v.doubleValue()));
       }
     });
     c.setPrefWidth(title.length() > 6 ? 80 : 56);
@@ -195,7 +195,10 @@ public final class PairsView extends BorderPane {
     return switch (component) {
       case "appearance" -> "Look";
       case "shape" -> "Shape";
-      case "colour" -> "ΔE";
+      case "overlap" -> "Overlap";
+      case "warpEffort" -> "Warp";
+      case "foldSafety" -> "Folds";
+      case "aspect" -> "Aspect";
       default -> component.length() > 10 ? component.substring(0, 10) : component;
     };
   }

@@ -8,18 +8,22 @@ import org.morphscout.indexer.library.QueryContext;
 
 /**
  * The browser's backends: the library's own services where they exist (similarity through the vector index,
- * indexing), the interim implementations for the rest (pairs, chains, walkthrough, preview) until their services land.
+ * indexing, pair scoring), the interim implementations for the rest (chains, walkthrough, preview) until their services land.
  * A catalog without a vector index yet falls back to exact search over the stored vectors.
  */
 public final class LibraryBackends {
+  /** Worker threads for pair scoring: leave one core to the window. */
+  static final int THREADS = Math.max(1, Runtime.getRuntime().availableProcessors() - 1);
+
   private LibraryBackends() {}
 
   public static Backends create(Library library) {
     Backends interim = InterimBackends.create(library);
     QueryContext context = new QueryContext(library, AnalysisSetup.defaults());
-    SimilarityBackend similarity = Files.isDirectory(library.catalog().vectorDir())
-        ? new ServiceSimilarity(context) : interim.similarity();
-    return new Backends(similarity, interim.pairs(), interim.chains(), interim.walk(), interim.preview(),
+    boolean indexed = Files.isDirectory(library.catalog().vectorDir());
+    SimilarityBackend similarity = indexed ? new ServiceSimilarity(context) : interim.similarity();
+    PairsBackend pairs = indexed ? new ServicePairs(context, THREADS) : interim.pairs();
+    return new Backends(similarity, pairs, interim.chains(), interim.walk(), interim.preview(),
         new ServiceIndexing(library, AnalysisSetup.defaults(), IndexOptions.defaults()), context);
   }
 }

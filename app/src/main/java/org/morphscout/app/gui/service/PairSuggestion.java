@@ -6,10 +6,11 @@ import java.util.Map;
 /**
  * A scored pair of catalog images.
  *
- * @param a smaller image id
- * @param b larger image id
- * @param score morph-friendliness in [0, 1], higher is better
- * @param components the named parts of the score (names are shown as column headers), insertion-ordered
+ * @param a first image id (the query image when partners of one image were asked for)
+ * @param b second image id
+ * @param score morph-friendliness in [0, 100], higher is better (the scale the command line prints)
+ * @param components the named parts of the score (names are shown as column headers), insertion-ordered; NaN when
+ *     a part could not be measured
  * @param reasons plain sentences explaining a WARN or FAIL (empty for a clean PASS)
  */
 public record PairSuggestion(long a, long b, double score, Map<String, Double> components, PairVerdict verdict,

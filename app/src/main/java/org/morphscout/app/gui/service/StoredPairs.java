@@ -118,8 +118,8 @@ public final class StoredPairs implements PairsBackend {
     components.put("appearance", d[0]);
     components.put("shape", d[1]);
     components.put("IoU", iou);
-    components.put("colour", deltaE);
-    return new PairSuggestion(a, b, score, components, verdict, reasons);
+    components.put("ΔE76", deltaE);
+    return new PairSuggestion(a, b, 100 * score, components, verdict, reasons);
   }
 
   private Optional<ImageAnalysis> analysis(long id) {
