@@ -72,6 +72,20 @@ class RealServicesTest {
       assertThat(discs).isGreaterThan(stars);
       vm.pairs().approve(vm.pairs().rows().get(0));
       assertThat(vm.pairs().rows().get(0).decisionProperty().get()).isEqualTo("approved");
+
+      // chains on the stored neighbour graph from the smallest to the largest disc
+      ImageRow big = vm.library().session().row(vm.library().session().rows().stream()
+          .filter(r -> r.path().endsWith("round-2.png")).findFirst().orElseThrow().id()).orElseThrow();
+      vm.session().startProperty().set(round);
+      vm.session().endProperty().set(big);
+      vm.chains().minStepsProperty().set(1);
+      vm.chains().run();
+      assertThat(vm.chains().messageProperty().get()).isEmpty();
+      assertThat(vm.chains().chains()).isNotEmpty().allSatisfy(c -> {
+        assertThat(c.images().get(0)).isEqualTo(round.id());
+        assertThat(c.images().get(c.images().size() - 1)).isEqualTo(big.id());
+        assertThat(c.maxStep()).isEqualTo(c.steps().stream().mapToDouble(s -> s.cost()).max().orElseThrow());
+      });
     }
   }
 }

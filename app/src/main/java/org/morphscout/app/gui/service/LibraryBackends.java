@@ -8,7 +8,8 @@ import org.morphscout.indexer.library.QueryContext;
 
 /**
  * The browser's backends: the library's own services where they exist (similarity through the vector index,
- * indexing, pair scoring), the interim implementations for the rest (chains, walkthrough, preview) until their services land.
+ * indexing, pair scoring, chains on the stored neighbour graph), the interim implementations for the rest
+ * (walkthrough, preview) until their services land.
  * A catalog without a vector index yet falls back to exact search over the stored vectors.
  */
 public final class LibraryBackends {
@@ -23,7 +24,8 @@ public final class LibraryBackends {
     boolean indexed = Files.isDirectory(library.catalog().vectorDir());
     SimilarityBackend similarity = indexed ? new ServiceSimilarity(context) : interim.similarity();
     PairsBackend pairs = indexed ? new ServicePairs(context, THREADS) : interim.pairs();
-    return new Backends(similarity, pairs, interim.chains(), interim.walk(), interim.preview(),
+    ChainsBackend chains = indexed ? new ServiceChains(context, interim.chains()) : interim.chains();
+    return new Backends(similarity, pairs, chains, interim.walk(), interim.preview(),
         new ServiceIndexing(library, AnalysisSetup.defaults(), IndexOptions.defaults()), context);
   }
 }
