@@ -29,6 +29,8 @@ public final class ChainFinder {
   private static final Logger LOG = LoggerFactory.getLogger(ChainFinder.class);
   /** Search rounds per wanted alternative before giving up on finding more diverse chains. */
   private static final int ROUNDS_PER_ALTERNATIVE = 4;
+  /** Relaxations allowed for the exact simple-chain bound (~0.1 s); beyond it the leg-by-leg heuristic runs. */
+  private static final long SIMPLE_SEARCH_BUDGET = 30_000_000L;
 
   private final IndexedGraph g;
 
@@ -65,19 +67,28 @@ public final class ChainFinder {
     double[] penalty = new double[n];
     Arrays.fill(penalty, 1.0);
 
+    double[][] legDistances = legDistances(stops, query);
+    double[][] bound = stageBounds(stops, legDistances);
     List<Chain> chains = new ArrayList<>();
     List<Set<Integer>> kept = new ArrayList<>();
     int rounds = ROUNDS_PER_ALTERNATIVE * query.alternatives();
+    boolean exactSimpleGaveUp = false;
     for (int round = 0; round < rounds && chains.size() < query.alternatives(); round++) {
-      LayeredChainSearch search =
-          new LayeredChainSearch(g, query.costModel(), penalty, blocked, query.minSteps(), query.maxSteps());
-      Optional<LayeredChainSearch.Walk> walk = search.search(stops, false);
+      LayeredChainSearch search = new LayeredChainSearch(
+          g, query.costModel(), penalty, blocked, query.minSteps(), query.maxSteps(), bound);
+      Optional<LayeredChainSearch.Walk> walk = search.search(stops);
       if (walk.isPresent() && !walk.get().isSimple()) {
-        walk = search.search(stops, true);
+        walk = !exactSimpleGaveUp && affordsExactSimple(stops.length - 1, query.maxSteps())
+            ? new SimpleChainSearch(search).search(stops)
+            : Optional.empty();
+        if (walk.isEmpty()) {
+          exactSimpleGaveUp = true; // later rounds are penalised variants of the same problem: skip straight on
+          walk = legByLeg(query, stops, penalty, blocked, legDistances);
+        }
       }
-      if (walk.isEmpty() || !walk.get().isSimple()) {
+      if (walk.isEmpty()) {
         if (round == 0) {
-          return noChain(query, stops, blocked, search.reached(), distanceToTarget);
+          return noChain(query, stops, blocked, distanceToTarget);
         }
         break;
       }
@@ -112,6 +123,104 @@ public final class ChainFinder {
     return ChainResult.found(chains);
   }
 
+  /**
+   * Heuristic fallback when the exact simple-chain search gives up: one leg at a time (start to first waypoint,
+   * and so on), each leg blocking the images earlier legs used and getting an equal share of the steps left
+   * (at least one); the last leg also carries what is left of minSteps. Not optimal (an early leg may take
+   * an image a later leg needed) but always simple.
+   */
+  private Optional<LayeredChainSearch.Walk> legByLeg(ChainQuery q, int[] stops, double[] penalty,
+      boolean[] blocked, double[][] legDistances) {
+    boolean[] used = blocked.clone();
+    List<Integer> nodes = new ArrayList<>();
+    List<Integer> edges = new ArrayList<>();
+    nodes.add(stops[0]);
+    int legs = stops.length - 1;
+    for (int leg = 0; leg < legs; leg++) {
+      int stepsSoFar = edges.size();
+      // An equal share of the steps left: with squared costs every leg would otherwise use all it may take.
+      int left = q.maxSteps() - stepsSoFar;
+      int max = leg == legs - 1 ? left : Math.max(1, left / (legs - leg));
+      int min = leg == legs - 1 ? Math.max(1, q.minSteps() - stepsSoFar) : 1;
+      if (max < min) {
+        return Optional.empty();
+      }
+      for (int v : nodes) {
+        used[v] = true;
+      }
+      used[stops[leg]] = false; // the leg's own start must stay usable as its start
+      double[][] legBound = legDistances == null ? null : new double[][] {legDistances[leg]};
+      LayeredChainSearch search = new LayeredChainSearch(g, q.costModel(), penalty, used, min, max, legBound);
+      int[] legStops = {stops[leg], stops[leg + 1]};
+      Optional<LayeredChainSearch.Walk> part = search.search(legStops);
+      if (part.isPresent() && !part.get().isSimple()) {
+        part = affordsExactSimple(1, max) ? new SimpleChainSearch(search).search(legStops) : Optional.empty();
+      }
+      if (part.isEmpty()) {
+        return Optional.empty();
+      }
+      for (int i = 1; i < part.get().nodes().length; i++) {
+        nodes.add(part.get().nodes()[i]);
+      }
+      for (int e : part.get().edges()) {
+        edges.add(e);
+      }
+    }
+    return Optional.of(new LayeredChainSearch.Walk(
+        nodes.stream().mapToInt(Integer::intValue).toArray(), edges.stream().mapToInt(Integer::intValue).toArray()));
+  }
+
+  /**
+   * Per leg, plain distances of every node to the leg's end, capped at a radius (null when the graph is not
+   * symmetric). The radius comes from the leg's plain shortest path: when its step count fits the query, its sum of
+   * squares bounds the optimum from above, and no useful node lies farther than {@link PlainDistances#radiusFor}.
+   * Otherwise the whole graph is searched. Any radius gives a valid bound; a good one just saves work.
+   */
+  private double[][] legDistances(int[] stops, ChainQuery q) {
+    if (!g.symmetric) {
+      return null;
+    }
+    int legs = stops.length - 1;
+    double[][] d = new double[legs][];
+    for (int leg = 0; leg < legs; leg++) {
+      PlainDistances plain = new PlainDistances(g, q.costModel(), stops[leg + 1]);
+      double radius = Double.POSITIVE_INFINITY;
+      if (plain.settle(stops[leg]) < Double.POSITIVE_INFINITY && legs == 1) {
+        double[] path = plain.squaredPathCost(stops[leg]);
+        if (path[1] >= q.minSteps() && path[1] <= q.maxSteps()) {
+          radius = PlainDistances.radiusFor(path[0], q.maxSteps());
+        }
+      }
+      d[leg] = plain.capped(radius);
+    }
+    return d;
+  }
+
+  /** Per stage, plain distance to the stage's next stop plus the plain lengths of the legs after it. */
+  private static double[][] stageBounds(int[] stops, double[][] legDistances) {
+    if (legDistances == null) {
+      return null;
+    }
+    int legs = legDistances.length;
+    double[][] bound = new double[legs][];
+    double tail = 0;
+    for (int s = legs - 1; s >= 0; s--) {
+      bound[s] = legDistances[s].clone();
+      if (tail > 0) {
+        for (int v = 0; v < bound[s].length; v++) {
+          bound[s][v] += tail;
+        }
+      }
+      tail += legDistances[s][stops[s]];
+    }
+    return bound;
+  }
+
+  /** Whether {@link SimpleChainSearch}'s bound (legs x layers x steps relaxations) fits the work budget. */
+  private boolean affordsExactSimple(int legs, int maxSteps) {
+    return (long) legs * (maxSteps + 1) * g.targets.length <= SIMPLE_SEARCH_BUDGET;
+  }
+
   private int[] chainNodes(Chain c) {
     return c.images().stream().mapToInt(g::index).toArray();
   }
@@ -130,13 +239,13 @@ public final class ChainFinder {
     return Chain.of(images, steps, overlap);
   }
 
-  private ChainResult noChain(ChainQuery q, int[] stops, boolean[] blocked, boolean[] reached,
-      DistanceToTarget distance) {
-    int start = stops[0];
+  private ChainResult noChain(ChainQuery q, int[] stops, boolean[] blocked, DistanceToTarget distance) {
+    // Closest reachable: any image within the step limit of the start, around avoided images.
+    int[] depth = depths(stops[0], blocked, q.maxSteps());
     long best = 0;
     double bestDistance = Double.POSITIVE_INFINITY;
-    for (int v = 0; v < reached.length; v++) {
-      if (reached[v] && v != start) {
+    for (int v = 0; v < depth.length; v++) {
+      if (depth[v] > 0 && v != stops[stops.length - 1]) {
         double d = distance.distance(g.ids[v]);
         if (d < bestDistance) {
           bestDistance = d;
@@ -161,6 +270,29 @@ public final class ChainFinder {
     }
     String hint = closest.isPresent() ? "; closest reachable image to the target: " + closest.getAsLong() : "";
     return ChainResult.none(base + ": " + why + hint, closest);
+  }
+
+  /** Breadth-first step counts from {@code start} up to {@code limit} steps around blocked images; -1 = not met. */
+  private int[] depths(int start, boolean[] blocked, int limit) {
+    int[] depth = new int[g.size()];
+    Arrays.fill(depth, -1);
+    ArrayDeque<Integer> queue = new ArrayDeque<>();
+    depth[start] = 0;
+    queue.add(start);
+    while (!queue.isEmpty()) {
+      int u = queue.poll();
+      if (depth[u] == limit) {
+        continue;
+      }
+      for (int e = g.offsets[u]; e < g.offsets[u + 1]; e++) {
+        int v = g.targets[e];
+        if (!blocked[v] && depth[v] < 0) {
+          depth[v] = depth[u] + 1;
+          queue.add(v);
+        }
+      }
+    }
+    return depth;
   }
 
   /** Fewest steps along the stops in order, ignoring the step bounds (breadth-first per leg); -1 if impossible. */

@@ -175,7 +175,7 @@ public final class InMemoryStepGraph implements StepGraph {
         c[k] = colour[e];
         x[k] = mixed[e];
       }
-      return new InMemoryStepGraph(new IndexedGraph(sorted, offsets, t, a, s, c, x));
+      return new InMemoryStepGraph(new IndexedGraph(sorted, offsets, t, a, s, c, x, true));
     }
   }
 }

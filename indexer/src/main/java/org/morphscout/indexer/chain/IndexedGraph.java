@@ -17,10 +17,13 @@ final class IndexedGraph {
   final double[] shape;
   final double[] colour;
   final double[] mixed;
+  /** Whether every step u->v has a step v->u with the same components (needed for backward bounds). */
+  final boolean symmetric;
   private final Map<Long, Integer> indexOf;
 
   IndexedGraph(long[] ids, int[] offsets, int[] targets, double[] appearance, double[] shape, double[] colour,
-      double[] mixed) {
+      double[] mixed, boolean symmetric) {
+    this.symmetric = symmetric;
     this.ids = ids;
     this.offsets = offsets;
     this.targets = targets;
@@ -68,7 +71,25 @@ final class IndexedGraph {
         k++;
       }
     }
-    return new IndexedGraph(ids, offsets, targets, a, s, c, x);
+    return new IndexedGraph(ids, offsets, targets, a, s, c, x, isSymmetric(offsets, targets, a, s, c));
+  }
+
+  private static boolean isSymmetric(int[] offsets, int[] targets, double[] a, double[] s, double[] c) {
+    Map<Long, Integer> slot = new HashMap<>(targets.length * 2);
+    for (int u = 0; u + 1 < offsets.length; u++) {
+      for (int e = offsets[u]; e < offsets[u + 1]; e++) {
+        slot.put(((long) u << 32) | targets[e], e);
+      }
+    }
+    for (int u = 0; u + 1 < offsets.length; u++) {
+      for (int e = offsets[u]; e < offsets[u + 1]; e++) {
+        Integer back = slot.get(((long) targets[e] << 32) | u);
+        if (back == null || a[back] != a[e] || s[back] != s[e] || c[back] != c[e]) {
+          return false;
+        }
+      }
+    }
+    return true;
   }
 
   int size() {

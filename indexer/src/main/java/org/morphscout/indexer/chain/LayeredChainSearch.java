@@ -19,12 +19,16 @@ import java.util.Optional;
  *       fewer steps can still matter; with loose bounds each node is expanded about once.</li>
  *   <li><i>Early stop.</i> The target is never expanded; the search ends when the cheapest open state costs no
  *       less than the best complete chain.</li>
+ *   <li><i>A* bound.</i> With plain distances L(v) to the target (see {@link PlainDistances}) and R steps left,
+ *       any completion costs at least L²/R (Cauchy-Schwarz). The bound is consistent, because
+ *       (c + L')²/R &lt;= c² + L'²/(R-1) for L &lt;= c + L', so states are still settled once, in order of
+ *       cost + bound (A*, Hart, Nilsson and Raphael 1968). Dominance then also compares costs explicitly, since
+ *       settling order no longer implies lower cost.</li>
  * </ul>
  *
  * <p><b>Simple chains.</b> The optimum above is over walks. A walk that repeats an image can win only when minSteps
- * forces extra steps or when two legs share an image; {@code simple} mode then forbids extending a state to an image
- * already on its own predecessor path (an O(maxSteps) check per step) and turns dominance off. That mode is a
- * heuristic (each state keeps one predecessor), which is why {@link ChainFinder} tries the exact mode first.
+ * forces extra steps or when two legs share an image; {@link ChainFinder} then falls back to
+ * {@link SimpleChainSearch}, which uses this class's transition rules and costs.
  *
  * <p>Not thread-safe; one instance per search.
  */
@@ -38,7 +42,7 @@ final class LayeredChainSearch {
   private final int minSteps;
   private final int maxSteps;
   private final int layers;
-  private boolean[] reached;
+  private final double[][] bound;
   private int[] parentState;
 
   /** A found walk: node indices and the edge slots between them. */
@@ -55,8 +59,13 @@ final class LayeredChainSearch {
     }
   }
 
+  /**
+   * @param bound per stage, a lower bound on the plain (unsquared, unpenalised) length from each node to the
+   *     target through the remaining waypoints, or null for none (plain Dijkstra)
+   */
   LayeredChainSearch(IndexedGraph g, StepCostModel model, double[] penalty, boolean[] blocked, int minSteps,
-      int maxSteps) {
+      int maxSteps, double[][] bound) {
+    this.bound = bound;
     this.g = g;
     this.wa = (1 - model.shapeWeight()) / model.appearanceScale();
     this.ws = model.shapeWeight();
@@ -74,13 +83,24 @@ final class LayeredChainSearch {
     return (wa * g.appearance[e] + ws * g.shape[e] + wc * g.colour[e]) * penalty[u] * penalty[v];
   }
 
-  /** Nodes settled by the last search (any stage): those reachable within the step limit. */
-  boolean[] reached() {
-    return reached;
+  IndexedGraph graph() {
+    return g;
+  }
+
+  boolean blocked(int v) {
+    return blocked[v];
+  }
+
+  int minSteps() {
+    return minSteps;
+  }
+
+  int maxSteps() {
+    return maxSteps;
   }
 
   /** The cheapest walk visiting {@code stops} in order (first = start, last = target), if any. */
-  Optional<Walk> search(int[] stops, boolean simple) {
+  Optional<Walk> search(int[] stops) {
     int n = g.size();
     int legs = stops.length - 1;
     long stateCount = (long) legs * n * layers;
@@ -98,39 +118,41 @@ final class LayeredChainSearch {
     parentState = new int[states];
     int[] parentEdge = new int[states];
     boolean[] settled = new boolean[states];
-    int[] bestHop = new int[legs * n]; // per (stage, node): least settled h >= minSteps (dominance)
+    int[] bestHop = new int[legs * n]; // per (stage, node): a settled h >= minSteps and its cost (dominance)
     Arrays.fill(bestHop, Integer.MAX_VALUE);
-    reached = new boolean[n];
+    double[] bestHopCost = new double[legs * n];
 
     StateHeap heap = new StateHeap(1024);
     int start = state(0, stops[0], 0, n);
     dist[start] = 0;
     parentState[start] = -1;
-    heap.push(0, start);
+    heap.push(estimate(0, stops[0], 0), start);
     double bestGoal = Double.POSITIVE_INFINITY;
     int goalParent = -1;
     int goalEdge = -1;
     int target = stops[legs];
 
     while (!heap.isEmpty() && heap.topKey() < bestGoal) {
-      double d = heap.topKey();
       int st = heap.topValue();
       heap.pop();
-      if (settled[st] || d > dist[st]) {
-        continue;
+      if (settled[st]) {
+        continue; // with a consistent bound the first pop of a state is its cheapest
       }
+      double d = dist[st];
       int h = st % layers;
       int stageNode = st / layers;
       int stage = stageNode / n;
       int u = stageNode % n;
-      if (!simple && h >= minSteps) {
-        if (bestHop[stageNode] <= h) {
-          continue; // dominated by a settled state with fewer (but enough) steps
+      if (h >= minSteps) {
+        if (bestHop[stageNode] <= h && bestHopCost[stageNode] <= d) {
+          continue; // dominated by a settled state with fewer (but enough) steps and no higher cost
         }
-        bestHop[stageNode] = h;
+        if (h < bestHop[stageNode]) {
+          bestHop[stageNode] = h;
+          bestHopCost[stageNode] = d;
+        }
       }
       settled[st] = true;
-      reached[u] = true;
       int h2 = h + 1;
       if (h2 > maxSteps) {
         continue;
@@ -148,9 +170,6 @@ final class LayeredChainSearch {
         if (h2 + (legs - stage2) > maxSteps) {
           continue; // not enough steps left for the remaining legs
         }
-        if (simple && onPath(st, v, n)) {
-          continue;
-        }
         double c = stepCost(u, e);
         double d2 = d + c * c;
         if (v == target) {
@@ -162,14 +181,17 @@ final class LayeredChainSearch {
           continue;
         }
         int s2 = state(stage2, v, h2, n);
-        if (!simple && h2 >= minSteps && bestHop[stage2 * n + v] <= h2) {
+        if (h2 >= minSteps && bestHop[stage2 * n + v] <= h2 && bestHopCost[stage2 * n + v] <= d2) {
           continue;
         }
         if (d2 < dist[s2]) {
-          dist[s2] = d2;
-          parentState[s2] = st;
-          parentEdge[s2] = e;
-          heap.push(d2, s2);
+          double f = d2 + estimate(stage2, v, h2);
+          if (f < bestGoal) {
+            dist[s2] = d2;
+            parentState[s2] = st;
+            parentEdge[s2] = e;
+            heap.push(f, s2);
+          }
         }
       }
     }
@@ -192,19 +214,20 @@ final class LayeredChainSearch {
     return Optional.of(new Walk(nodes, edges));
   }
 
+  /** Lower bound on the remaining sum of squares from (stage, node) after h steps: L²/R, R = steps left. */
+  private double estimate(int stage, int node, int h) {
+    if (bound == null) {
+      return 0;
+    }
+    double l = bound[stage][node];
+    int left = maxSteps - h;
+    if (left <= 0) {
+      return l == 0 ? 0 : Double.POSITIVE_INFINITY;
+    }
+    return l * l / left;
+  }
+
   private int state(int stage, int node, int h, int n) {
     return (stage * n + node) * layers + h;
   }
-
-  /** Whether node {@code v} lies on the predecessor path of state {@code st} (simple mode only). */
-  private boolean onPath(int st, int v, int n) {
-    // Parent pointers are only read for settled states, which never change once settled.
-    for (int s = st; s >= 0; s = parentState[s]) {
-      if ((s / layers) % n == v) {
-        return true;
-      }
-    }
-    return false;
-  }
-
 }

@@ -22,19 +22,22 @@ public final class NearDuplicates {
   }
 
   public boolean areDuplicates(ImageAnalysis a, ImageAnalysis b) {
-    if (!a.contentHash().isEmpty() && a.contentHash().equals(b.contentHash())) {
+    if (a.contentHash() != null && !a.contentHash().isEmpty() && a.contentHash().equals(b.contentHash())) {
       return true;
     }
     if (a.appearance() == null || b.appearance() == null || a.appearance().length != b.appearance().length
-        || a.appearance().length == 0 || !a.modelId().equals(b.modelId())) {
+        || a.appearance().length == 0 || !java.util.Objects.equals(a.modelId(), b.modelId())) {
       return false;
     }
     if (PairMeasures.cosine(a.appearance(), b.appearance()) < config.minCosine()) {
       return false;
     }
+    if (a.shape() == null || b.shape() == null) {
+      return false;
+    }
     float[] sa = a.shape().shapeVector();
     float[] sb = b.shape().shapeVector();
-    if (sa.length != sb.length || sa.length == 0 || distance(sa, sb) > config.maxShapeDistance()) {
+    if (sa == null || sb == null || sa.length != sb.length || sa.length == 0 || distance(sa, sb) > config.maxShapeDistance()) {
       return false;
     }
     double ra = a.width() / (double) a.height();

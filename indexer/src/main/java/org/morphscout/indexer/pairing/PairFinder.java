@@ -28,8 +28,9 @@ import org.slf4j.LoggerFactory;
  * apart. The image with the smaller id is A, except for {@link #findPartners}, where the query image is A.
  *
  * <p>Analyses are loaded through the loader as needed and not kept, so memory stays flat on large libraries; a
- * loader backed by a slow store should cache. A loader failure skips the pairs of that image and is reported in
- * {@link PairSearchResult#failures()}. Thread-safe; each search makes and shuts down its own pool.
+ * loader backed by a slow store should cache. A loader or scoring failure skips the pairs concerned and is reported
+ * in {@link PairSearchResult#failures()}. Candidates outside the given ids are scored too (the source defines the
+ * library). Thread-safe; each search makes and shuts down its own pool.
  */
 public final class PairFinder {
   private static final Logger LOG = LoggerFactory.getLogger(PairFinder.class);
@@ -183,7 +184,15 @@ public final class PairFinder {
       if (duplicates.areDuplicates(analysisA, analysisB)) {
         dups.add(new PairSearchResult.DuplicatePair(Math.min(a, b), Math.max(a, b)));
       } else {
-        pairs.add(new ScoredPair(a, b, scorer.score(analysisA, analysisB)));
+        try {
+          pairs.add(new ScoredPair(a, b, scorer.score(analysisA, analysisB)));
+        } catch (CancellationToken.CancelledException e) {
+          throw e;
+        } catch (RuntimeException e) {
+          // One malformed analysis must not end a library-wide search; report it with the pair.
+          LOG.warn("cannot score images {} and {}", a, b, e);
+          failures.add("images " + a + " and " + b + ": " + e.getMessage());
+        }
       }
     }
     return new Batch(a, bs.size(), pairs, dups, failures);

@@ -37,7 +37,7 @@ record PairMeasures(
   static PairMeasures of(ImageAnalysis a, ImageAnalysis b, WarpResult warp, ColourDifference colour) {
     double appearance = Double.NaN;
     if (a.appearance() != null && b.appearance() != null && a.appearance().length == b.appearance().length
-        && a.appearance().length > 0 && a.modelId().equals(b.modelId())) {
+        && a.appearance().length > 0 && java.util.Objects.equals(a.modelId(), b.modelId())) {
       appearance = 1 - cosine(a.appearance(), b.appearance());
     }
     ColourStats ca = a.colour();

@@ -12,10 +12,8 @@ import java.util.Arrays;
  *       reweighted least squares with Tukey's biweight on the joint Lab residual (Holland and Welsch, "Robust
  *       regression using iteratively reweighted least-squares", Comm. Statistics A6(9), 1977); it follows gradients
  *       and vignetting, and band pixels that belong to an object get weight 0;</li>
- *   <li>up to three colour modes from k-means (Lloyd 1982) over the band's Lab values, farthest-point seeded from
- *       the band's median so runs are deterministic; modes holding less than a minimum share of the band are dropped
- *       (an object cut by the frame must not become background). They cover two- and three-colour sets (wall and
- *       floor) that no smooth surface fits.</li>
+ *   <li>up to three colour modes of the band ({@link ColourModes}); they cover two- and three-colour sets (wall
+ *       and floor) that no smooth surface fits.</li>
  * </ul>
  * The band's robust spread (median + 3 * 1.4826 * MAD of the band's own distances, at least 1 Delta E) is the unit
  * the extractor thresholds in. Thread-safe (stateless).
@@ -29,7 +27,6 @@ final class BackgroundModel {
   record Fit(float[] distance, double spread, int modes) {}
 
   private static final int IRLS_ITERATIONS = 8;
-  private static final int KMEANS_ITERATIONS = 10;
   /** Tukey's biweight cut-off, in units of the median joint residual. */
   private static final double TUKEY_C = 4.0;
 
@@ -39,7 +36,7 @@ final class BackgroundModel {
     int bandWidth = Math.max(2, (int) Math.round(o.bandFraction() * Math.min(w, h)));
     int[] band = bandPixels(w, h, bandWidth);
     double[][] coef = fitSurface(lab, w, h, band, o.surfaceDegree());
-    float[][] modes = modes(lab, band, o.maxModes(), o.minModeShare());
+    float[][] modes = ColourModes.of(lab, band, o.maxModes(), o.minModeShare());
 
     float[] l = lab[0];
     float[] a = lab[1];
@@ -213,78 +210,6 @@ final class BackgroundModel {
       x[r] = s / a[r][r];
     }
     return x;
-  }
-
-  /** The band's colour modes (each {L, a, b}) that hold at least {@code minShare} of the band. */
-  private static float[][] modes(float[][] lab, int[] band, int k, double minShare) {
-    int n = band.length;
-    float[][] centres = new float[k][3];
-    for (int c = 0; c < 3; c++) {
-      float[] vals = new float[n];
-      for (int j = 0; j < n; j++) {
-        vals[j] = lab[c][band[j]];
-      }
-      centres[0][c] = (float) median(vals);
-    }
-    // Farthest-point seeding: deterministic, and it finds a second or third colour even when it is rare.
-    float[] minD = new float[n];
-    Arrays.fill(minD, Float.MAX_VALUE);
-    for (int m = 1; m < k; m++) {
-      int far = 0;
-      for (int j = 0; j < n; j++) {
-        minD[j] = Math.min(minD[j], dist2(lab, band[j], centres[m - 1]));
-        if (minD[j] > minD[far]) {
-          far = j;
-        }
-      }
-      for (int c = 0; c < 3; c++) {
-        centres[m][c] = lab[c][band[far]];
-      }
-    }
-    int[] assign = new int[n];
-    int[] counts = new int[k];
-    for (int it = 0; it < KMEANS_ITERATIONS; it++) {
-      double[][] sums = new double[k][3];
-      Arrays.fill(counts, 0);
-      for (int j = 0; j < n; j++) {
-        int best = 0;
-        float bestD = Float.MAX_VALUE;
-        for (int m = 0; m < k; m++) {
-          float dd = dist2(lab, band[j], centres[m]);
-          if (dd < bestD) {
-            bestD = dd;
-            best = m;
-          }
-        }
-        assign[j] = best;
-        counts[best]++;
-        for (int c = 0; c < 3; c++) {
-          sums[best][c] += lab[c][band[j]];
-        }
-      }
-      for (int m = 0; m < k; m++) {
-        if (counts[m] > 0) {
-          for (int c = 0; c < 3; c++) {
-            centres[m][c] = (float) (sums[m][c] / counts[m]);
-          }
-        }
-      }
-    }
-    float[][] kept = new float[k][];
-    int nk = 0;
-    for (int m = 0; m < k; m++) {
-      if (counts[m] > 0 && counts[m] >= minShare * n) {
-        kept[nk++] = centres[m];
-      }
-    }
-    return Arrays.copyOf(kept, nk);
-  }
-
-  private static float dist2(float[][] lab, int i, float[] c) {
-    float dl = lab[0][i] - c[0];
-    float da = lab[1][i] - c[1];
-    float db = lab[2][i] - c[2];
-    return dl * dl + da * da + db * db;
   }
 
   /** Median of the values (sorts the array in place). */

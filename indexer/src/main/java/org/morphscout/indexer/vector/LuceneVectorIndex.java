@@ -81,6 +81,7 @@ public final class LuceneVectorIndex implements VectorIndex {
     Files.createDirectories(dir);
     Directory directory = FSDirectory.open(dir);
     IndexWriter writer = null;
+    SearcherManager searchers = null;
     try {
       IndexWriterConfig config = new IndexWriterConfig()
           .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
@@ -91,14 +92,15 @@ public final class LuceneVectorIndex implements VectorIndex {
       if (!DirectoryReader.indexExists(directory)) {
         writer.commit(); // an empty first commit, so read-only openers find an index at once
       }
-      LuceneVectorIndex index = new LuceneVectorIndex(dir, options, directory, writer, new SearcherManager(writer, null));
+      searchers = new SearcherManager(writer, null);
+      LuceneVectorIndex index = new LuceneVectorIndex(dir, options, directory, writer, searchers);
       LOG.debug("Opened vector index {} for writing with {}", dir, options);
       return index;
     } catch (LockObtainFailedException e) {
-      IOUtils.closeWhileHandlingException(writer, directory);
+      IOUtils.closeWhileHandlingException(searchers, writer, directory);
       throw new MorphscoutException("catalog in use by another Morphscout process (vector index locked): " + dir, e);
     } catch (IOException | RuntimeException e) {
-      IOUtils.closeWhileHandlingException(writer, directory);
+      IOUtils.closeWhileHandlingException(searchers, writer, directory);
       throw LuceneFailures.translate(e, dir);
     }
   }
@@ -119,14 +121,15 @@ public final class LuceneVectorIndex implements VectorIndex {
       throw new MorphscoutException("No vector index at " + dir + ": index the catalog first.");
     }
     Directory directory = FSDirectory.open(dir);
+    SearcherManager searchers = null;
     try {
       if (!DirectoryReader.indexExists(directory)) {
         throw new MorphscoutException("No vector index at " + dir + ": index the catalog first.");
       }
-      SearcherManager searchers = new SearcherManager(directory, null);
+      searchers = new SearcherManager(directory, null);
       return new LuceneVectorIndex(dir, options, directory, null, searchers);
     } catch (IOException | RuntimeException e) {
-      IOUtils.closeWhileHandlingException(directory);
+      IOUtils.closeWhileHandlingException(searchers, directory);
       throw LuceneFailures.translate(e, dir);
     }
   }
@@ -169,6 +172,11 @@ public final class LuceneVectorIndex implements VectorIndex {
     }
   }
 
+  /**
+   * Makes the changes durable (fsync) and visible to this index's searches. Costs from a few to several hundred
+   * milliseconds depending on the disk, so indexing should commit in batches (say every few hundred images or few
+   * seconds), together with the catalog's own transaction.
+   */
   @Override
   public void commit() throws IOException {
     requireWritable();
@@ -242,10 +250,14 @@ public final class LuceneVectorIndex implements VectorIndex {
   }
 
   /**
-   * Read-only mode: switches to the newest commit on disk (another process's). Writer mode: nothing new to see, since
-   * {@link #commit()} already refreshes. Returns whether the searched state changed.
+   * Read-only mode: switches to the newest commit on disk (another process's). Writer mode: does nothing, since
+   * {@link #commit()} already refreshes (and refreshing here would expose uncommitted changes). Returns whether the
+   * searched state changed.
    */
   public boolean refresh() throws IOException {
+    if (writer != null) {
+      return false;
+    }
     IndexSearcher before = searchers.acquire();
     try {
       searchers.maybeRefreshBlocking();

@@ -14,12 +14,16 @@ package org.morphscout.indexer.warp;
  * <p>Departures from the paper, all deliberate: the images are truncated signed distance transforms of the masks
  * (not intensities), so the forces reach beyond the outline; the gradient is the symmetric (ESM) average of the fixed
  * and warped moving gradients, as the same authors recommend; the smoothing is applied to the displacement field
- * (s minus identity); a fixed iteration budget per pyramid level (with an early stop when the update vanishes)
- * replaces a convergence test; samples outside the grid are clamped to the border.
+ * (s minus identity); a fixed iteration budget per pyramid level, with an early stop when the update vanishes or
+ * the sum of squared differences stalls, replaces the paper's convergence test; samples outside the grid are clamped
+ * to the border.
  *
  * <p>Immutable and thread-safe: each call allocates its own working arrays.
  */
 public final class DemonsRegistration {
+  /** Relative energy improvement below which an iteration counts as stalled. */
+  private static final double STALL_RATIO = 0.005;
+
   private final DemonsConfig config;
 
   public DemonsRegistration(DemonsConfig config) {
@@ -130,12 +134,16 @@ public final class DemonsRegistration {
       float invSigmaX2 = 1f / (sigmaX * sigmaX);
       float[] gwx = tx;
       float[] gwy = ty;
+      double previousEnergy = Double.POSITIVE_INFINITY;
+      int stalled = 0;
       for (int it = 0; it < iterations; it++) {
         Grids.warp(m, s, s, ux, uy, wm);
         gradient(wm, gwx, gwy);
         double moved = 0;
+        double energy = 0;
         for (int i = 0; i < wm.length; i++) {
           float diff = f[i] - wm[i];
+          energy += diff * diff;
           float jx = 0.5f * (gfx[i] + gwx[i]);
           float jy = 0.5f * (gfy[i] + gwy[i]);
           float denom = jx * jx + jy * jy + diff * diff * invSigmaX2;
@@ -148,9 +156,16 @@ public final class DemonsRegistration {
           }
           moved += Math.abs(vx[i]) + Math.abs(vy[i]);
         }
+        // Stop when the update vanishes, or when the similarity energy (sum of squared differences) has improved
+        // by less than 0.5% for three iterations in a row.
         if (moved / wm.length < 1e-4) {
           break;
         }
+        stalled = energy > previousEnergy * (1 - STALL_RATIO) ? stalled + 1 : 0;
+        if (stalled >= 3) {
+          break;
+        }
+        previousEnergy = Math.min(previousEnergy, energy);
         fluid.smooth(vx);
         fluid.smooth(vy);
         exponentiate();

@@ -2,8 +2,8 @@ package org.morphscout.indexer.warp;
 
 /**
  * Separable Gaussian smoothing of a flat float grid, in place. Near the border the kernel is cut and renormalised,
- * so a constant field (a pure translation) stays exactly constant. Not thread-safe (holds scratch); make one per
- * registration.
+ * so a constant field (a pure translation) stays constant (up to float rounding). Not thread-safe (holds scratch);
+ * make one per registration.
  */
 final class GaussianSmoother {
   private final float[] kernel;

@@ -8,7 +8,8 @@ import org.morphscout.indexer.silhouette.Mask;
  * Aligns mask B onto mask A by a similarity transform computed from image moments: centroids are matched, B is
  * scaled by sqrt(area A / area B), and rotated so its principal axis (from the central second moments) lies on A's.
  * An axis has two directions, so the rotation and the rotation plus pi are both tried; with mirroring allowed, the
- * left-right flipped B is tried as well. The candidate whose masks overlap best (soft IoU on the canvas) wins.
+ * left-right flipped B is tried as well. The candidate whose masks overlap best (soft IoU on the canvas) wins; near
+ * ties (within {@link #TIE_MARGIN}) go to the smaller rotation and to no flip.
  *
  * <p>Departure from a pure moment method: when either shape is nearly isotropic (anisotropy below
  * {@link #ISOTROPY_LIMIT}) its principal axis is noise, so the unrotated candidates are tried too.
@@ -19,6 +20,12 @@ import org.morphscout.indexer.silhouette.Mask;
 public final class SimilarityAlignment {
   /** Below this anisotropy ((l1 - l2) / (l1 + l2) of the second moments) the principal axis is not trusted. */
   static final double ISOTROPY_LIMIT = 0.05;
+
+  /** A less preferred candidate must beat a more preferred one by this much IoU to be chosen. */
+  static final double TIE_MARGIN = 0.01;
+
+  /** Preference cost of a flip, in radians of rotation: a flip is preferred over turning more than 90 degrees. */
+  private static final double MIRROR_COST = 0.5 * Math.PI;
 
   private final int gridSize;
   private final boolean allowMirror;
@@ -64,13 +71,17 @@ public final class SimilarityAlignment {
         candidates.add(Similarity.through(scale, rot, mirror, mb.cx(), mb.cy(), ma.cx(), ma.cy()));
       }
     }
+    // Prefer upright and unflipped: photographs are mostly taken upright, and symmetric outlines (an egg, a bottle)
+    // give near-equal overlaps for several candidates that differ only by pixel noise.
+    candidates.sort(java.util.Comparator.comparingDouble(
+        (Similarity c) -> Math.abs(c.rotation()) + (c.mirror() ? MIRROR_COST : 0)));
     Similarity best = null;
     float[] bestB = null;
     double bestIou = -1;
     for (Similarity sim : candidates) {
       float[] gridB = Grids.rasterise(b, canvas, sim);
       double iou = Grids.iou(gridA, gridB);
-      if (iou > bestIou + 1e-9) {
+      if (iou > bestIou + TIE_MARGIN) {
         best = sim;
         bestB = gridB;
         bestIou = iou;

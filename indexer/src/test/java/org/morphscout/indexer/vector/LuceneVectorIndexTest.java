@@ -96,6 +96,24 @@ class LuceneVectorIndexTest extends VectorIndexContractTest {
   }
 
   @Test
+  void refreshOnTheWriterDoesNotExposeUncommittedChanges() throws IOException {
+    fill(0, 5);
+    index.upsert(99, TestVectors.randomUnit(random, APPEARANCE_DIM), null);
+    assertThat(((LuceneVectorIndex) index).refresh()).isFalse();
+    assertThat(index.ids()).hasSize(5).doesNotContain(99L);
+  }
+
+  @Test
+  void vectorsLongerThanLuceneSupportsAreRejectedClearly() {
+    // Lucene's per-field vector formats accept at most 1024 dimensions (KnnVectorsFormat.DEFAULT_MAX_DIMENSIONS).
+    assertThatThrownBy(() -> index.upsert(3, TestVectors.randomUnit(random, 1025), null))
+        .isInstanceOf(MorphscoutException.class)
+        .hasMessageContaining("Image 3")
+        .hasMessageContaining("1025 dimensions")
+        .hasMessageContaining("at most 1024");
+  }
+
+  @Test
   void forceMergeKeepsEveryImage() throws IOException {
     LuceneVectorIndex lucene = (LuceneVectorIndex) index;
     for (int batch = 0; batch < 4; batch++) {

@@ -1,0 +1,42 @@
+package org.morphscout.app.cli;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.morphscout.indexer.pairing.PairScore;
+
+/** Turns pair scores into JSON objects and CSV cells the same way for every command. */
+final class PairRows {
+  private PairRows() {}
+
+  static Map<String, Object> json(String a, String b, PairScore s) {
+    Map<String, Object> row = new LinkedHashMap<>();
+    row.put("a", a);
+    row.put("b", b);
+    row.put("score", round(s.score(), 1));
+    row.put("verdict", s.verdict().label());
+    row.put("components", rounded(s.components()));
+    row.put("measures", rounded(s.measures()));
+    row.put("reasons", s.reasons());
+    return row;
+  }
+
+  static Map<String, Double> rounded(Map<String, Double> values) {
+    Map<String, Double> out = new LinkedHashMap<>();
+    values.forEach((k, v) -> out.put(k, round(v, 4)));
+    return out;
+  }
+
+  static double round(double v, int decimals) {
+    if (!Double.isFinite(v)) {
+      return v;
+    }
+    double f = Math.pow(10, decimals);
+    return Math.round(v * f) / f;
+  }
+
+  /** Reasons joined for one CSV cell or one text line. */
+  static String reasons(List<String> reasons) {
+    return String.join("; ", reasons);
+  }
+}

@@ -1,0 +1,154 @@
+package org.morphscout.app.cli;
+
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.catalog.DecisionStore;
+import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.PairService;
+import org.morphscout.indexer.library.QueryContext;
+import org.morphscout.indexer.pairing.PairQuery;
+import org.morphscout.indexer.pairing.PairSearchResult;
+import org.morphscout.indexer.pairing.ScoredPair;
+import org.morphscout.indexer.progress.CancellationToken;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout pairs}: the most morph-friendly pairs of the library, or partners of one image. */
+@Command(
+    name = "pairs",
+    mixinStandardHelpOptions = true,
+    header = "List the most morph-friendly pairs in the library, or the best partners of one image.",
+    description = "Candidates come from the vector index (similar outline or appearance) and are scored exactly: "
+        + "silhouette overlap after alignment, warp effort and fold risk, appearance and colour gaps, framing. "
+        + "Score 0-100 with a verdict (pass >= passScore, warn >= warnScore, else fail) and reasons. Near-duplicates "
+        + "(the same picture resized, recompressed or lightly edited) are never proposed; --duplicates lists them.")
+final class PairsCommand implements Callable<Integer> {
+  @ParentCommand MorphscoutCommand root;
+  @Spec CommandSpec spec;
+  @Mixin AnalysisOptions analysis;
+  @Mixin ScoreOptions scoring;
+
+  @Option(names = "--for", paramLabel = "<image>", description = "Best partners of this image (catalog or any file).")
+  String forImage;
+
+  @Option(names = "--top", paramLabel = "<n>", defaultValue = "20", description = "How many (default: ${DEFAULT-VALUE}).")
+  int top;
+
+  @Option(names = "--min-score", paramLabel = "<s>", defaultValue = "0",
+      description = "Leave out pairs scoring below this (default: ${DEFAULT-VALUE}).")
+  double minScore;
+
+  @Option(names = "--candidates", paramLabel = "<k>", defaultValue = "20",
+      description = "Candidates per image taken from the index (default: ${DEFAULT-VALUE}).")
+  int candidates;
+
+  @Option(names = "--duplicates", description = "List the near-duplicates found instead of pairs.")
+  boolean duplicates;
+
+  @ArgGroup(exclusive = true)
+  OutputFormat format = new OutputFormat();
+
+  @Override
+  public Integer call() throws Exception {
+    PrintWriter out = spec.commandLine().getOut();
+    PairQuery query = new PairQuery(candidates, top, minScore);
+    try (Library library = Library.openExisting(root.catalogDir());
+        QueryContext context = new QueryContext(library, analysis.setup())) {
+      PairService service = new PairService(context, scoring.config());
+      PairSearchResult result;
+      if (forImage != null) {
+        ImageAnalysis image = context.resolve(forImage);
+        result = service.partners(image, query, TerminalProgress.forTerminal(format.json || format.csv),
+            CancellationToken.none());
+      } else {
+        result = service.bestPairs(query, TerminalProgress.forTerminal(format.json || format.csv),
+            CancellationToken.none());
+      }
+      Paths paths = new Paths(context, forImage == null ? null : context.resolve(forImage).path());
+      if (duplicates) {
+        printDuplicates(out, result, paths);
+      } else {
+        printPairs(out, result, paths, library.decisions());
+      }
+      return ExitCodes.OK;
+    }
+  }
+
+  /** Paths by id; -1 stands for an image outside the catalog. */
+  private record Paths(QueryContext context, String outside) {
+    String of(long id) {
+      if (id < 0) {
+        return outside;
+      }
+      return context.library().images().byId(id).map(r -> r.path()).orElse("#" + id);
+    }
+  }
+
+  private void printPairs(PrintWriter out, PairSearchResult result, Paths paths, DecisionStore decisions) {
+    if (format.json) {
+      List<Map<String, Object>> rows = new ArrayList<>();
+      for (ScoredPair p : result.pairs()) {
+        Map<String, Object> row = PairRows.json(paths.of(p.a()), paths.of(p.b()), p.score());
+        decisions.find(p.a(), p.b()).ifPresent(d -> row.put("decision", d.verdict().word()));
+        rows.add(row);
+      }
+      Map<String, Object> doc = new LinkedHashMap<>();
+      doc.put("pairs", rows);
+      doc.put("duplicatesExcluded", result.duplicates().size());
+      doc.put("scored", result.scored());
+      JsonOut.write(out, doc);
+      return;
+    }
+    if (format.csv) {
+      try (CsvOut csv = new CsvOut(out, "a", "b", "score", "verdict", "reasons", "decision")) {
+        for (ScoredPair p : result.pairs()) {
+          csv.row(paths.of(p.a()), paths.of(p.b()), PairRows.round(p.score().score(), 1), p.score().verdict().label(),
+              PairRows.reasons(p.score().reasons()),
+              decisions.find(p.a(), p.b()).map(d -> d.verdict().word()).orElse(""));
+        }
+      }
+      return;
+    }
+    if (result.pairs().isEmpty()) {
+      out.println("no pairs found" + (minScore > 0 ? " scoring at least " + minScore : ""));
+    }
+    int rank = 0;
+    for (ScoredPair p : result.pairs()) {
+      String decided = decisions.find(p.a(), p.b()).map(d -> "  [" + d.verdict().word() + "]").orElse("");
+      out.printf("%2d. %5s %-4s %s%n             %s%s%n", ++rank, Text.num(p.score().score(), 1),
+          p.score().verdict().label(), paths.of(p.a()), paths.of(p.b()), decided);
+      if (!p.score().reasons().isEmpty()) {
+        out.printf("             %s%n", PairRows.reasons(p.score().reasons()));
+      }
+    }
+    out.printf("(%d pairs scored; %d near-duplicate pairs left out: pairs --duplicates lists them)%n", result.scored(),
+        result.duplicates().size());
+  }
+
+  private void printDuplicates(PrintWriter out, PairSearchResult result, Paths paths) {
+    if (format.json) {
+      List<Map<String, String>> rows = new ArrayList<>();
+      result.duplicates().forEach(d -> rows.add(Map.of("a", paths.of(d.a()), "b", paths.of(d.b()))));
+      JsonOut.write(out, Map.of("duplicates", rows));
+    } else if (format.csv) {
+      try (CsvOut csv = new CsvOut(out, "a", "b")) {
+        result.duplicates().forEach(d -> csv.row(paths.of(d.a()), paths.of(d.b())));
+      }
+    } else {
+      if (result.duplicates().isEmpty()) {
+        out.println("no near-duplicates found");
+      }
+      result.duplicates().forEach(d -> out.printf("%s%n  = %s%n", paths.of(d.a()), paths.of(d.b())));
+    }
+  }
+}

@@ -1,0 +1,64 @@
+package org.morphscout.indexer.library;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import javax.imageio.ImageIO;
+import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.library.ChainService.ChainAnswer;
+import org.morphscout.indexer.library.ChainService.ChainDetail;
+import org.morphscout.indexer.library.ChainService.StepDetail;
+import org.morphscout.indexer.preview.ContactSheet;
+import org.morphscout.indexer.preview.ContactSheetRow;
+
+/** Contact sheets of chains and walkthroughs, from the catalog's thumbnails. */
+public final class Sheets {
+  private Sheets() {}
+
+  /** One row per chain; between thumbnails, each step's pair score (0-100). */
+  public static void chains(Library library, ChainAnswer answer, Path file) throws IOException {
+    List<ContactSheetRow> rows = new ArrayList<>();
+    int n = 0;
+    for (ChainDetail d : answer.chains()) {
+      List<ContactSheetRow.Tile> tiles = new ArrayList<>();
+      for (long id : d.chain().images()) {
+        tiles.add(tile(library, id));
+      }
+      List<Double> scores = d.steps().stream().map(StepDetail::score).map(s -> s.score()).toList();
+      rows.add(new ContactSheetRow(String.format(Locale.ROOT, "chain %d · %d steps · largest step %.3f · evenness %.2f",
+          ++n, d.steps().size(), d.chain().maxStep(), d.chain().evenness()), tiles, scores));
+    }
+    String title = "Chains from " + name(answer.from().path()) + " to " + name(answer.to().path())
+        + String.format(Locale.ROOT, " (direct pair score %.0f)", answer.direct().score());
+    new ContactSheet().writePng(title, rows, file);
+  }
+
+  /** One sequence (a walkthrough); between thumbnails, each step's cost. */
+  public static void sequence(Library library, String title, String caption, List<Long> ids, List<Double> steps,
+      Path file) throws IOException {
+    List<ContactSheetRow.Tile> tiles = new ArrayList<>();
+    for (long id : ids) {
+      tiles.add(tile(library, id));
+    }
+    new ContactSheet().writePng(title, List.of(new ContactSheetRow(caption, tiles, steps)), file);
+  }
+
+  private static ContactSheetRow.Tile tile(Library library, long id) throws IOException {
+    Optional<ImageRow> row = library.images().byId(id);
+    String caption = row.map(r -> name(r.path())).orElse("#" + id);
+    Optional<Path> thumb = library.catalog().thumbnail(id);
+    BufferedImage image = thumb.isPresent() ? ImageIO.read(thumb.get().toFile()) : null;
+    if (image == null) {
+      image = new BufferedImage(8, 8, BufferedImage.TYPE_INT_RGB);
+    }
+    return new ContactSheetRow.Tile(image, caption);
+  }
+
+  private static String name(String path) {
+    return Path.of(path).getFileName().toString();
+  }
+}

@@ -1,0 +1,56 @@
+package org.morphscout.indexer.preview;
+
+import java.awt.Color;
+import java.awt.Graphics2D;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import javax.imageio.ImageIO;
+
+/** Lays frames side by side in one image (a strip) and writes it as PNG, for reports and quick looks. Stateless. */
+public final class FrameStrip {
+  private FrameStrip() {}
+
+  /**
+   * The frames left to right, top-aligned, separated by {@code gap} pixels of {@code background}.
+   *
+   * @param gap pixels between frames, 0..1000
+   */
+  public static BufferedImage compose(List<BufferedImage> frames, int gap, Color background) {
+    if (frames.isEmpty()) {
+      throw new IllegalArgumentException("a frame strip needs at least one frame");
+    }
+    if (gap < 0 || gap > 1000) {
+      throw new IllegalArgumentException("strip gap must be 0..1000 pixels, got " + gap);
+    }
+    long width = (long) gap * (frames.size() - 1);
+    int height = 0;
+    for (BufferedImage f : frames) {
+      width += f.getWidth();
+      height = Math.max(height, f.getHeight());
+    }
+    if (width > 65_535) {
+      throw new IllegalArgumentException("strip would be " + width + " pixels wide; use fewer or smaller frames");
+    }
+    BufferedImage out = new BufferedImage((int) width, height, BufferedImage.TYPE_INT_ARGB);
+    Graphics2D g = out.createGraphics();
+    g.setColor(background);
+    g.fillRect(0, 0, out.getWidth(), height);
+    int x = 0;
+    for (BufferedImage f : frames) {
+      g.drawImage(f, x, 0, null);
+      x += f.getWidth() + gap;
+    }
+    g.dispose();
+    return out;
+  }
+
+  /** Writes the strip (4-pixel white gaps) as a PNG file. */
+  public static void write(List<BufferedImage> frames, Path file) throws IOException {
+    BufferedImage strip = compose(frames, 4, Color.WHITE);
+    if (!ImageIO.write(strip, "png", file.toFile())) {
+      throw new IOException("no PNG writer available for " + file);
+    }
+  }
+}
