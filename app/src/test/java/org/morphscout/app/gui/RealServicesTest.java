@@ -11,6 +11,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.gui.service.LibraryBackends;
 import org.morphscout.app.gui.service.ServicePairs;
 import org.morphscout.app.gui.service.ServiceSimilarity;
+import org.morphscout.app.gui.service.ServiceWalk;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
 import org.morphscout.indexer.catalog.ImageRow;
@@ -57,6 +58,7 @@ class RealServicesTest {
 
       // partners through the real pair scorer: scores on the command line's 0..100 scale, a disc first
       assertThat(vm.session().backends().pairs()).isInstanceOf(ServicePairs.class);
+      assertThat(vm.session().backends().walk()).isInstanceOf(ServiceWalk.class);
       vm.pairs().showFor(round);
       assertThat(vm.pairs().messageProperty().get()).isEmpty();
       assertThat(vm.pairs().rows()).isNotEmpty().allSatisfy(r -> {
@@ -85,7 +87,23 @@ class RealServicesTest {
         assertThat(c.images().get(0)).isEqualTo(round.id());
         assertThat(c.images().get(c.images().size() - 1)).isEqualTo(big.id());
         assertThat(c.maxStep()).isEqualTo(c.steps().stream().mapToDouble(s -> s.cost()).max().orElseThrow());
+        assertThat(c.steps()).allSatisfy(s -> assertThat(s.components()).containsKey("pair score"));
       });
+
+      // a walkthrough of the three discs and a star keeps the discs together (same shape, scale-normalised)
+      vm.session().selection().setAll(vm.session().rows().stream().filter(r -> r.path().contains("round-")
+          || r.path().endsWith("star-1.png")).toList());
+      vm.walkthrough().useSelection();
+      vm.walkthrough().order();
+      assertThat(vm.walkthrough().messageProperty().get()).isEmpty();
+      assertThat(vm.walkthrough().steps()).hasSize(3);
+      int star = -1;
+      for (int i = 0; i < 4; i++) {
+        if (vm.walkthrough().strip().get(i).path().endsWith("star-1.png")) {
+          star = i;
+        }
+      }
+      assertThat(star).isIn(0, 3);
     }
   }
 }

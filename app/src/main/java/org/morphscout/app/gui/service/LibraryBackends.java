@@ -2,30 +2,34 @@ package org.morphscout.app.gui.service;
 
 import java.nio.file.Files;
 import org.morphscout.indexer.library.AnalysisSetup;
+import org.morphscout.indexer.library.ChainService;
 import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.PairService;
 import org.morphscout.indexer.library.QueryContext;
+import org.morphscout.indexer.library.WalkService;
+import org.morphscout.indexer.pairing.ScoreConfig;
 
 /**
- * The browser's backends: the library's own services where they exist (similarity through the vector index,
- * indexing, pair scoring, chains on the stored neighbour graph), the interim implementations for the rest
- * (walkthrough, preview) until their services land.
- * A catalog without a vector index yet falls back to exact search over the stored vectors.
+ * The browser's backends: the library's own services (similarity through the vector index, pairs, chains,
+ * walkthroughs, indexing), with the command line's defaults. Until a catalog has a vector index (nothing indexed yet,
+ * or a catalog written by other means) the interim implementations serve from the stored vectors instead. The
+ * preview stays interim (a cross-dissolve) until a preview service lands.
  */
 public final class LibraryBackends {
-  /** Worker threads for pair scoring: leave one core to the window. */
-  static final int THREADS = Math.max(1, Runtime.getRuntime().availableProcessors() - 1);
-
   private LibraryBackends() {}
 
   public static Backends create(Library library) {
     Backends interim = InterimBackends.create(library);
     QueryContext context = new QueryContext(library, AnalysisSetup.defaults());
-    boolean indexed = Files.isDirectory(library.catalog().vectorDir());
-    SimilarityBackend similarity = indexed ? new ServiceSimilarity(context) : interim.similarity();
-    PairsBackend pairs = indexed ? new ServicePairs(context, THREADS) : interim.pairs();
-    ChainsBackend chains = indexed ? new ServiceChains(context, interim.chains()) : interim.chains();
-    return new Backends(similarity, pairs, chains, interim.walk(), interim.preview(),
-        new ServiceIndexing(library, AnalysisSetup.defaults(), IndexOptions.defaults()), context);
+    IndexingBackend indexing = new ServiceIndexing(library, AnalysisSetup.defaults(), IndexOptions.defaults());
+    if (!Files.isDirectory(library.catalog().vectorDir())) {
+      return new Backends(interim.similarity(), interim.pairs(), interim.chains(), interim.walk(), interim.preview(),
+          indexing, context);
+    }
+    PairService pairs = new PairService(context, ScoreConfig.DEFAULTS);
+    return new Backends(new ServiceSimilarity(context), new ServicePairs(context, pairs),
+        new ServiceChains(context, new ChainService(context, pairs)), new ServiceWalk(context, new WalkService(context)),
+        interim.preview(), indexing, context);
   }
 }
