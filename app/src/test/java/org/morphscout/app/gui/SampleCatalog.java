@@ -40,10 +40,21 @@ public final class SampleCatalog {
 
   private SampleCatalog() {}
 
-  /** Creates the catalog under {@code dir/catalog} and pictures under {@code dir/photos}; returns the catalog dir. */
-  public static Path create(Path dir, long seed) throws IOException {
-    Path catalogDir = dir.resolve("catalog");
-    Path photos = dir.resolve("photos");
+  /**
+   * Writes the pictures (and one damaged file) under {@code photos}, without a catalog, for tests that index them
+   * with the real indexer.
+   */
+  public static void writePictures(Path photos, long seed) throws IOException {
+    for (Picture p : pictures(seed)) {
+      Path file = photos.resolve(p.folder()).resolve(p.name());
+      Files.createDirectories(file.getParent());
+      ImageIO.write(draw(p, 320, 240, true), "png", file.toFile());
+    }
+    Files.createDirectories(photos.resolve("street"));
+    Files.write(photos.resolve("street").resolve("broken.jpg"), new byte[] {(byte) 0xFF, (byte) 0xD8, 1, 2, 3});
+  }
+
+  static List<Picture> pictures(long seed) {
     Random rnd = new Random(seed);
     List<Picture> pictures = new ArrayList<>();
     String[] kinds = {"round", "oval", "square", "tile", "star", "kite"};
@@ -61,6 +72,14 @@ public final class SampleCatalog {
     }
     pictures.add(new Picture("street", "round-cut.png", "round", 1.25, colours[0], 0.35, 0, false));
     pictures.add(new Picture("studio", "pair-of-tiles.png", "tile", 0.4, colours[2], 0, 0, true));
+    return pictures;
+  }
+
+  /** Creates the catalog under {@code dir/catalog} and pictures under {@code dir/photos}; returns the catalog dir. */
+  public static Path create(Path dir, long seed) throws IOException {
+    Path catalogDir = dir.resolve("catalog");
+    Path photos = dir.resolve("photos");
+    List<Picture> pictures = pictures(seed);
     try (Library lib = Library.open(catalogDir)) {
       lib.features().registerModel(MODEL, 8, "invented test vectors");
       long rootId = lib.images().ensureRoot(photos);

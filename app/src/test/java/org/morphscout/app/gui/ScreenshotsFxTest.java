@@ -19,7 +19,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.gui.common.ThumbnailCache;
-import org.morphscout.app.gui.service.InterimBackends;
+import org.morphscout.app.gui.service.LibraryBackends;
 import org.morphscout.app.gui.task.FxTaskRunner;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.testfx.framework.junit5.ApplicationExtension;
@@ -27,7 +27,8 @@ import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;
 
 /**
- * Writes a PNG of each pane, on the sample catalog with the interim backends, to {@code target/screenshots}, or to the
+ * Writes a PNG of each pane, on the sample pictures indexed by the real indexer and served by the library's services,
+ * to {@code target/screenshots}, or to the
  * folder named by {@code -Dmorphscout.screenshots=<dir>} (the docs use {@code docs/screenshots}). Checks that each
  * picture has real content (many distinct colours), so a blank snapshot fails.
  */
@@ -46,7 +47,7 @@ class ScreenshotsFxTest {
   @Start
   void start(Stage stage) {
     runner = new FxTaskRunner(2);
-    vm = new MainViewModel(runner, InterimBackends::create);
+    vm = new MainViewModel(runner, LibraryBackends::create);
     thumbs = new ThumbnailCache(id -> vm.session().thumbnail(id), 144, 300);
     MainView view = new MainView(vm, thumbs);
     view.split().setDividerPositions(0.76);
@@ -64,7 +65,7 @@ class ScreenshotsFxTest {
   }
 
   static void waitUntil(BooleanSupplier condition) throws Exception {
-    WaitForAsyncUtils.waitFor(20, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition::getAsBoolean).get());
+    WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition::getAsBoolean).get());
   }
 
   static void fx(Runnable r) throws Exception {
@@ -94,9 +95,19 @@ class ScreenshotsFxTest {
   void everyPane() throws Exception {
     String target = System.getProperty("morphscout.screenshots");
     Path dir = Files.createDirectories(target == null ? Path.of("target", "screenshots") : Path.of(target));
-    Path catalog = SampleCatalog.create(tmp, 5L);
-    fx(() -> vm.open(catalog, false));
-    waitUntil(() -> vm.library().visible().size() == 27);
+    Path photos = tmp.resolve("photos");
+    SampleCatalog.writePictures(photos, 5L);
+    fx(() -> vm.open(tmp.resolve("catalog"), true));
+    waitUntil(() -> vm.session().library() != null);
+    fx(() -> {
+      vm.session().paneProperty().set(Pane.INDEXING);
+      vm.indexing().add(photos);
+    });
+    waitUntil(() -> !vm.indexing().runningProperty().get());
+    assertThat(vm.indexing().messageProperty().get()).isEmpty();
+    waitUntil(() -> vm.library().visible().size() == 27 && vm.indexing().failures().size() == 1);
+    shoot(dir, "indexing");
+    fx(() -> vm.session().paneProperty().set(Pane.LIBRARY));
     fx(() -> {
       vm.session().selectedProperty().set(row("star-02.png"));
       vm.session().selection().setAll(row("star-02.png"));
@@ -111,11 +122,12 @@ class ScreenshotsFxTest {
 
     fx(() -> {
       vm.session().startProperty().set(row("round-01.png"));
-      vm.session().endProperty().set(row("square-04.png"));
+      vm.session().endProperty().set(row("tile-04.png"));
       vm.session().paneProperty().set(Pane.CHAINS);
       vm.chains().run();
     });
     waitUntil(() -> !vm.chains().runningProperty().get());
+    assertThat(vm.chains().messageProperty().get()).isEmpty();
     assertThat(vm.chains().chains()).isNotEmpty();
     fx(() -> vm.chains().preview(vm.chains().chains().get(0)));
     waitUntil(() -> vm.chains().previewProperty().get() != null);
@@ -123,9 +135,11 @@ class ScreenshotsFxTest {
 
     fx(() -> {
       vm.session().paneProperty().set(Pane.PAIRS);
-      vm.pairs().showLibrary();
+      vm.pairs().showFor(row("round-01.png"));
     });
-    waitUntil(() -> !vm.pairs().rows().isEmpty());
+    waitUntil(() -> !vm.pairs().runningProperty().get());
+    assertThat(vm.pairs().messageProperty().get()).isEmpty();
+    assertThat(vm.pairs().rows()).hasSizeGreaterThan(4);
     fx(() -> {
       vm.pairs().selectedProperty().set(vm.pairs().rows().get(0));
       scene.lookup("#pairs-table").requestFocus();
@@ -144,11 +158,9 @@ class ScreenshotsFxTest {
       vm.walkthrough().order();
     });
     waitUntil(() -> !vm.walkthrough().runningProperty().get() && vm.walkthrough().steps().size() == 6);
+    assertThat(vm.walkthrough().messageProperty().get()).isEmpty();
     shoot(dir, "walkthrough");
 
-    fx(() -> vm.session().paneProperty().set(Pane.INDEXING));
-    waitUntil(() -> vm.indexing().failures().size() == 1);
-    shoot(dir, "indexing");
-    assertThat(dir.resolve("indexing.png")).exists();
+    assertThat(dir.resolve("walkthrough.png")).exists();
   }
 }

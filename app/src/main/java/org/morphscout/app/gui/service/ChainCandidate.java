@@ -8,7 +8,8 @@ import java.util.List;
  * @param images the images in order, start first, end last
  * @param steps one step per consecutive pair ({@code images.size() - 1})
  * @param maxStep the largest step's cost (the chain is only as smooth as its worst jump)
- * @param evenness 1 - coefficient of variation of the step costs, clamped to [0, 1]; 1 = all steps the same size
+ * @param evenness coefficient of variation of the step costs (population standard deviation / mean), &gt;= 0;
+ *     0 = all steps the same size (as the command line reports it)
  */
 public record ChainCandidate(List<Long> images, List<ChainStep> steps, double maxStep, double evenness) {
   public ChainCandidate {
@@ -33,6 +34,6 @@ public record ChainCandidate(List<Long> images, List<ChainStep> steps, double ma
       var += (s.cost() - mean) * (s.cost() - mean);
     }
     double cv = mean == 0 ? 0 : Math.sqrt(var / steps.size()) / mean;
-    return new ChainCandidate(images, steps, max, Math.max(0, Math.min(1, 1 - cv)));
+    return new ChainCandidate(images, steps, max, cv);
   }
 }
