@@ -57,8 +57,13 @@ public final class InspectorView extends ScrollPane {
     StackPane stage = new StackPane(picture, silhouette);
     stage.getStyleClass().add("inspector-image");
     stage.setMinHeight(IMAGE + 12);
-    vm.fileProperty().addListener((o, a, f) -> picture.setImage(f == null ? null
-        : new Image(f.toUri().toString(), IMAGE * 2, IMAGE * 2, true, true, true)));
+    vm.fileProperty().addListener((o, a, f) -> show(f));
+    // JavaFX decodes only BMP, GIF, JPEG and PNG: fall back to the catalog's thumbnail for other formats
+    vm.thumbnailProperty().addListener((o, a, t) -> {
+      if (t != null && picture.getImage() != null && picture.getImage().isError()) {
+        picture.setImage(new Image(t.toUri().toString(), IMAGE * 2, IMAGE * 2, true, true, true));
+      }
+    });
     vm.maskProperty().addListener((o, a, m) -> silhouette.setImage(m == null ? null
         : MaskImages.overlay(m, Color.web("#0e8fa3"))));
 
@@ -94,6 +99,25 @@ public final class InspectorView extends ScrollPane {
     box.setPadding(new Insets(12));
     box.setAlignment(Pos.TOP_LEFT);
     setContent(box);
+  }
+
+  private void show(java.nio.file.Path file) {
+    if (file == null) {
+      picture.setImage(null);
+      return;
+    }
+    Image img = new Image(file.toUri().toString(), IMAGE * 2, IMAGE * 2, true, true, true);
+    img.errorProperty().addListener((o, a, failed) -> {
+      java.nio.file.Path t = vm.thumbnailProperty().get();
+      if (failed && t != null && picture.getImage() == img) {
+        picture.setImage(new Image(t.toUri().toString(), IMAGE * 2, IMAGE * 2, true, true, true));
+      }
+    });
+    picture.setImage(img);
+    java.nio.file.Path t = vm.thumbnailProperty().get();
+    if (img.isError() && t != null) {
+      picture.setImage(new Image(t.toUri().toString(), IMAGE * 2, IMAGE * 2, true, true, true));
+    }
   }
 
   private static String name(Session s, ImageRow r) {

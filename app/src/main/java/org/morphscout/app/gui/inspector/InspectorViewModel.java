@@ -35,6 +35,7 @@ public final class InspectorViewModel {
   private final ReadOnlyObjectWrapper<ImageRow> image = new ReadOnlyObjectWrapper<>(this, "image");
   private final ReadOnlyStringWrapper title = new ReadOnlyStringWrapper(this, "title", "No image selected");
   private final ReadOnlyObjectWrapper<Path> file = new ReadOnlyObjectWrapper<>(this, "file");
+  private final ReadOnlyObjectWrapper<Path> thumbnail = new ReadOnlyObjectWrapper<>(this, "thumbnail");
   private final ReadOnlyObjectWrapper<Mask> mask = new ReadOnlyObjectWrapper<>(this, "mask");
   private final BooleanProperty overlay = new SimpleBooleanProperty(this, "overlay", false);
   private final ObservableList<Fact> facts = FXCollections.observableArrayList();
@@ -47,7 +48,7 @@ public final class InspectorViewModel {
     session.selectedProperty().addListener((o, a, row) -> show(row));
   }
 
-  private record Details(Optional<ImageAnalysis> analysis, Optional<String> failure) {}
+  private record Details(Optional<ImageAnalysis> analysis, Optional<String> failure, Optional<Path> thumbnail) {}
 
   void show(ImageRow row) {
     if (pending != null) {
@@ -55,6 +56,7 @@ public final class InspectorViewModel {
     }
     image.set(row);
     mask.set(null);
+    thumbnail.set(null);
     facts.clear();
     swatches.clear();
     message.set("");
@@ -71,7 +73,8 @@ public final class InspectorViewModel {
       return;
     }
     pending = runner.submit("inspect image", token -> new Details(lib.features().load(row),
-        lib.images().failureReason(row.id())), d -> {
+        lib.images().failureReason(row.id()), lib.catalog().thumbnail(row.id())), d -> {
+          thumbnail.set(d.thumbnail().orElse(null));
           List<Fact> all = new ArrayList<>(basicFacts(row));
           d.failure().ifPresent(reason -> all.add(new Fact("Failed", reason)));
           d.analysis().ifPresent(a -> {
@@ -175,6 +178,14 @@ public final class InspectorViewModel {
   /** The image file to show large (the view decodes it off the UI thread). */
   public ReadOnlyObjectProperty<Path> fileProperty() {
     return file.getReadOnlyProperty();
+  }
+
+  /**
+   * The catalog's thumbnail of the image, or null: shown when the original is in a format the window cannot decode
+   * (TIFF, WebP and others the indexer reads through its own decoders).
+   */
+  public ReadOnlyObjectProperty<Path> thumbnailProperty() {
+    return thumbnail.getReadOnlyProperty();
   }
 
   /** The stored silhouette (at most 128 px), or null when not analysed. */
