@@ -49,7 +49,10 @@ final class BrowseCommand implements Callable<Integer> {
     } catch (RuntimeException e) {
       // JavaFX reports a missing or refusing display as an unchecked exception from its startup
       LOG.debug("window startup failed", e);
-      spec.commandLine().getErr().println("browse: cannot open a window: " + e.getMessage());
+      String m = String.valueOf(e.getMessage());
+      String hint = m.contains("GTK") ? " (JavaFX needs GTK 3 on Linux: install it, for example apt-get install "
+          + "libgtk-3-0)" : "";
+      spec.commandLine().getErr().println("browse: cannot open a window: " + m + hint);
       return ExitCodes.ERROR;
     }
   }

@@ -96,6 +96,16 @@ public final class PairsView extends BorderPane {
     selected.disableProperty().bind(session.selectedProperty().isNull());
     Button refresh = new Button("Refresh");
     refresh.setOnAction(e -> vm.refresh());
+    refresh.disableProperty().bind(vm.runningProperty());
+    Button cancel = new Button("Cancel");
+    cancel.setId("cancel-pairs");
+    cancel.setOnAction(e -> vm.cancel());
+    cancel.visibleProperty().bind(vm.runningProperty());
+    cancel.managedProperty().bind(cancel.visibleProperty());
+    javafx.scene.control.ProgressIndicator busy = new javafx.scene.control.ProgressIndicator();
+    busy.setPrefSize(18, 18);
+    busy.visibleProperty().bind(vm.runningProperty());
+    busy.managedProperty().bind(busy.visibleProperty());
     Button export = new Button("Export approved…");
     export.setId("export-approved");
     export.setOnAction(e -> {
@@ -114,7 +124,7 @@ public final class PairsView extends BorderPane {
     info.textProperty().bind(vm.infoProperty());
     Region spacer = new Region();
     HBox.setHgrow(spacer, Priority.ALWAYS);
-    HBox bar = new HBox(10, scope, library, selected, refresh, spacer, info, export);
+    HBox bar = new HBox(10, scope, library, selected, refresh, cancel, busy, spacer, info, export);
     bar.getStyleClass().add("toolbar");
     bar.setAlignment(Pos.CENTER_LEFT);
     return bar;

@@ -130,6 +130,15 @@ public final class PairsViewModel {
     });
   }
 
+  /** Stops a running suggestion; the table keeps what it showed before. */
+  public void cancel() {
+    if (pending != null && running.get()) {
+      pending.cancel();
+      running.set(false);
+      info.set("Cancelled.");
+    }
+  }
+
   public void approve(PairRow row) {
     decide(row, DecisionStore.Verdict.APPROVED, row == null ? "" : row.noteProperty().get());
   }
