@@ -39,6 +39,7 @@ public final class InspectorView extends ScrollPane {
     getStyleClass().add("inspector");
     setId("inspector");
     setFitToWidth(true);
+    setHbarPolicy(ScrollBarPolicy.NEVER);
     Label heading = new Label("Inspector");
     heading.getStyleClass().add("pane-heading");
     Label title = new Label();
@@ -46,17 +47,20 @@ public final class InspectorView extends ScrollPane {
     title.textProperty().bind(vm.titleProperty());
     title.setWrapText(true);
 
-    picture.setFitWidth(IMAGE);
-    picture.setFitHeight(IMAGE);
+    // the picture follows the inspector's width (the divider can be moved), up to twice the default size
+    var side = javafx.beans.binding.Bindings.createDoubleBinding(() -> Math.max(120, Math.min(IMAGE * 2,
+        getViewportBounds().getWidth() - 40)), viewportBoundsProperty());
+    picture.fitWidthProperty().bind(side);
+    picture.fitHeightProperty().bind(side);
     picture.setPreserveRatio(true);
-    silhouette.setFitWidth(IMAGE);
-    silhouette.setFitHeight(IMAGE);
+    silhouette.fitWidthProperty().bind(side);
+    silhouette.fitHeightProperty().bind(side);
     silhouette.setPreserveRatio(true);
     silhouette.setSmooth(false);
     silhouette.visibleProperty().bind(vm.overlayProperty().and(vm.maskProperty().isNotNull()));
     StackPane stage = new StackPane(picture, silhouette);
     stage.getStyleClass().add("inspector-image");
-    stage.setMinHeight(IMAGE + 12);
+    stage.minHeightProperty().bind(side.add(12));
     vm.fileProperty().addListener((o, a, f) -> show(f));
     // JavaFX decodes only BMP, GIF, JPEG and PNG: fall back to the catalog's thumbnail for other formats
     vm.thumbnailProperty().addListener((o, a, t) -> {
@@ -141,7 +145,7 @@ public final class InspectorView extends ScrollPane {
       Label v = new Label(f.value());
       v.getStyleClass().add("fact-value");
       v.setWrapText(true);
-      v.setMaxWidth(IMAGE - 90);
+      v.maxWidthProperty().bind(widthProperty().subtract(130));
       facts.addRow(row++, k, v);
     }
   }
