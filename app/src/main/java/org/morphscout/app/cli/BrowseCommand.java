@@ -1,5 +1,6 @@
 package org.morphscout.app.cli;
 
+import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Map;
 import java.util.Optional;
@@ -31,18 +32,23 @@ final class BrowseCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
 
-  /** The environment consulted for a display; replaced by tests. */
-  Map<String, String> env = System.getenv();
-
   @Override
   public Integer call() {
+    return open(root.catalogDir(), spec.commandLine().getErr());
+  }
+
+  /** Opens the browser on {@code catalog} and returns when its window closes; problems go to {@code err}. */
+  static int open(Path catalog, PrintWriter err) {
+    return open(catalog, err, System.getenv());
+  }
+
+  static int open(Path catalog, PrintWriter err, Map<String, String> env) {
     Optional<String> problem = DisplayCheck.problem(env, System.getProperty("os.name", ""),
         System.getProperty("java.awt.headless"));
     if (problem.isPresent()) {
-      spec.commandLine().getErr().println("browse: cannot open a window: " + problem.get() + ".");
+      err.println("browse: cannot open a window: " + problem.get() + ".");
       return ExitCodes.ERROR;
     }
-    Path catalog = root.catalogDir();
     try {
       MorphscoutApp.launch(catalog);
       return ExitCodes.OK;
@@ -52,7 +58,7 @@ final class BrowseCommand implements Callable<Integer> {
       String m = String.valueOf(e.getMessage());
       String hint = m.contains("GTK") ? " (JavaFX needs GTK 3 on Linux: install it, for example apt-get install "
           + "libgtk-3-0)" : "";
-      spec.commandLine().getErr().println("browse: cannot open a window: " + m + hint);
+      err.println("browse: cannot open a window: " + m + hint);
       return ExitCodes.ERROR;
     }
   }

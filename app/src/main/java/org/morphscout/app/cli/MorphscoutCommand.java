@@ -26,18 +26,18 @@ import picocli.CommandLine.Spec;
     synopsisSubcommandLabel = "<command>",
     subcommands = {
       CommandLine.HelpCommand.class,
-      //TODO DemoCommand.class,
+      DemoCommand.class,
       IndexCommand.class,
       StatusCommand.class,
       SimilarCommand.class,
       PairsCommand.class,
-      //TODO ScreenCommand.class,
+      ScreenCommand.class,
       DecideCommand.class,
       DecisionsCommand.class,
       ChainCommand.class,
       WalkCommand.class,
-      //TODO PreviewCommand.class,
-      //TODO ModelsCommand.class,
+      PreviewCommand.class,
+      ModelsCommand.class,
       BrowseCommand.class,
     })
 public final class MorphscoutCommand implements Callable<Integer> {

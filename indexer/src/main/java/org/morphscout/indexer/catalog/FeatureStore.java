@@ -106,6 +106,20 @@ public final class FeatureStore {
     });
   }
 
+  /** The stored vectors of one image, when it has features. */
+  public Optional<Vectors> vectorsOf(long imageId) {
+    return catalog.read(c -> {
+      try (PreparedStatement s = c.prepareStatement(
+          "SELECT image_id, model_id, appearance, shape FROM features WHERE image_id = ?")) {
+        s.setLong(1, imageId);
+        try (ResultSet rs = s.executeQuery()) {
+          return rs.next() ? Optional.of(new Vectors(rs.getLong(1), rs.getString(2), Blobs.floats(rs.getBytes(3)),
+              Blobs.floats(rs.getBytes(4)))) : Optional.empty();
+        }
+      }
+    });
+  }
+
   /** Ids of ready images whose features were made by {@code modelId}. */
   public List<Long> readyIds(String modelId) {
     return catalog.read(c -> {

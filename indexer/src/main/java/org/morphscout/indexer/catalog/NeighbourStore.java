@@ -63,6 +63,20 @@ public final class NeighbourStore {
     });
   }
 
+  /** Ids of the images that have a stored neighbour list. */
+  public java.util.Set<Long> idsWithLinks() {
+    return catalog.read(c -> {
+      java.util.Set<Long> ids = new java.util.HashSet<>();
+      try (Statement s = c.createStatement();
+          ResultSet rs = s.executeQuery("SELECT DISTINCT image_id FROM neighbours")) {
+        while (rs.next()) {
+          ids.add(rs.getLong(1));
+        }
+      }
+      return ids;
+    });
+  }
+
   /** Every stored link (each as stored, one direction). */
   public List<Link> all() {
     return catalog.read(c -> {

@@ -11,8 +11,8 @@ import java.util.List;
  * @param maxStep the largest step cost
  * @param evenness coefficient of variation of the step costs (population standard deviation / mean); 0 = all
  *     steps equal, and 0 for a single step
- * @param overlap largest Jaccard index of this chain's intermediate images with those of any earlier chain in the
- *     same result, in [0, 1]; 0 for the first chain
+ * @param overlap largest Jaccard index of this chain's intermediate images (waypoints excluded) with those of any
+ *     earlier chain in the same result, in [0, 1]; 0 for the first chain
  */
 public record Chain(
     List<Long> images, List<Edge> steps, double total, double maxStep, double evenness, double overlap) {

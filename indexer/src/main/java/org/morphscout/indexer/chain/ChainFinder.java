@@ -1,12 +1,10 @@
 package org.morphscout.indexer.chain;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
-import java.util.OptionalLong;
 import java.util.Set;
 import org.morphscout.indexer.MorphscoutException;
 import org.slf4j.Logger;
@@ -29,8 +27,16 @@ public final class ChainFinder {
   private static final Logger LOG = LoggerFactory.getLogger(ChainFinder.class);
   /** Search rounds per wanted alternative before giving up on finding more diverse chains. */
   private static final int ROUNDS_PER_ALTERNATIVE = 4;
+  /** Most layered states per search (about 17 bytes each, so ~700 MB at the limit). */
+  private static final long MAX_STATES = 40_000_000L;
   /** Relaxations allowed for the exact simple-chain bound (~0.1 s); beyond it the leg-by-leg heuristic runs. */
   private static final long SIMPLE_SEARCH_BUDGET = 30_000_000L;
+  /**
+   * Nodes the backward search for the A* bound may settle per leg. On local graphs the radius cut stops it much
+   * earlier; on small-world graphs (everything within a few steps) a full backward search would cost more than it
+   * saves, so the bound is left flat beyond this many nodes.
+   */
+  private static final int BOUND_BUDGET = 20_000;
 
   private final IndexedGraph g;
 
@@ -43,7 +49,7 @@ public final class ChainFinder {
    *
    * @param distanceToTarget the cost model's distance of any image to {@code query.to()}, used only to name the
    *     closest reachable image when no chain exists
-   * @throws MorphscoutException when an end, waypoint is not in the graph
+   * @throws MorphscoutException when an end or waypoint is not in the graph, or the search would be too large
    */
   public ChainResult find(ChainQuery query, DistanceToTarget distanceToTarget) {
     int n = g.size();
@@ -53,6 +59,11 @@ public final class ChainFinder {
       stops[i + 1] = indexOrThrow(query.via().get(i), "waypoint");
     }
     stops[stops.length - 1] = indexOrThrow(query.to(), "target");
+    long states = (long) (stops.length - 1) * n * (query.maxSteps() + 1);
+    if (states > MAX_STATES) {
+      throw new MorphscoutException("A chain search over " + n + " images with " + query.maxSteps() + " steps and "
+          + query.via().size() + " waypoints needs too much memory; lower the step limit or use fewer waypoints.");
+    }
     boolean[] blocked = new boolean[n];
     for (long id : query.avoid()) {
       int i = g.index(id);
@@ -88,7 +99,7 @@ public final class ChainFinder {
       }
       if (walk.isEmpty()) {
         if (round == 0) {
-          return noChain(query, stops, blocked, distanceToTarget);
+          return new NoChainDiagnosis(g).explain(query, stops, blocked, distanceToTarget);
         }
         break;
       }
@@ -191,7 +202,7 @@ public final class ChainFinder {
           radius = PlainDistances.radiusFor(path[0], q.maxSteps());
         }
       }
-      d[leg] = plain.capped(radius);
+      d[leg] = plain.capped(radius, BOUND_BUDGET);
     }
     return d;
   }
@@ -237,89 +248,6 @@ public final class ChainFinder {
       steps.add(new Edge(images.get(i), images.get(i + 1), model.cost(c), c));
     }
     return Chain.of(images, steps, overlap);
-  }
-
-  private ChainResult noChain(ChainQuery q, int[] stops, boolean[] blocked, DistanceToTarget distance) {
-    // Closest reachable: any image within the step limit of the start, around avoided images.
-    int[] depth = depths(stops[0], blocked, q.maxSteps());
-    long best = 0;
-    double bestDistance = Double.POSITIVE_INFINITY;
-    for (int v = 0; v < depth.length; v++) {
-      if (depth[v] > 0 && v != stops[stops.length - 1]) {
-        double d = distance.distance(g.ids[v]);
-        if (d < bestDistance) {
-          bestDistance = d;
-          best = g.ids[v];
-        }
-      }
-    }
-    OptionalLong closest = bestDistance < Double.POSITIVE_INFINITY ? OptionalLong.of(best) : OptionalLong.empty();
-    String base = "no chain of " + q.minSteps() + " to " + q.maxSteps() + " steps joins image " + q.from()
-        + " to image " + q.to() + (q.via().isEmpty() ? "" : " through " + q.via());
-    int unbounded = hopsIgnoringLimit(stops, blocked);
-    String why;
-    if (unbounded < 0) {
-      boolean[] none = new boolean[g.size()];
-      why = hopsIgnoringLimit(stops, none) < 0
-          ? "they are in separate parts of the neighbour graph (no sequence of similar images links them)"
-          : "every link between them passes through an avoided image";
-    } else if (unbounded > q.maxSteps()) {
-      why = "the shortest link needs " + unbounded + " steps; raise the step limit";
-    } else {
-      why = "no link has a step count within the bounds without repeating an image";
-    }
-    String hint = closest.isPresent() ? "; closest reachable image to the target: " + closest.getAsLong() : "";
-    return ChainResult.none(base + ": " + why + hint, closest);
-  }
-
-  /** Breadth-first step counts from {@code start} up to {@code limit} steps around blocked images; -1 = not met. */
-  private int[] depths(int start, boolean[] blocked, int limit) {
-    int[] depth = new int[g.size()];
-    Arrays.fill(depth, -1);
-    ArrayDeque<Integer> queue = new ArrayDeque<>();
-    depth[start] = 0;
-    queue.add(start);
-    while (!queue.isEmpty()) {
-      int u = queue.poll();
-      if (depth[u] == limit) {
-        continue;
-      }
-      for (int e = g.offsets[u]; e < g.offsets[u + 1]; e++) {
-        int v = g.targets[e];
-        if (!blocked[v] && depth[v] < 0) {
-          depth[v] = depth[u] + 1;
-          queue.add(v);
-        }
-      }
-    }
-    return depth;
-  }
-
-  /** Fewest steps along the stops in order, ignoring the step bounds (breadth-first per leg); -1 if impossible. */
-  private int hopsIgnoringLimit(int[] stops, boolean[] blocked) {
-    int total = 0;
-    for (int leg = 0; leg + 1 < stops.length; leg++) {
-      int[] depth = new int[g.size()];
-      Arrays.fill(depth, -1);
-      ArrayDeque<Integer> queue = new ArrayDeque<>();
-      depth[stops[leg]] = 0;
-      queue.add(stops[leg]);
-      while (!queue.isEmpty() && depth[stops[leg + 1]] < 0) {
-        int u = queue.poll();
-        for (int e = g.offsets[u]; e < g.offsets[u + 1]; e++) {
-          int v = g.targets[e];
-          if (!blocked[v] && depth[v] < 0) {
-            depth[v] = depth[u] + 1;
-            queue.add(v);
-          }
-        }
-      }
-      if (depth[stops[leg + 1]] < 0) {
-        return -1;
-      }
-      total += depth[stops[leg + 1]];
-    }
-    return total;
   }
 
   private int indexOrThrow(long id, String role) {

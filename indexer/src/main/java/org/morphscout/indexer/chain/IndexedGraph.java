@@ -1,6 +1,5 @@
 package org.morphscout.indexer.chain;
 
-import java.util.Arrays;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -104,28 +103,5 @@ final class IndexedGraph {
 
   StepCost components(int edge) {
     return new StepCost(appearance[edge], shape[edge], colour[edge], mixed[edge]);
-  }
-
-  /** The edge slot from node {@code u} to node {@code v}, or -1. Linear in u's degree. */
-  int edgeBetween(int u, int v) {
-    for (int e = offsets[u]; e < offsets[u + 1]; e++) {
-      if (targets[e] == v) {
-        return e;
-      }
-    }
-    return -1;
-  }
-
-  /** Per-edge costs under {@code model}, aligned with {@link #targets}. */
-  double[] costs(StepCostModel model) {
-    double[] out = new double[targets.length];
-    for (int e = 0; e < out.length; e++) {
-      out[e] = model.cost(appearance[e], shape[e], colour[e]);
-    }
-    return out;
-  }
-
-  long[] idsCopy() {
-    return Arrays.copyOf(ids, ids.length);
   }
 }

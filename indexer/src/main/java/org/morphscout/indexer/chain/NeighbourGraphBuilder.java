@@ -43,7 +43,11 @@ public final class NeighbourGraphBuilder {
     this.config = config;
   }
 
-  /** Builds the lists of all {@code ids} from scratch (one source query each), replacing any earlier state. */
+  /**
+   * Builds the lists of all {@code ids} from scratch (one source query each), replacing any earlier state. On
+   * cancellation the lists built so far stay (every image is known; unqueried ones have empty lists until
+   * {@link #add} refreshes them).
+   */
   public void buildAll(Collection<Long> ids, ProgressListener progress, CancellationToken cancel) {
     nearest.clear();
     listedBy.clear();
@@ -51,11 +55,15 @@ public final class NeighbourGraphBuilder {
       nearest.put(id, List.of());
     }
     progress.phase("neighbour graph", ids.size());
-    long done = 0;
-    for (long id : ids) {
-      cancel.throwIfCancelled();
-      setList(id, query(id));
-      progress.progressed(++done, Long.toString(id));
+    try {
+      long done = 0;
+      for (long id : ids) {
+        cancel.throwIfCancelled();
+        setList(id, query(id));
+        progress.progressed(++done, Long.toString(id));
+      }
+    } finally {
+      progress.finished();
     }
   }
 

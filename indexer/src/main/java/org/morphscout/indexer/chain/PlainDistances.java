@@ -22,6 +22,7 @@ final class PlainDistances {
   private final int[] next; // next node on a shortest plain path to the target, -1 at the target
   private final boolean[] done;
   private final StateHeap heap = new StateHeap(1024);
+  private int settled;
 
   PlainDistances(IndexedGraph g, StepCostModel model, int target) {
     this.g = g;
@@ -62,10 +63,17 @@ final class PlainDistances {
     return Math.sqrt(upperBound * maxSteps);
   }
 
-  /** Settles everything within {@code radius} and returns the distances capped at it. */
-  double[] capped(double radius) {
-    while (!heap.isEmpty() && heap.topKey() <= radius) {
+  /**
+   * Settles everything within {@code radius}, or as much as {@code budget} settled nodes allow (the radius then
+   * shrinks to the search's current frontier, below which every node is settled), and returns the distances capped
+   * at the radius.
+   */
+  double[] capped(double radius, int budget) {
+    while (!heap.isEmpty() && heap.topKey() <= radius && settled < budget) {
       step();
+    }
+    if (!heap.isEmpty() && heap.topKey() <= radius) {
+      radius = heap.topKey(); // budget spent: every unsettled node is at least this far
     }
     double[] out = dist.clone();
     for (int v = 0; v < out.length; v++) {
@@ -84,6 +92,7 @@ final class PlainDistances {
       return;
     }
     done[u] = true;
+    settled++;
     for (int e = g.offsets[u]; e < g.offsets[u + 1]; e++) {
       int v = g.targets[e];
       double d2 = d + wa * g.appearance[e] + ws * g.shape[e] + wc * g.colour[e];

@@ -14,7 +14,8 @@
  * small, even steps beats one with a few large jumps, within a minimum and maximum number of steps. The search is
  * Dijkstra's algorithm (Dijkstra, "A note on two problems in connexion with graphs", Numerische Mathematik 1959) on
  * a hop-layered state graph, which is exact for hop-bounded shortest walks (the same layering as the Bellman-Ford
- * recurrence bounded by the number of edges). Diverse alternatives come from the penalty method (Bader, Dees,
+ * recurrence bounded by the number of edges), sped up by an A* bound (Hart, Nilsson and Raphael, IEEE Trans. SSC
+ * 1968) derived from plain shortest distances with the Cauchy-Schwarz inequality. Diverse alternatives come from the penalty method (Bader, Dees,
  * Geisberger and Sanders, TAPAS 2011); overlap is the Jaccard index of the intermediate images.
  *
  * <p>Pick: {@code minSteps} &gt; 1 to force in-between images even when a direct step exists; {@code via} to pass

@@ -5,15 +5,9 @@ import ai.djl.MalformedModelException;
 import ai.djl.Model;
 import ai.djl.engine.EngineException;
 import ai.djl.inference.Predictor;
-import ai.djl.ndarray.NDArray;
-import ai.djl.ndarray.NDList;
-import ai.djl.ndarray.types.Shape;
-import ai.djl.translate.NoBatchifyTranslator;
 import ai.djl.translate.TranslateException;
-import ai.djl.translate.TranslatorContext;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
-import java.nio.FloatBuffer;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
@@ -23,6 +17,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ConcurrentLinkedDeque;
 import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.feature.BatchTranslator.Batch;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -55,7 +50,7 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
   private volatile boolean closed;
 
   private OnnxAppearanceEmbedder(
-      String modelId, Path modelFile, ModelInput input, OutputReader output, EmbedderSettings settings) {
+      String modelId, Path modelFile, ModelInput input, ModelOutput output, EmbedderSettings settings) {
     this.modelId = modelId;
     this.modelFile = modelFile;
     this.input = input;
@@ -100,7 +95,7 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
   public static OnnxAppearanceEmbedder builtIn(Path cacheDir, EmbedderSettings settings) throws IOException {
     Path file = writeBuiltInModel(cacheDir);
     return new OnnxAppearanceEmbedder(
-        GistModelBuilder.MODEL_ID, file, ModelInput.gist(), new OutputReader(GistModelBuilder.OUTPUT, false, true),
+        GistModelBuilder.MODEL_ID, file, ModelInput.gist(), new ModelOutput(GistModelBuilder.OUTPUT, false, true),
         settings);
   }
 
@@ -144,7 +139,7 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
         CustomModelId.of(description),
         description.modelFile(),
         ModelInput.of(description),
-        new OutputReader(description.outputName(), description.globalAveragePool(), nchw),
+        new ModelOutput(description.outputName(), description.globalAveragePool(), nchw),
         settings);
   }
 
@@ -228,74 +223,5 @@ public final class OnnxAppearanceEmbedder implements AppearanceEmbedder {
     }
     idle.clear();
     model.close();
-  }
-
-  /** One batch: the stacked input tensor. */
-  record Batch(int count, long[] shape, float[] data) {}
-
-  /** Picks the output tensor and turns it into one vector per sample (pooling a 4-D feature map if asked). */
-  record OutputReader(String outputName, boolean pool, boolean channelsFirst) {
-    float[][] read(NDList outputs, int count) {
-      NDArray array = outputs.get(0);
-      if (!outputName.isEmpty()) {
-        array = null;
-        for (NDArray a : outputs) {
-          if (outputName.equals(a.getName())) {
-            array = a;
-          }
-        }
-        if (array == null) {
-          List<String> names = outputs.stream().map(NDArray::getName).toList();
-          throw new MorphscoutException("The model has no output named \"" + outputName + "\"; it has " + names + ".");
-        }
-      }
-      Shape shape = array.getShape();
-      if (shape.dimension() < 1 || shape.get(0) != count) {
-        throw new MorphscoutException(
-            "The model output has shape " + shape + "; expected the batch of " + count + " first.");
-      }
-      float[] data = array.toFloatArray();
-      int per = data.length / count;
-      float[][] out = new float[count][];
-      boolean pool4d = pool && shape.dimension() == 4;
-      for (int b = 0; b < count; b++) {
-        if (!pool4d) {
-          out[b] = Arrays.copyOfRange(data, b * per, (b + 1) * per);
-          continue;
-        }
-        int channels = (int) (channelsFirst ? shape.get(1) : shape.get(3));
-        int spatial = per / channels;
-        float[] v = new float[channels];
-        for (int c = 0; c < channels; c++) {
-          double s = 0;
-          for (int p = 0; p < spatial; p++) {
-            s += data[b * per + (channelsFirst ? c * spatial + p : p * channels + c)];
-          }
-          v[c] = (float) (s / spatial);
-        }
-        out[b] = v;
-      }
-      return out;
-    }
-  }
-
-  private static final class BatchTranslator implements NoBatchifyTranslator<Batch, float[][]> {
-    private final OutputReader reader;
-
-    BatchTranslator(OutputReader reader) {
-      this.reader = reader;
-    }
-
-    @Override
-    public NDList processInput(TranslatorContext ctx, Batch batch) {
-      NDArray array = ctx.getNDManager().create(FloatBuffer.wrap(batch.data()), new Shape(batch.shape()));
-      ctx.setAttachment("count", batch.count());
-      return new NDList(array);
-    }
-
-    @Override
-    public float[][] processOutput(TranslatorContext ctx, NDList list) {
-      return reader.read(list, (Integer) ctx.getAttachment("count"));
-    }
   }
 }

@@ -41,7 +41,7 @@ final class DataEndCheck {
    * an embedded EXIF thumbnail's EOI is skipped as part of its APP1 segment.
    */
   static Completeness jpeg(Path file) throws IOException {
-    try (InputStream in = new BufferedInputStream(Files.newInputStream(file), 1 << 16)) {
+    try (FastReader in = new FastReader(Files.newInputStream(file))) {
       if (in.read() != 0xFF || in.read() != 0xD8) {
         return Completeness.UNKNOWN;
       }
@@ -77,7 +77,7 @@ final class DataEndCheck {
   }
 
   /** Reads FF (fill FFs) xx; returns xx, or -1 at end of file; throws {@link NotAMarker} on other bytes. */
-  private static int nextMarker(InputStream in) throws IOException {
+  private static int nextMarker(FastReader in) throws IOException {
     int b = in.read();
     if (b < 0) {
       return -1;
@@ -97,12 +97,9 @@ final class DataEndCheck {
   }
 
   /** Skips entropy-coded bytes; returns the marker that ends them, or -1 at end of file. */
-  private static int afterEntropyData(InputStream in) throws IOException {
+  private static int afterEntropyData(FastReader in) throws IOException {
     int b;
-    while ((b = in.read()) >= 0) {
-      if (b != 0xFF) {
-        continue;
-      }
+    while ((b = in.skipToFF()) >= 0) {
       do {
         b = in.read();
       } while (b == 0xFF);
@@ -115,6 +112,64 @@ final class DataEndCheck {
       return b;
     }
     return -1;
+  }
+
+  /**
+   * Unsynchronised buffered byte reader: {@link BufferedInputStream#read()} takes a lock per byte, which made this
+   * walk run at about 20 MB/s; scanning a plain array is an order of magnitude faster.
+   */
+  private static final class FastReader implements AutoCloseable {
+    private final InputStream in;
+    private final byte[] buf = new byte[1 << 16];
+    private int pos;
+    private int end;
+
+    FastReader(InputStream in) {
+      this.in = in;
+    }
+
+    private boolean fill() throws IOException {
+      end = in.read(buf);
+      pos = 0;
+      return end > 0;
+    }
+
+    int read() throws IOException {
+      if (pos >= end && !fill()) {
+        return -1;
+      }
+      return buf[pos++] & 0xFF;
+    }
+
+    /** Skips bytes up to and including the next 0xFF; returns 0xFF, or -1 at end of data. */
+    int skipToFF() throws IOException {
+      while (true) {
+        for (int i = pos; i < end; i++) {
+          if (buf[i] == (byte) 0xFF) {
+            pos = i + 1;
+            return 0xFF;
+          }
+        }
+        if (!fill()) {
+          return -1;
+        }
+      }
+    }
+
+    void skipNBytes(long n) throws IOException {
+      long left = n;
+      int inBuffer = Math.min(end - pos, (int) Math.min(Integer.MAX_VALUE, left));
+      pos += inBuffer;
+      left -= inBuffer;
+      if (left > 0) {
+        in.skipNBytes(left); // throws EOFException when the data ends first
+      }
+    }
+
+    @Override
+    public void close() throws IOException {
+      in.close();
+    }
   }
 
   /**
@@ -140,6 +195,23 @@ final class DataEndCheck {
       }
     } catch (EOFException e) {
       return Completeness.TRUNCATED;
+    }
+  }
+
+  /**
+   * GIF89a specification section 27: the data stream ends with the Trailer byte 0x3B. Only consulted after the
+   * decoder failed (a valid GIF may be followed by junk, so a missing trailer alone does not condemn a file).
+   */
+  static boolean gifHasTrailer(Path file) throws IOException {
+    try (java.nio.channels.SeekableByteChannel ch = Files.newByteChannel(file)) {
+      long size = ch.size();
+      if (size == 0) {
+        return false;
+      }
+      java.nio.ByteBuffer last = java.nio.ByteBuffer.allocate(1);
+      ch.position(size - 1);
+      ch.read(last);
+      return last.get(0) == 0x3B;
     }
   }
 

@@ -1,9 +1,13 @@
 package org.morphscout.indexer.ingest;
 
+import java.awt.color.ColorSpace;
+import java.awt.color.ICC_Profile;
 import java.awt.image.BufferedImage;
+import java.io.EOFException;
 import java.io.IOException;
 import java.math.BigDecimal;
 import java.io.InputStream;
+import java.nio.channels.ClosedByInterruptException;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
@@ -13,7 +17,7 @@ import java.util.Iterator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
-import javax.imageio.IIOException;
+import java.util.Optional;
 import javax.imageio.ImageIO;
 import javax.imageio.ImageReadParam;
 import javax.imageio.ImageReader;
@@ -31,7 +35,8 @@ import org.slf4j.LoggerFactory;
  * end marker ({@link DataEndCheck}), header dimensions against the pixel cap (no pixels decoded), EXIF
  * orientation, then a decode with source subsampling so that the decoded picture's long side stays about twice the
  * analysis size (memory per image is bounded even for 100 MP files; the factor of two leaves room for the area
- * average to remove the aliasing of point subsampling), conversion to sRGB ARGB ({@link SrgbConverter}), area
+ * average to remove the aliasing of point subsampling), conversion to sRGB ARGB ({@link SrgbConverter}; ICC
+ * profiles embedded in JPEG and TIFF are applied by TwelveMonkeys, those in PNG by {@link PngColourProfile}), area
  * downscale to at most the analysis size ({@link AreaDownscaler}) and finally orientation ({@link Orientation}).
  *
  * <p>Thread-safe: every call uses its own reader. Decoding stops early (reported as {@link ReadFailure#TIMED_OUT})
@@ -59,6 +64,9 @@ public final class ImageIoDecoder implements ImageDecoder {
       throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
     } catch (AccessDeniedException e) {
       throw new ImageReadException(file, ReadFailure.UNREADABLE, "file not readable (permission denied)", e);
+    } catch (ClosedByInterruptException e) {
+      // File channels close when their thread is interrupted: that is a stop request, not a disk failure.
+      throw interrupted(file);
     }
   }
 
@@ -134,7 +142,7 @@ public final class ImageIoDecoder implements ImageDecoder {
       try {
         w = reader.getWidth(0);
         h = reader.getHeight(0);
-      } catch (IIOException | RuntimeException e) {
+      } catch (IOException | RuntimeException e) {
         throw decoderFailed(file, format, e);
       }
       if (w <= 0 || h <= 0) {
@@ -150,11 +158,13 @@ public final class ImageIoDecoder implements ImageDecoder {
       BufferedImage raw;
       try {
         raw = reader.read(0, param);
-      } catch (IIOException | RuntimeException e) {
-        if (Thread.currentThread().isInterrupted()) {
-          throw interrupted(file);
-        }
+      } catch (IOException | RuntimeException e) {
         throw decoderFailed(file, format, e);
+      } catch (OutOfMemoryError e) {
+        // The pixel cap and subsampling should prevent this; if a decoder still allocates too much, the large
+        // buffer is unreachable once we unwind, so report this file and let indexing go on.
+        throw new ImageReadException(
+            file, ReadFailure.DECODER_FAILED, "decoder failed: not enough memory to decode " + w + "x" + h, e);
       }
       if (watch.aborted) {
         throw interrupted(file);
@@ -166,7 +176,14 @@ public final class ImageIoDecoder implements ImageDecoder {
         LOG.debug("{}: decoder warning: {}", file, warning);
       }
       boolean hasAlpha = raw.getColorModel().hasAlpha();
+      boolean rgbSamples = raw.getColorModel().getColorSpace().getType() == ColorSpace.TYPE_RGB;
       BufferedImage srgb = SrgbConverter.toSrgbArgb(raw);
+      if (format == FileFormat.PNG && rgbSamples) {
+        Optional<ICC_Profile> profile = PngColourProfile.embeddedRgbProfile(reader);
+        if (profile.isPresent()) {
+          srgb = PngColourProfile.toSrgb(srgb, profile.get());
+        }
+      }
       raw = null; // let the decoded picture go before allocating the next one
       int[] target = AreaDownscaler.fitWithin(w, h, options.analysisLongSide());
       BufferedImage small =
@@ -221,8 +238,20 @@ public final class ImageIoDecoder implements ImageDecoder {
     return new ImageReadException(file, ReadFailure.TIMED_OUT, "decoding stopped (time limit or cancel)");
   }
 
-  private static ImageReadException decoderFailed(Path file, FileFormat format, Exception e) {
-    if (e instanceof IIOException && e.getCause() instanceof java.io.EOFException) {
+  /**
+   * Classifies what a reader threw. Readers declare plain {@link IOException} for bad data as well as for I/O
+   * (an {@link EOFException} usually means truncation), so everything except a vanished or forbidden file is
+   * reported as this file's failure rather than as a machine failure.
+   */
+  private static ImageReadException decoderFailed(Path file, FileFormat format, Exception e) throws IOException {
+    if (e instanceof NoSuchFileException || e instanceof AccessDeniedException) {
+      throw (IOException) e; // mapped to VANISHED / UNREADABLE in decode()
+    }
+    if (Thread.currentThread().isInterrupted() || e instanceof ClosedByInterruptException) {
+      return interrupted(file); // the reader's stream was closed by the interrupt; the data may be fine
+    }
+    if (e instanceof EOFException || e.getCause() instanceof EOFException
+        || (format == FileFormat.GIF && !DataEndCheck.gifHasTrailer(file))) {
       return truncated(file, format, e);
     }
     String cause = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();

@@ -74,9 +74,9 @@ public final class LibraryScanner {
         // not there (yet): the absolute form is enough
       }
     }
-    EnumSet<FileVisitOption> visitOptions = options.links() == ScanOptions.LinkPolicy.NONE
-        ? EnumSet.noneOf(FileVisitOption.class)
-        : EnumSet.of(FileVisitOption.FOLLOW_LINKS);
+    // Always walk with FOLLOW_LINKS so that a root which is itself a link (a Pictures folder moved to another
+    // disk) is entered; every other link is then judged by linkAllowed() under the policy.
+    EnumSet<FileVisitOption> visitOptions = EnumSet.of(FileVisitOption.FOLLOW_LINKS);
     for (Path root : roots) {
       if (!Files.exists(root)) {
         continue;
@@ -86,21 +86,26 @@ public final class LibraryScanner {
     }
     found.sort(Comparator.comparing(FoundFile::path));
     problems.sort(Comparator.comparing(ScanProblem::path));
-    List<FoundFile> unique = options.links() == ScanOptions.LinkPolicy.NONE ? found : dropDuplicates(found);
+    List<FoundFile> unique = dropDuplicates(found, options.links() != ScanOptions.LinkPolicy.NONE);
     progress.finished();
     return new ScanResult(unique, problems);
   }
 
-  /** The same real file reached through several links is listed once, under its first path in sorted order. */
-  private static List<FoundFile> dropDuplicates(List<FoundFile> sorted) {
+  /**
+   * Lists each file once: overlapping roots yield the same path twice, and (when following links) the same real
+   * file may be reached through several links; the first path in sorted order is kept.
+   */
+  private static List<FoundFile> dropDuplicates(List<FoundFile> sorted, boolean byRealPath) {
     Set<Path> seen = new HashSet<>();
     List<FoundFile> out = new ArrayList<>();
     for (FoundFile f : sorted) {
-      Path real;
-      try {
-        real = f.path().toRealPath();
-      } catch (IOException e) {
-        real = f.path(); // vanished since: keep it, the decoder will report it
+      Path real = f.path().toAbsolutePath().normalize();
+      if (byRealPath) {
+        try {
+          real = f.path().toRealPath();
+        } catch (IOException e) {
+          // vanished since: keep it under its own path, the decoder will report it
+        }
       }
       if (seen.add(real)) {
         out.add(f);
@@ -170,7 +175,7 @@ public final class LibraryScanner {
     @Override
     public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
       if (attrs.isSymbolicLink()) {
-        // Without FOLLOW_LINKS every link lands here; with it only broken links do (attributes of the link).
+        // With FOLLOW_LINKS only broken links arrive with the link's own attributes.
         if (options.links() != ScanOptions.LinkPolicy.NONE && isImageName(file)) {
           problems.add(new ScanProblem(file, "broken symbolic link"));
         }
@@ -188,6 +193,9 @@ public final class LibraryScanner {
 
     @Override
     public FileVisitResult visitFileFailed(Path file, IOException exc) {
+      if (exc instanceof FileSystemLoopException && options.links() == ScanOptions.LinkPolicy.NONE) {
+        return FileVisitResult.CONTINUE; // a link we would not have followed anyway
+      }
       problems.add(new ScanProblem(file, describe(exc)));
       return FileVisitResult.CONTINUE;
     }
@@ -214,9 +222,9 @@ public final class LibraryScanner {
       }
     }
 
-    /** Whether the link's target may be entered under the current policy. */
+    /** Whether the link's target may be entered under the current policy (a root is always entered). */
     private boolean linkAllowed(Path link) {
-      if (options.links() == ScanOptions.LinkPolicy.ANY) {
+      if (link.equals(root) || options.links() == ScanOptions.LinkPolicy.ANY) {
         return true;
       }
       if (options.links() == ScanOptions.LinkPolicy.NONE) {

@@ -21,7 +21,7 @@ public record ScanOptions(
 
   /** Which symbolic links a scan follows. */
   public enum LinkPolicy {
-    /** Follow no links (default): links are neither entered nor listed. */
+    /** Follow no links (default): links are neither entered nor listed; a root that is itself a link is entered. */
     NONE,
     /** Follow links whose target lies inside one of the scanned roots. */
     WITHIN_ROOTS,

@@ -48,11 +48,26 @@ public final class Thumbnails {
     if (baseName.isEmpty() || baseName.contains("/") || baseName.contains("\\")) {
       throw new IllegalArgumentException("baseName must be a plain file name, got '" + baseName + "'");
     }
-    String ext = extensionFor(analysis);
-    Path target = directory.resolve(baseName + "." + ext);
+    Path target = directory.resolve(baseName + "." + extensionFor(analysis));
+    writeTo(analysis, target);
+    return target;
+  }
+
+  /**
+   * Makes the thumbnail of {@code analysis} and writes it to {@code target}, in the format its extension names
+   * ({@code .png}, or {@code .jpg}/{@code .jpeg}); transparent pixels written as JPEG are flattened onto white.
+   * Replaces an existing file atomically where the file system allows (temporary file, then move).
+   */
+  public void writeTo(BufferedImage analysis, Path target) throws IOException {
+    Objects.requireNonNull(analysis, "analysis");
+    String ext = FormatSniffer.extension(String.valueOf(target.getFileName()));
+    if (!ext.equals("png") && !ext.equals("jpg") && !ext.equals("jpeg")) {
+      throw new IllegalArgumentException("thumbnail must end in .png, .jpg or .jpeg: " + target);
+    }
+    Path directory = target.toAbsolutePath().getParent();
     Files.createDirectories(directory);
     BufferedImage thumb = scaled(analysis);
-    Path tmp = Files.createTempFile(directory, "." + baseName + "-", ".tmp");
+    Path tmp = Files.createTempFile(directory, ".thumb-", ".tmp");
     try {
       try (OutputStream out = Files.newOutputStream(tmp)) {
         if (ext.equals("png")) {
@@ -60,7 +75,7 @@ public final class Thumbnails {
             throw new IOException("no PNG writer available");
           }
         } else {
-          writeJpeg(opaque(thumb), out);
+          writeJpeg(onWhite(thumb), out);
         }
       }
       try {
@@ -71,7 +86,6 @@ public final class Thumbnails {
     } finally {
       Files.deleteIfExists(tmp);
     }
-    return target;
   }
 
   /** The thumbnail picture itself (long side at most the configured size), {@code TYPE_INT_ARGB}. */
@@ -97,13 +111,26 @@ public final class Thumbnails {
     return false;
   }
 
-  /** JPEG writers misread 4-channel ARGB as CMYK; hand them 3-channel RGB. */
-  private static BufferedImage opaque(BufferedImage img) {
+  /**
+   * JPEG writers misread 4-channel ARGB as CMYK; hand them 3-channel RGB, with any translucent pixel composited
+   * over white ("over" operator, Porter and Duff 1984, SIGGRAPH).
+   */
+  private static BufferedImage onWhite(BufferedImage img) {
     BufferedImage rgb = new BufferedImage(img.getWidth(), img.getHeight(), BufferedImage.TYPE_INT_RGB);
     int w = img.getWidth();
     int[] row = new int[w];
     for (int y = 0; y < img.getHeight(); y++) {
       img.getRGB(0, y, w, 1, row, 0, w);
+      for (int x = 0; x < w; x++) {
+        int p = row[x];
+        int a = p >>> 24;
+        if (a != 255) {
+          int r = (((p >> 16) & 0xFF) * a + 255 * (255 - a) + 127) / 255;
+          int g = (((p >> 8) & 0xFF) * a + 255 * (255 - a) + 127) / 255;
+          int b = ((p & 0xFF) * a + 255 * (255 - a) + 127) / 255;
+          row[x] = r << 16 | g << 8 | b;
+        }
+      }
       rgb.setRGB(0, y, w, 1, row, 0, w);
     }
     return rgb;

@@ -45,6 +45,11 @@ public final class TimeLimitedDecoder implements ImageDecoder, AutoCloseable {
     this.workers = Executors.newCachedThreadPool(factory);
   }
 
+  /** An {@link ImageIoDecoder} with {@code options}, limited to {@link DecodeOptions#perFileTimeLimit()}. */
+  public TimeLimitedDecoder(DecodeOptions options) {
+    this(new ImageIoDecoder(options), options.perFileTimeLimit());
+  }
+
   @Override
   public DecodedImage decode(Path file) throws IOException {
     if (limit.isZero()) {

@@ -1,8 +1,17 @@
 /**
  * Ingestion: finding image files in a user's library, decoding them robustly into small sRGB analysis images,
  * applying the EXIF orientation, writing thumbnails and hashing file content. This package is API: the indexer
- * calls {@link org.morphscout.indexer.ingest.LibraryScanner}, {@link org.morphscout.indexer.ingest.ImageDecoder},
- * {@link org.morphscout.indexer.ingest.Thumbnails} and {@link org.morphscout.indexer.ingest.ContentHash}.
+ * calls {@link org.morphscout.indexer.ingest.LibraryScanner} (with {@link org.morphscout.indexer.ingest.ScanOptions}),
+ * an {@link org.morphscout.indexer.ingest.ImageDecoder} ({@link org.morphscout.indexer.ingest.ImageIoDecoder},
+ * usually wrapped in a {@link org.morphscout.indexer.ingest.TimeLimitedDecoder}) configured by
+ * {@link org.morphscout.indexer.ingest.DecodeOptions}, {@link org.morphscout.indexer.ingest.Thumbnails} and
+ * {@link org.morphscout.indexer.ingest.ContentHash}. {@link org.morphscout.indexer.ingest.Orientation},
+ * {@link org.morphscout.indexer.ingest.FormatSniffer} and {@link org.morphscout.indexer.ingest.AreaDownscaler} are
+ * pure helpers usable on their own.
+ *
+ * <p>Which decoder path a file takes: the magic bytes decide the format (never the file name); JPEG, PNG, GIF,
+ * BMP, TIFF and WebP decode through ImageIO with the TwelveMonkeys plugins; HEIC/HEIF, AVIF, JPEG XL and camera
+ * raw are recognised and refused as "unsupported format (...)".
  *
  * <p>Per-file failures are {@link org.morphscout.indexer.ingest.ImageReadException}s whose
  * {@link org.morphscout.indexer.ingest.ImageReadException#reason() reason} is a short phrase from a small stable

@@ -69,12 +69,6 @@ public final class LibraryIndexer {
               org.morphscout.indexer.vector.LuceneIndexOptions.defaults())) {
         String modelId = analyzer.embedder().modelId();
         List<Long> reembed = switchModelIfNeeded(modelId, analyzer.embedder().dimension(), index);
-        List<Long> invalid = new ArrayList<>();
-        int restored = VectorSync.sync(library.features(), index, modelId, options.rebuildVectors(), invalid);
-        for (long id : invalid) {
-          library.images().setStatus(id, ImageStatus.PENDING);
-          reembed.add(id);
-        }
 
         Map<Long, List<FoundFile>> found = scan(roots, failures, progress, cancel);
         Map<Path, String> hashFailures = new LinkedHashMap<>();
@@ -83,17 +77,19 @@ public final class LibraryIndexer {
         List<ImageRow> todo = new ArrayList<>(plan.toAnalyse());
         Set<Long> queued = new java.util.HashSet<>(todo.stream().map(ImageRow::id).toList());
         for (long id : reembed) {
-          if (!queued.contains(id)) {
+          if (queued.add(id)) {
             library.images().byId(id).filter(r -> Files.exists(Path.of(r.path()))).ifPresent(todo::add);
           }
         }
-        for (long id : plan.nowMissing()) {
-          index.delete(id);
+        // The catalog is the source of truth: restore what a crash lost, drop what went missing or changed.
+        List<Long> invalid = new ArrayList<>();
+        int restored = VectorSync.sync(library.features(), index, modelId, options.rebuildVectors(), invalid);
+        for (long id : invalid) {
+          library.images().setStatus(id, ImageStatus.PENDING);
+          if (queued.add(id)) {
+            library.images().byId(id).ifPresent(todo::add);
+          }
         }
-        for (long id : plan.changedReady()) {
-          index.delete(id);
-        }
-        index.commit();
 
         List<Long> analysed = new ArrayList<>();
         boolean cancelled = false;
@@ -109,9 +105,17 @@ public final class LibraryIndexer {
           for (IndexReport.FileFailure f : failures) {
             library.images().byPath(f.path()).ifPresent(r -> removed.add(r.id()));
           }
+          // Also images that are ready but have no neighbour list (returned files, an interrupted earlier run).
+          Set<Long> linked = library.neighbours().idsWithLinks();
+          List<Long> changed = new ArrayList<>(analysed);
+          for (long id : library.features().readyIds(modelId)) {
+            if (!linked.contains(id) && !analysed.contains(id)) {
+              changed.add(id);
+            }
+          }
           try {
             new NeighbourGraphUpdater(library, index, cache, options.neighbours())
-                .update(analysed, removed, progress, cancel);
+                .update(changed, removed, progress, cancel);
           } catch (CancellationToken.CancelledException e) {
             cancelled = true;
           }
@@ -125,22 +129,32 @@ public final class LibraryIndexer {
     }
   }
 
-  /** When the catalog's vectors came from another model, every ready image is re-embedded with this one. */
+  /**
+   * When the catalog's vectors came from another model, or its silhouettes from another extractor, every ready image
+   * is analysed again with the current ones: vectors and silhouettes of two setups are never mixed.
+   */
   private List<Long> switchModelIfNeeded(String modelId, int dimension, VectorIndex index) throws IOException {
     library.features().registerModel(modelId, dimension,
         setup.model().isPresent() ? "user model " + setup.model().get().modelFile() : "built-in GIST + CIELAB layout");
     String active = LibrarySettings.activeModel(library.features()).orElse(null);
+    String silhouettes = setup.silhouettes().name().toLowerCase(java.util.Locale.ROOT);
+    String activeSilhouettes = library.features().setting(LibrarySettings.ACTIVE_SILHOUETTES).orElse(silhouettes);
     List<Long> reembed = new ArrayList<>();
-    if (active != null && !active.equals(modelId)) {
-      LOG.warn("appearance model changed from {} to {}: every image is analysed again", active, modelId);
+    boolean modelChanged = active != null && !active.equals(modelId);
+    if (modelChanged || !activeSilhouettes.equals(silhouettes)) {
+      LOG.warn("analysis changed (model {} -> {}, silhouettes {} -> {}): every image is analysed again", active,
+          modelId, activeSilhouettes, silhouettes);
       for (ImageRow row : library.images().withStatus(ImageStatus.READY)) {
         reembed.add(row.id());
       }
-      index.clear();
-      index.commit();
+      if (modelChanged) {
+        index.clear();
+        index.commit();
+      }
       library.neighbours().clear();
     }
     library.features().putSetting(LibrarySettings.ACTIVE_MODEL, modelId);
+    library.features().putSetting(LibrarySettings.ACTIVE_SILHOUETTES, silhouettes);
     return reembed;
   }
 

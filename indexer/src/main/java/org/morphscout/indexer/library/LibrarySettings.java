@@ -7,6 +7,8 @@ import org.morphscout.indexer.catalog.FeatureStore;
 public final class LibrarySettings {
   /** The appearance model whose vectors the catalog holds. */
   public static final String ACTIVE_MODEL = "active_model";
+  /** The silhouette extractor whose masks the catalog holds ("default" or "learned"). */
+  public static final String ACTIVE_SILHOUETTES = "active_silhouettes";
 
   private LibrarySettings() {}
 

@@ -30,24 +30,18 @@ public final class VectorSync {
     }
     Set<Long> inIndex = rebuild ? Set.of() : index.ids();
     Set<Long> wanted = new HashSet<>(features.readyIds(modelId));
-    int[] added = {0};
-    IOException[] failure = {null};
-    features.forEachVector(v -> {
-      if (failure[0] == null && v.modelId().equals(modelId) && !inIndex.contains(v.imageId())) {
-        if (!finite(v.appearance()) || !finite(v.shape())) {
-          invalid.add(v.imageId());
-          return;
-        }
-        try {
-          index.upsert(v.imageId(), v.appearance(), nonZeroOrNull(v.shape()));
-          added[0]++;
-        } catch (IOException e) {
-          failure[0] = e;
-        }
+    int added = 0;
+    for (long id : wanted) {
+      if (inIndex.contains(id)) {
+        continue;
       }
-    });
-    if (failure[0] != null) {
-      throw failure[0];
+      FeatureStore.Vectors v = features.vectorsOf(id).orElse(null);
+      if (v == null || !finite(v.appearance()) || !finite(v.shape())) {
+        invalid.add(id);
+        continue;
+      }
+      index.upsert(id, v.appearance(), nonZeroOrNull(v.shape()));
+      added++;
     }
     int removed = 0;
     for (long id : inIndex) {
@@ -56,11 +50,11 @@ public final class VectorSync {
         removed++;
       }
     }
-    if (added[0] > 0 || removed > 0 || rebuild) {
+    if (added > 0 || removed > 0 || rebuild) {
       index.commit();
-      LOG.info("vector index brought in line with the catalog: {} added, {} removed", added[0], removed);
+      LOG.info("vector index brought in line with the catalog: {} added, {} removed", added, removed);
     }
-    return added[0];
+    return added;
   }
 
   static boolean finite(float[] v) {

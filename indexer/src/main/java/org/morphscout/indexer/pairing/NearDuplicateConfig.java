@@ -6,14 +6,19 @@ package org.morphscout.indexer.pairing;
  *
  * @param minCosine smallest cosine of the appearance vectors, in [0, 1] (default 0.98; recompression and resizing
  *     keep learned embeddings within about 0.99, a different photo of the same object rarely exceeds 0.97)
- * @param maxShapeDistance largest Euclidean distance of the L2-normalised shape vectors, in [0, 2] (default 0.1)
- * @param maxDeltaE largest colour difference of the foreground means (default 2.0, about a just noticeable
- *     difference)
+ * @param maxShapeDistance largest Euclidean distance of the L2-normalised shape vectors, in [0, 2] (default 0.2, a shape cosine of 0.98: a light crop moves the outline a little)
+ * @param maxDeltaE largest CIEDE2000 difference of the foreground means (default 4.0: a light exposure or colour edit
+ *     moves it by 2-3; about 1 is a just noticeable difference)
  * @param maxAspectGap largest relative difference of the image aspect ratios, in [0, 1] (default 0.02)
+ * @param maxBackgroundDeltaE largest CIEDE2000 difference of the background means (default 4.0): a global edit moves
+ *     object and background alike, while a different photo usually has another backdrop
+ * @param maxBackgroundStdGap largest difference of the background's L* standard deviation (default 1.5): the
+ *     backdrop's texture survives resizing and light edits but differs between shots
  */
-public record NearDuplicateConfig(double minCosine, double maxShapeDistance, double maxDeltaE, double maxAspectGap) {
+public record NearDuplicateConfig(double minCosine, double maxShapeDistance, double maxDeltaE, double maxAspectGap,
+    double maxBackgroundDeltaE, double maxBackgroundStdGap) {
 
-  public static final NearDuplicateConfig DEFAULTS = new NearDuplicateConfig(0.98, 0.1, 2.0, 0.02);
+  public static final NearDuplicateConfig DEFAULTS = new NearDuplicateConfig(0.98, 0.2, 4.0, 0.02, 4.0, 1.5);
 
   public NearDuplicateConfig {
     if (!(minCosine >= 0 && minCosine <= 1)) {
@@ -24,6 +29,12 @@ public record NearDuplicateConfig(double minCosine, double maxShapeDistance, dou
     }
     if (!(maxDeltaE >= 0) || !Double.isFinite(maxDeltaE)) {
       throw new IllegalArgumentException("maxDeltaE must be >= 0, got " + maxDeltaE);
+    }
+    if (!(maxBackgroundDeltaE >= 0) || !Double.isFinite(maxBackgroundDeltaE)) {
+      throw new IllegalArgumentException("maxBackgroundDeltaE must be >= 0, got " + maxBackgroundDeltaE);
+    }
+    if (!(maxBackgroundStdGap >= 0) || !Double.isFinite(maxBackgroundStdGap)) {
+      throw new IllegalArgumentException("maxBackgroundStdGap must be >= 0, got " + maxBackgroundStdGap);
     }
     if (!(maxAspectGap >= 0 && maxAspectGap <= 1)) {
       throw new IllegalArgumentException("maxAspectGap must be in [0, 1], got " + maxAspectGap);

@@ -51,7 +51,16 @@ public final class NearDuplicates {
       return false;
     }
     double d = colour.deltaE(ca.foregroundMean(), cb.foregroundMean());
-    return d <= config.maxDeltaE(); // NaN (no foreground colour) is never a duplicate
+    if (!(d <= config.maxDeltaE())) {
+      return false; // NaN (no foreground colour) is never a duplicate
+    }
+    if (ca.backgroundMean() == null || cb.backgroundMean() == null || Double.isNaN(ca.backgroundMean()[0])
+        || Double.isNaN(cb.backgroundMean()[0])) {
+      return true; // cut-outs without background: the object decides alone
+    }
+    double bg = colour.deltaE(ca.backgroundMean(), cb.backgroundMean());
+    double texture = Math.abs(ca.backgroundStd()[0] - cb.backgroundStd()[0]);
+    return bg <= config.maxBackgroundDeltaE() && texture <= config.maxBackgroundStdGap();
   }
 
   /** Euclidean distance of two vectors after L2 normalisation. */

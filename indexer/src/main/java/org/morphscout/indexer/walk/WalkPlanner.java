@@ -46,10 +46,8 @@ public final class WalkPlanner {
   /** An open path over items 0..n-1, starting at {@code start} and/or ending at {@code end} when given. */
   public WalkResult planOpen(int n, DistanceFunction d, OptionalInt start, OptionalInt end) {
     double[] raw = matrix(n, d);
-    int s = start.orElse(-1);
-    int e = end.orElse(-1);
-    checkItem(s, n, "start");
-    checkItem(e, n, "end");
+    int s = checkItem(start, n, "start");
+    int e = checkItem(end, n, "end");
     if (s >= 0 && s == e && n > 1) {
       throw new MorphscoutException("A walkthrough cannot start and end at the same item " + s
           + " unless it has only that item; ask for a closed tour instead.");
@@ -184,10 +182,16 @@ public final class WalkPlanner {
     return raw;
   }
 
-  private static void checkItem(int i, int n, String role) {
-    if (i >= n) {
-      throw new MorphscoutException("The walkthrough's " + role + " item " + i + " is not among the " + n
-          + " items.");
+  /** The fixed item's index, or -1 when none is given. */
+  private static int checkItem(OptionalInt item, int n, String role) {
+    if (item.isEmpty()) {
+      return -1;
     }
+    int i = item.getAsInt();
+    if (i < 0 || i >= n) {
+      throw new MorphscoutException("The walkthrough's " + role + " item " + i + " is not among the " + n
+          + " items (0.." + (n - 1) + ").");
+    }
+    return i;
   }
 }

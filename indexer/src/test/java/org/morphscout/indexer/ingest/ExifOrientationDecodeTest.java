@@ -5,6 +5,13 @@ import static org.morphscout.indexer.ingest.TestImages.maxChannelDiff;
 
 import java.awt.image.BufferedImage;
 import java.nio.file.Path;
+import javax.imageio.IIOImage;
+import javax.imageio.ImageIO;
+import javax.imageio.ImageTypeSpecifier;
+import javax.imageio.ImageWriter;
+import javax.imageio.metadata.IIOMetadata;
+import javax.imageio.metadata.IIOMetadataNode;
+import javax.imageio.stream.ImageOutputStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -63,6 +70,45 @@ class ExifOrientationDecodeTest {
     assertThat(maxChannelDiff(got, colour))
         .as("tag %d: pixel (%d,%d) = %08x, expected about %08x", tag, x, y, got, colour)
         .isLessThanOrEqualTo(TOLERANCE);
+  }
+
+  @ParameterizedTest(name = "TIFF orientation {0}")
+  @ValueSource(ints = {3, 6, 7})
+  void tiffOrientationTagIsApplied(int tag) throws Exception {
+    // TIFF 6.0 section 8, tag 274 Orientation: same eight values as Exif (which took them from TIFF). Written
+    // through the TwelveMonkeys TIFF writer's native metadata tree (TIFFField number 274).
+    BufferedImage img = marked();
+    ImageWriter writer = ImageIO.getImageWritersByFormatName("tiff").next();
+    IIOMetadata meta = writer.getDefaultImageMetadata(new ImageTypeSpecifier(img), null);
+    String format = meta.getNativeMetadataFormatName();
+    IIOMetadataNode root = new IIOMetadataNode(format);
+    IIOMetadataNode ifd = new IIOMetadataNode("TIFFIFD");
+    IIOMetadataNode field = new IIOMetadataNode("TIFFField");
+    field.setAttribute("number", "274");
+    field.setAttribute("name", "Orientation");
+    IIOMetadataNode shorts = new IIOMetadataNode("TIFFShorts");
+    IIOMetadataNode value = new IIOMetadataNode("TIFFShort");
+    value.setAttribute("value", Integer.toString(tag));
+    shorts.appendChild(value);
+    field.appendChild(shorts);
+    ifd.appendChild(field);
+    root.appendChild(ifd);
+    meta.mergeTree(format, root);
+    Path file = dir.resolve("oriented-" + tag + ".tif");
+    try (ImageOutputStream out = ImageIO.createImageOutputStream(file.toFile())) {
+      writer.setOutput(out);
+      writer.write(null, new IIOImage(img, null, meta), null);
+    } finally {
+      writer.dispose();
+    }
+
+    DecodedImage d = new ImageIoDecoder(DecodeOptions.defaults()).decode(file);
+
+    assertThat(d.orientation()).isEqualTo(tag);
+    assertThat(d.width()).isEqualTo(tag >= 5 ? 48 : 96);
+    checkBlock(d.analysis(), tag, false, false, RED);
+    checkBlock(d.analysis(), tag, false, true, BLUE);
+    checkBlock(d.analysis(), tag, true, false, GREEN);
   }
 
   @Test

@@ -84,6 +84,18 @@ class ImageIoDecoderBadInputTest {
     assertThat(e.reason()).isEqualTo("truncated PNG data");
   }
 
+  @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
+  @org.junit.jupiter.params.provider.ValueSource(strings = {"tiff", "bmp", "gif", "png", "jpeg"})
+  void truncatedFilesOfEveryFormatGiveAReasonNotAPartialPicture(String format) throws Exception {
+    BufferedImage img = photoLike(120, 90, 14);
+    byte[] full = format.equals("gif") ? TestImages.encode(img, "gif")
+        : format.equals("jpeg") ? TestImages.jpeg(img, false) : TestImages.encode(img, format);
+    Path file = TestImages.write(dir, "cut." + format, Arrays.copyOf(full, full.length / 2));
+    ImageReadException e = failure(file);
+    assertThat(e.failure()).as(e.reason()).isEqualTo(ReadFailure.TRUNCATED);
+    assertThat(e.reason()).isEqualTo("truncated " + FileFormat.valueOf(format.toUpperCase(java.util.Locale.ROOT)).label() + " data");
+  }
+
   @Test
   void randomBytesNamedJpg() throws Exception {
     long seed = 20261201L;
@@ -201,12 +213,12 @@ class ImageIoDecoderBadInputTest {
 
   @Test
   void capIsConfigurable() throws Exception {
-    Path file = TestImages.write(dir, "small.png", TestImages.encode(TestImages.filled(2000, 1000, -1), "png"));
-    ImageIoDecoder strict = new ImageIoDecoder(DecodeOptions.defaults().withMaxPixels(1_500_000));
+    Path file = TestImages.write(dir, "small.png", TestImages.encode(TestImages.filled(1000, 500, -1), "png"));
+    ImageIoDecoder strict = new ImageIoDecoder(DecodeOptions.defaults().withMaxPixels(400_000));
     assertThatThrownBy(() -> strict.decode(file))
         .isInstanceOfSatisfying(ImageReadException.class, e -> assertThat(e.reason())
-            .isEqualTo("image too large: 2000x1000 = 2.0 MP exceeds the 1.5 MP cap"));
-    assertThat(decoder.decode(file).width()).isEqualTo(2000);
+            .isEqualTo("image too large: 1000x500 = 0.5 MP exceeds the 0.4 MP cap"));
+    assertThat(decoder.decode(file).width()).isEqualTo(1000);
   }
 
   @Test

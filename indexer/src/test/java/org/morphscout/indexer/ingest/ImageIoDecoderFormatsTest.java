@@ -109,11 +109,34 @@ class ImageIoDecoderFormatsTest {
     assertThat(sofComponentCount(bytes)).as("a 4-component (CMYK) frame").isEqualTo(4);
 
     DecodedImage d = decoder.decode(TestImages.write(dir, "cmyk.jpg", bytes));
-    BufferedImage a = d.analysis();
     // Expected colours from the common-practice CMYK -> RGB relation R = 255(1-C)(1-K), G = 255(1-M)(1-K),
     // B = 255(1-Y)(1-K): cyan (0,255,255), white (255,255,255), black (0,0,0). An ICC-managed conversion lands
     // near these but not on them (printing inks are duller: SWOP cyan is about (0,160,230), from memory), hence
     // the wide tolerance on cyan's green and blue.
+    assertCyanWhiteBlack(d.analysis());
+  }
+
+  @org.junit.jupiter.params.ParameterizedTest(name = "YCCK {0}")
+  @org.junit.jupiter.params.provider.ValueSource(booleans = {false, true})
+  void adobeCmykAndYcckJpegsComeOutInRgb(boolean ycck) throws Exception {
+    // Hand-laid Adobe JPEG (see AdobeJpegBuilder): 48 x 16, cyan | paper white | full black.
+    int[][] inks = new int[48 * 16][];
+    int[][] blocks = {{255, 0, 0, 0}, {0, 0, 0, 0}, {0, 0, 0, 255}};
+    for (int i = 0; i < inks.length; i++) {
+      inks[i] = blocks[(i % 48) / 16];
+    }
+    byte[] bytes = AdobeJpegBuilder.build(48, 16, inks, ycck);
+    assertThat(sofComponentCount(bytes)).isEqualTo(4);
+    // APP14 right after SOI (offset 2): FF EE, length (2), "Adobe" (5), version (2), flags0 (2), flags1 (2), then
+    // the transform byte at file offset 2 + 2 + 2 + 5 + 6 = 17.
+    assertThat(new String(bytes, 6, 5, java.nio.charset.StandardCharsets.US_ASCII)).isEqualTo("Adobe");
+    assertThat(bytes[17]).as("Adobe transform byte").isEqualTo((byte) (ycck ? 2 : 0));
+    DecodedImage d = decoder.decode(TestImages.write(dir, ycck ? "ycck.jpg" : "adobe-cmyk.jpg", bytes));
+    assertCyanWhiteBlack(d.analysis());
+  }
+
+  /** Cyan, white, black blocks of 16 px: see {@link #cmykJpegComesOutInRgb()} for the expected values. */
+  private static void assertCyanWhiteBlack(BufferedImage a) {
     int cyan = a.getRGB(8, 8);
     assertThat(red(cyan)).as("cyan R %08x", cyan).isLessThan(60);
     assertThat(green(cyan)).as("cyan G %08x", cyan).isGreaterThan(140);
@@ -139,6 +162,53 @@ class ImageIoDecoderFormatsTest {
     assertThat(red(p)).as("%08x vs sRGB %d", p, expected).isBetween(expected - 4, expected + 4);
     assertThat(green(p)).isBetween(expected - 4, expected + 4);
     assertThat(blue(p)).isBetween(expected - 4, expected + 4);
+  }
+
+  @Test
+  void pngWithIccpChunkIsConvertedToSrgb() throws Exception {
+    // Same check as for JPEG, with the profile in an iCCP chunk (ISO/IEC 15948 section 11.3.3.3: profile name,
+    // NUL, compression method 0, zlib-compressed profile), placed right after IHDR.
+    byte[] plain = TestImages.encode(TestImages.rgb(TestImages.filled(16, 16, 0xFF808080)), "png");
+    byte[] icc = ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData();
+    ByteArrayOutputStream data = new ByteArrayOutputStream();
+    data.writeBytes("linear\0".getBytes(java.nio.charset.StandardCharsets.ISO_8859_1));
+    data.write(0);
+    try (var z = new java.util.zip.DeflaterOutputStream(data)) {
+      z.write(icc);
+    }
+    byte[] chunk = TestImages.pngChunk("iCCP", data.toByteArray());
+    int afterIhdr = 8 + 12 + 13; // signature, IHDR length/type/CRC + 13 data bytes
+    byte[] tagged = new byte[plain.length + chunk.length];
+    System.arraycopy(plain, 0, tagged, 0, afterIhdr);
+    System.arraycopy(chunk, 0, tagged, afterIhdr, chunk.length);
+    System.arraycopy(plain, afterIhdr, tagged, afterIhdr + chunk.length, plain.length - afterIhdr);
+
+    DecodedImage d = decoder.decode(TestImages.write(dir, "linear-icc.png", tagged));
+    int p = d.analysis().getRGB(8, 8);
+    int expected = (int) Math.round(255 * (1.055 * Math.pow(128 / 255.0, 1 / 2.4) - 0.055)); // IEC 61966-2-1
+    assertThat(red(p)).as("%08x vs sRGB %d", p, expected).isBetween(expected - 4, expected + 4);
+  }
+
+  @Test
+  void pngExifChunkOrientationIsApplied() throws Exception {
+    // PNG eXIf chunk (Extensions to the PNG 1.2 Specification, version 1.5.0, section 3.7; PNG 3rd edition
+    // section 11.3.6.1): the chunk data is the Exif TIFF structure without the "Exif\0\0" prefix. Orientation 6
+    // (rotate 90 CW to view) turns the stored 64 x 32 into 32 x 64 with the stored top-left block at top-right.
+    byte[] plain = TestImages.encode(TestImages.rgb(halves()), "png");
+    byte[] app1 = TestImages.exifOrientationApp1(6, true);
+    byte[] tiff = java.util.Arrays.copyOfRange(app1, 4 + 6, app1.length);
+    byte[] chunk = TestImages.pngChunk("eXIf", tiff);
+    int afterIhdr = 8 + 12 + 13;
+    byte[] tagged = new byte[plain.length + chunk.length];
+    System.arraycopy(plain, 0, tagged, 0, afterIhdr);
+    System.arraycopy(chunk, 0, tagged, afterIhdr, chunk.length);
+    System.arraycopy(plain, afterIhdr, tagged, afterIhdr + chunk.length, plain.length - afterIhdr);
+
+    DecodedImage d = decoder.decode(TestImages.write(dir, "exif.png", tagged));
+    assertThat(d.orientation()).isEqualTo(6);
+    assertThat(d.width()).isEqualTo(32);
+    assertThat(d.height()).isEqualTo(64);
+    assertThat(d.analysis().getRGB(29, 2)).isEqualTo(YELLOW);
   }
 
   @Test
@@ -268,6 +338,25 @@ class ImageIoDecoderFormatsTest {
   }
 
   @Test
+  void tiffWithEmbeddedIccProfileIsConvertedToSrgb() throws Exception {
+    // Samples 128 in the JDK's linear-light RGB space; the TIFF writer embeds the profile (TIFF tag 34675,
+    // ICC.1:2010 Annex B.3) and the result must be sRGB 188 (IEC 61966-2-1, see the JPEG case).
+    ComponentColorModel cm = new ComponentColorModel(
+        ColorSpace.getInstance(ColorSpace.CS_LINEAR_RGB), false, false, Transparency.OPAQUE, DataBuffer.TYPE_BYTE);
+    WritableRaster r = cm.createCompatibleWritableRaster(16, 16);
+    for (int y = 0; y < 16; y++) {
+      for (int x = 0; x < 16; x++) {
+        r.setPixel(x, y, new int[] {128, 128, 128});
+      }
+    }
+    byte[] bytes = TestImages.encode(new BufferedImage(cm, r, false, null), "tiff");
+    DecodedImage d = decoder.decode(TestImages.write(dir, "linear.tif", bytes));
+    int p = d.analysis().getRGB(8, 8);
+    int expected = (int) Math.round(255 * (1.055 * Math.pow(128 / 255.0, 1 / 2.4) - 0.055));
+    assertThat(red(p)).as("%08x vs sRGB %d", p, expected).isBetween(expected - 4, expected + 4);
+  }
+
+  @Test
   void bmp() throws Exception {
     BufferedImage bgr = new BufferedImage(64, 32, BufferedImage.TYPE_3BYTE_BGR);
     bgr.createGraphics().drawImage(halves(), 0, 0, null);
@@ -343,27 +432,96 @@ class ImageIoDecoderFormatsTest {
   }
 
   @Test
-  void bigImageIsSubsampledAndAreaAveraged() throws Exception {
-    // 3000 x 2000 (6 MP): vertical stripes 1 px black / 1 px white. A point-subsampled image would be all black or
-    // all white (aliasing); an area average is mid grey (about 128). Left third is a solid red block.
-    BufferedImage img = new BufferedImage(3000, 2000, BufferedImage.TYPE_INT_RGB);
-    int[] row = new int[3000];
-    for (int x = 0; x < 3000; x++) {
-      row[x] = x < 1000 ? 0xFF0000 : (x % 2 == 0 ? 0x000000 : 0xFFFFFF);
+  void losslessWebPWithAlpha() throws Exception {
+    boolean[] pattern = new boolean[16 * 8];
+    pattern[0] = true;
+    byte[] webp = WebPLosslessBuilder.build(16, 8, pattern, 10, 20, 200, 30, 128);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "alpha.webp", webp));
+    assertThat(d.hasAlpha()).isTrue();
+    assertThat(d.analysis().getRGB(0, 0)).isEqualTo(0x800AC81E);
+    assertThat(d.analysis().getRGB(5, 5)).isEqualTo(0x800A141E);
+  }
+
+  @Test
+  void extendedWebPWithExifOrientation() throws Exception {
+    // VP8X container with an EXIF chunk carrying orientation 8 (rotate 270 CW to view): stored 64 x 32 with the
+    // marked block at the stored top-left ends up at the upright bottom-left (CIPA DC-008-2019: 8 = left/bottom).
+    boolean[] pattern = new boolean[64 * 32];
+    for (int y = 0; y < 8; y++) {
+      for (int x = 0; x < 8; x++) {
+        pattern[y * 64 + x] = true;
+      }
     }
-    for (int y = 0; y < 2000; y++) {
-      img.setRGB(0, y, 3000, 1, row, 0, 3000);
+    byte[] simple = WebPLosslessBuilder.build(64, 32, pattern, 255, 0, 255, 0, 255);
+    byte[] app1 = TestImages.exifOrientationApp1(8, false);
+    byte[] tiff = java.util.Arrays.copyOfRange(app1, 4 + 6, app1.length);
+    byte[] webp = WebPLosslessBuilder.withExif(simple, 64, 32, false, tiff);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "exif.webp", webp));
+    assertThat(d.orientation()).isEqualTo(8);
+    assertThat(d.width()).isEqualTo(32);
+    assertThat(d.height()).isEqualTo(64);
+    assertThat(d.analysis().getRGB(2, 61)).isEqualTo(YELLOW);
+    assertThat(d.analysis().getRGB(2, 2)).isEqualTo(RED);
+  }
+
+  @Test
+  void wideWebPIsSubsampled() throws Exception {
+    // 3200 x 8: step 3200 / 1536 = 2; left half yellow, right half red.
+    boolean[] pattern = new boolean[3200 * 8];
+    for (int i = 0; i < pattern.length; i++) {
+      pattern[i] = i % 3200 < 1600;
     }
-    Path file = TestImages.write(dir, "big.png", TestImages.encode(img, "png"));
-    DecodedImage d = decoder.decode(file);
-    assertThat(d.width()).isEqualTo(3000);
-    assertThat(d.height()).isEqualTo(2000);
+    byte[] webp = WebPLosslessBuilder.build(3200, 8, pattern, 255, 0, 255, 0, 255);
+    DecodedImage d = decoder.decode(TestImages.write(dir, "wide.webp", webp));
+    assertThat(d.width()).isEqualTo(3200);
     assertThat(d.analysis().getWidth()).isEqualTo(768);
-    assertThat(d.analysis().getHeight()).isEqualTo(512);
+    assertThat(d.analysis().getHeight()).isEqualTo(2);
+    assertThat(d.analysis().getRGB(100, 1)).isEqualTo(YELLOW);
+    assertThat(d.analysis().getRGB(700, 1)).isEqualTo(RED);
+  }
+
+  @Test
+  void fineDetailIsAreaAveragedNotAliased() throws Exception {
+    // 1600 x 1000 (decoded at full size: 1600 / 1536 gives step 1): 1 px black / 1 px white vertical stripes. Point
+    // sampling down to 768 px would give black or white columns (aliasing); an area average gives mid grey
+    // (127.5). The left quarter is solid red and must stay exactly red.
+    BufferedImage img = new BufferedImage(1600, 1000, BufferedImage.TYPE_INT_RGB);
+    int[] row = new int[1600];
+    for (int x = 0; x < 1600; x++) {
+      row[x] = x < 400 ? 0xFF0000 : (x % 2 == 0 ? 0x000000 : 0xFFFFFF);
+    }
+    for (int y = 0; y < 1000; y++) {
+      img.setRGB(0, y, 1600, 1, row, 0, 1600);
+    }
+    DecodedImage d = decoder.decode(TestImages.write(dir, "stripes.png", TestImages.encode(img, "png")));
+    assertThat(d.analysis().getWidth()).isEqualTo(768);
+    assertThat(d.analysis().getHeight()).isEqualTo(480);
     assertThat(d.analysis().getRGB(100, 200)).isEqualTo(0xFFFF0000);
-    // Stripes sampled with subsampling step 1 (3000 / 1536 = 1): average of black and white, within rounding.
-    int stripes = d.analysis().getRGB(600, 300);
-    assertThat(red(stripes)).as("%08x", stripes).isBetween(120, 135);
+    for (int x = 300; x < 760; x += 7) {
+      int p = d.analysis().getRGB(x, 240);
+      assertThat(red(p)).as("x=%d: %08x", x, p).isBetween(118, 137);
+    }
+  }
+
+  @Test
+  void wideImageIsSubsampledToTheAnalysisSize() throws Exception {
+    // 4000 x 250: step 4000 / 1536 = 2, decoded 2000 x 125, then averaged to 768 x 48. Full size is reported.
+    BufferedImage img = new BufferedImage(4000, 250, BufferedImage.TYPE_INT_RGB);
+    int[] row = new int[4000];
+    for (int x = 0; x < 4000; x++) {
+      row[x] = x < 1000 ? 0xFF0000 : x < 3000 ? 0x00FF00 : 0x0000FF;
+    }
+    for (int y = 0; y < 250; y++) {
+      img.setRGB(0, y, 4000, 1, row, 0, 4000);
+    }
+    DecodedImage d = decoder.decode(TestImages.write(dir, "wide.png", TestImages.encode(img, "png")));
+    assertThat(d.width()).isEqualTo(4000);
+    assertThat(d.height()).isEqualTo(250);
+    assertThat(d.analysis().getWidth()).isEqualTo(768);
+    assertThat(d.analysis().getHeight()).isEqualTo(48);
+    assertThat(d.analysis().getRGB(50, 20)).isEqualTo(0xFFFF0000);
+    assertThat(d.analysis().getRGB(384, 20)).isEqualTo(0xFF00FF00);
+    assertThat(d.analysis().getRGB(700, 20)).isEqualTo(0xFF0000FF);
   }
 
   @Test

@@ -62,6 +62,15 @@ class LibraryScannerTest {
   }
 
   @Test
+  void overlappingRootsListEachFileOnce() throws Exception {
+    Path root = tmp.resolve("lib");
+    Path a = touch(root.resolve("2024/a.jpg"));
+    Path b = touch(root.resolve("b.png"));
+    ScanResult r = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root.resolve("2024"), root));
+    assertThat(paths(r)).containsExactly(a, b);
+  }
+
+  @Test
   void oddNamesWork() throws Exception {
     Path root = tmp.resolve("lib");
     Path spaces = touch(root.resolve("holiday photos/beach at noon.jpeg"));
@@ -134,6 +143,27 @@ class LibraryScannerTest {
   }
 
   @Test
+  void rootThatIsALinkIsEntered() throws Exception {
+    assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
+    Path disk = tmp.resolve("external-disk/photos");
+    touch(disk.resolve("a.jpg"));
+    Path root = Files.createSymbolicLink(tmp.resolve("Pictures"), disk);
+    ScanResult r = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root));
+    assertThat(paths(r)).containsExactly(root.resolve("a.jpg"));
+  }
+
+  @Test
+  void loopIsSilentlyIgnoredWhenNotFollowingLinks() throws Exception {
+    assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
+    Path root = tmp.resolve("lib");
+    Path a = touch(root.resolve("a/pic.jpg"));
+    Files.createSymbolicLink(root.resolve("a/back-to-root"), root);
+    ScanResult r = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root));
+    assertThat(paths(r)).containsExactly(a);
+    assertThat(r.problems()).isEmpty();
+  }
+
+  @Test
   void symlinkLoopEndsAndIsReported() throws Exception {
     assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
     Path root = tmp.resolve("lib");
@@ -146,6 +176,23 @@ class LibraryScannerTest {
     assertThat(paths(r)).containsExactly(a);
     assertThat(r.problems()).extracting(ScanProblem::path).containsExactly(loop);
     assertThat(r.problems().get(0).reason()).contains("loop");
+  }
+
+  @Test
+  void brokenLinkIsReportedWhenFollowingLinks() throws Exception {
+    assumeTrue(symlinksSupported(tmp), "symbolic links not supported here");
+    Path root = tmp.resolve("lib");
+    Path ok = touch(root.resolve("ok.jpg"));
+    Path dangling = Files.createSymbolicLink(root.resolve("moved.jpg"), tmp.resolve("not-there.jpg"));
+
+    ScanResult ignoring = new LibraryScanner(ScanOptions.defaults()).scan(List.of(root));
+    assertThat(paths(ignoring)).containsExactly(ok);
+    assertThat(ignoring.problems()).isEmpty();
+
+    ScanResult following = new LibraryScanner(ScanOptions.defaults().withLinks(ScanOptions.LinkPolicy.ANY))
+        .scan(List.of(root));
+    assertThat(paths(following)).containsExactly(ok);
+    assertThat(following.problems()).containsExactly(new ScanProblem(dangling, "broken symbolic link"));
   }
 
   @Test

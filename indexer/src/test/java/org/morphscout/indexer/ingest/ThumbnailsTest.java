@@ -54,6 +54,21 @@ class ThumbnailsTest {
   }
 
   @Test
+  void explicitTargetPicksTheFormatFromItsExtension() throws Exception {
+    BufferedImage half = TestImages.filled(64, 64, 0x80000000); // 50 % black
+    Path jpg = dir.resolve("sub/x.jpeg");
+    thumbnails.writeTo(half, jpg);
+    // Porter-Duff "over" white: 0 * 128/255 + 255 * 127/255 = 127.
+    int p = ImageIO.read(jpg.toFile()).getRGB(32, 32);
+    assertThat(TestImages.red(p)).isBetween(124, 130);
+    Path png = dir.resolve("x.png");
+    thumbnails.writeTo(half, png);
+    assertThat(TestImages.alpha(ImageIO.read(png.toFile()).getRGB(32, 32))).isEqualTo(128);
+    org.assertj.core.api.Assertions.assertThatThrownBy(() -> thumbnails.writeTo(half, dir.resolve("x.gif")))
+        .isInstanceOf(IllegalArgumentException.class);
+  }
+
+  @Test
   void smallPicturesAreNotEnlarged() throws Exception {
     Path written = thumbnails.write(TestImages.filled(40, 20, 0xFF00FF00), dir, "tiny");
     BufferedImage back = ImageIO.read(written.toFile());

@@ -56,6 +56,21 @@ class TimeLimitedDecoderTest {
   }
 
   @Test
+  void interruptedDecodeStopsWithTheTimeOutReason(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+    Path file = TestImages.write(dir, "a.png", TestImages.encode(TestImages.filled(300, 200, 0xFF00FF00), "png"));
+    ImageIoDecoder decoder = new ImageIoDecoder(DecodeOptions.defaults());
+    Thread.currentThread().interrupt();
+    try {
+      assertThatThrownBy(() -> decoder.decode(file))
+          .isInstanceOfSatisfying(ImageReadException.class,
+              e -> assertThat(e.failure()).as(e.reason()).isEqualTo(ReadFailure.TIMED_OUT));
+    } finally {
+      Thread.interrupted(); // clear the flag for the next test
+    }
+    assertThat(decoder.decode(file).width()).isEqualTo(300);
+  }
+
+  @Test
   void workerThreadsAreNamed() throws Exception {
     try (TimeLimitedDecoder limited = new TimeLimitedDecoder(file -> {
       assertThat(Thread.currentThread().getName()).startsWith("morphscout-decode-");

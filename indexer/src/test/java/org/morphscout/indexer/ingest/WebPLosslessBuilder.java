@@ -62,6 +62,34 @@ final class WebPLosslessBuilder {
     return riff.array();
   }
 
+  /**
+   * Wraps a simple lossless WebP ({@link #build}) in the extended format (RFC 9649 section 2.7): a VP8X chunk
+   * (flags byte with the EXIF bit 0x08 and, when {@code alpha}, the alpha bit 0x10; 3 reserved bytes; canvas
+   * width - 1 and height - 1 as 24-bit little-endian), the VP8L chunk, then an EXIF chunk holding {@code exifTiff}
+   * (a TIFF-structured Exif block without the "Exif\0\0" prefix).
+   */
+  static byte[] withExif(byte[] simpleWebP, int width, int height, boolean alpha, byte[] exifTiff) {
+    byte[] vp8l = java.util.Arrays.copyOfRange(simpleWebP, 12, simpleWebP.length); // chunk incl. header + pad
+    int exifPad = exifTiff.length % 2;
+    int size = 4 + (8 + 10) + vp8l.length + (8 + exifTiff.length + exifPad);
+    ByteBuffer b = ByteBuffer.allocate(8 + size).order(ByteOrder.LITTLE_ENDIAN);
+    b.put("RIFF".getBytes(StandardCharsets.US_ASCII)).putInt(size).put("WEBP".getBytes(StandardCharsets.US_ASCII));
+    b.put("VP8X".getBytes(StandardCharsets.US_ASCII)).putInt(10);
+    b.put((byte) (0x08 | (alpha ? 0x10 : 0))).put((byte) 0).put((byte) 0).put((byte) 0);
+    put24(b, width - 1);
+    put24(b, height - 1);
+    b.put(vp8l);
+    b.put("EXIF".getBytes(StandardCharsets.US_ASCII)).putInt(exifTiff.length).put(exifTiff);
+    if (exifPad == 1) {
+      b.put((byte) 0);
+    }
+    return b.array();
+  }
+
+  private static void put24(ByteBuffer b, int v) {
+    b.put((byte) v).put((byte) (v >> 8)).put((byte) (v >> 16));
+  }
+
   /** A simple code with one symbol: 8-bit form when the symbol needs more than 1 bit. */
   private static void single(Bits bits, int symbol) {
     bits.put(1, 1).put(0, 1);

@@ -28,12 +28,17 @@ class WalkPlannerBenchmarkTest {
       q[1] = r.nextDouble();
     }
     DistanceFunction d = (i, j) -> Math.hypot(pts[i][0] - pts[j][0], pts[i][1] - pts[j][1]);
+    java.lang.management.ThreadMXBean bean = java.lang.management.ManagementFactory.getThreadMXBean();
     for (int rep = 0; rep < 3; rep++) {
+      long c0 = bean.getCurrentThreadCpuTime();
       long t0 = System.nanoTime();
       WalkResult open = new WalkPlanner().planOpen(n, d);
       long t1 = System.nanoTime();
+      long c1 = bean.getCurrentThreadCpuTime();
       WalkResult closed = new WalkPlanner(WalkConfig.DEFAULT.withJumpPenalty(0)).planClosed(n, d);
       long t2 = System.nanoTime();
+      long c2 = bean.getCurrentThreadCpuTime();
+      LOG.info("thread CPU: open {} ms, closed {} ms", (c1 - c0) / 1_000_000, (c2 - c1) / 1_000_000);
       // Beardwood-Halton-Hammersley: optimal tour of n uniform points in the unit square ~ 0.7124 sqrt(n)
       // (constant from Percus and Martin 1996, from memory).
       LOG.info("n={}: open {} ms (total {}, largest {}), closed {} ms (total {}, BHH estimate {})", n,

@@ -115,7 +115,7 @@ class WalkPlannerTest {
 
   @Test
   void jumpPenaltyTradesALittleTotalForSmallerJumps() {
-    // Averaged over seeded sets: the penalty must not raise the largest step and costs at most a few per cent.
+    // Summed over seeded sets: the penalty must lower the largest steps and cost at most a few per cent of total.
     double plainMax = 0;
     double penalMax = 0;
     double plainTotal = 0;
@@ -130,7 +130,7 @@ class WalkPlannerTest {
       plainTotal += plain.total();
       penalTotal += penal.total();
     }
-    assertThat(penalMax).isLessThanOrEqualTo(plainMax);
+    assertThat(penalMax).isLessThan(plainMax);
     assertThat(penalTotal).isLessThanOrEqualTo(plainTotal * 1.05);
   }
 

@@ -1,0 +1,62 @@
+package org.morphscout.app.cli;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.PreviewService;
+import org.morphscout.indexer.library.QueryContext;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout preview FROM [VIA...] TO --out FILE}: a cheap preview morph. */
+@Command(
+    name = "preview",
+    mixinStandardHelpOptions = true,
+    header = "Write a cheap preview morph along two or more images: an animated GIF or a PNG strip.",
+    description = "Each step warps both images with the displacement field estimated between their silhouettes and "
+        + "cross-dissolves them. It is a preview for judging pairs and chains, not a renderer. Images may be catalog "
+        + "images or any image files.")
+final class PreviewCommand implements Callable<Integer> {
+  @ParentCommand MorphscoutCommand root;
+  @Spec CommandSpec spec;
+  @Mixin AnalysisOptions analysis;
+
+  @Parameters(arity = "2..*", paramLabel = "<image>", description = "FROM, any VIA images, then TO.")
+  List<String> images = new ArrayList<>();
+
+  @Option(names = "--out", required = true, paramLabel = "<file.gif|file.png>", description = "Where to write it.")
+  Path out;
+
+  @Option(names = "--frames-per-step", paramLabel = "<n>", defaultValue = "12",
+      description = "Frames per step, both ends included (default: ${DEFAULT-VALUE}).")
+  int framesPerStep;
+
+  @Option(names = "--delay", paramLabel = "<ms>", defaultValue = "80",
+      description = "GIF frame delay in milliseconds (default: ${DEFAULT-VALUE}).")
+  int delay;
+
+  @Override
+  public Integer call() throws Exception {
+    try (Library library = Library.openExisting(root.catalogDir());
+        QueryContext context = new QueryContext(library, analysis.setup())) {
+      List<ImageAnalysis> stops = new ArrayList<>();
+      for (String image : images) {
+        stops.add(context.resolve(image));
+      }
+      List<BufferedImage> frames = new PreviewService(context).frames(stops, framesPerStep);
+      PreviewService.write(frames, out, delay);
+      spec.commandLine().getOut().printf("preview of %d frames written to %s%n", frames.size(),
+          out.toAbsolutePath().normalize());
+      return ExitCodes.OK;
+    }
+  }
+}
