@@ -89,6 +89,11 @@ class RealServicesTest {
         assertThat(c.maxStep()).isEqualTo(c.steps().stream().mapToDouble(s -> s.cost()).max().orElseThrow());
         assertThat(c.steps()).allSatisfy(s -> assertThat(s.components()).containsKey("pair score"));
       });
+      var chain = vm.chains().chains().get(0);
+      vm.chains().preview(chain);
+      // the library's preview: 12 frames a step, the frame shared by two steps shown once
+      assertThat(vm.chains().previewProperty().get()).hasSize(11 * chain.steps().size() + 1)
+          .allSatisfy(f -> assertThat(f.getWidth()).isEqualTo(320));
 
       // a walkthrough of the three discs and a star keeps the discs together (same shape, scale-normalised)
       vm.session().selection().setAll(vm.session().rows().stream().filter(r -> r.path().contains("round-")

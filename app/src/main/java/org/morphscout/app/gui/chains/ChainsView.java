@@ -228,7 +228,7 @@ public final class ChainsView extends BorderPane {
         player.setImage(frames.get(i));
       }
     });
-    Label hint = new Label("Preview (a quick cross-fade along the chain, not a render)");
+    Label hint = new Label("Preview along the chain (a quick warp and cross-fade, not a final render)");
     hint.getStyleClass().add("summary");
     VBox controls = new VBox(8, hint, new HBox(8, playButton, scrub));
     HBox bar = new HBox(16, player, controls);

@@ -2,7 +2,6 @@ package org.morphscout.app.gui.chains;
 
 import java.awt.image.BufferedImage;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
@@ -198,17 +197,8 @@ public final class ChainsViewModel {
     }
     preview.set(null);
     info.set("Making the preview…");
-    runner.submit("preview chain", token -> {
-      List<BufferedImage> frames = new ArrayList<>();
-      List<Long> ids = chain.images();
-      for (int i = 0; i + 1 < ids.size(); i++) {
-        List<BufferedImage> step = session.backends().preview().morph(ids.get(i), ids.get(i + 1), FRAMES_PER_STEP,
-            token);
-        // the last frame of one step is the first of the next
-        frames.addAll(i == 0 ? step : step.subList(1, step.size()));
-      }
-      return frames;
-    }, frames -> {
+    runner.submit("preview chain", token -> session.backends().preview().chain(chain.images(), FRAMES_PER_STEP,
+        token), frames -> {
       info.set("Preview: " + frames.size() + " frames");
       preview.set(frames);
     }, e -> {

@@ -6,15 +6,16 @@ import org.morphscout.indexer.library.ChainService;
 import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.PairService;
+import org.morphscout.indexer.library.PreviewService;
 import org.morphscout.indexer.library.QueryContext;
 import org.morphscout.indexer.library.WalkService;
 import org.morphscout.indexer.pairing.ScoreConfig;
 
 /**
  * The browser's backends: the library's own services (similarity through the vector index, pairs, chains,
- * walkthroughs, indexing), with the command line's defaults. Until a catalog has a vector index (nothing indexed yet,
- * or a catalog written by other means) the interim implementations serve from the stored vectors instead. The
- * preview stays interim (a cross-dissolve) until a preview service lands.
+ * walkthroughs, preview morphs, indexing), with the command line's defaults. Until a catalog has a vector index
+ * (nothing indexed yet, or a catalog written by other means) the interim implementations serve from the stored
+ * vectors instead.
  */
 public final class LibraryBackends {
   private LibraryBackends() {}
@@ -30,6 +31,6 @@ public final class LibraryBackends {
     PairService pairs = new PairService(context, ScoreConfig.DEFAULTS);
     return new Backends(new ServiceSimilarity(context), new ServicePairs(context, pairs),
         new ServiceChains(context, new ChainService(context, pairs)), new ServiceWalk(context, new WalkService(context)),
-        interim.preview(), indexing, context);
+        new ServicePreview(context, new PreviewService(context)), indexing, context);
   }
 }
