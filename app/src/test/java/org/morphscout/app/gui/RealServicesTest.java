@@ -56,6 +56,15 @@ class RealServicesTest {
       assertThat(vm.library().visible().subList(0, 2)).extracting(ImageRow::path)
           .allMatch(p -> p.contains("round-"));
 
+      // an image outside the catalog is analysed on the fly: a new disc finds the catalog's discs first
+      Path outside = tmp.resolve("outside-disc.png");
+      ImageIO.write(SampleCatalog.draw(new SampleCatalog.Picture("", "x.png", "round", 0.7, new Color(0x8064A2), 0.1,
+          0, false), 320, 240, true), "png", outside.toFile());
+      vm.library().findSimilarToFile(outside, SimilarityMode.SHAPE);
+      assertThat(vm.library().messageProperty().get()).isEmpty();
+      assertThat(vm.library().searchTitleProperty().get()).isEqualTo("Similar in shape to outside-disc.png");
+      assertThat(vm.library().visible().subList(0, 3)).extracting(ImageRow::path).allMatch(p -> p.contains("round-"));
+
       // partners through the real pair scorer: scores on the command line's 0..100 scale, a disc first
       assertThat(vm.session().backends().pairs()).isInstanceOf(ServicePairs.class);
       assertThat(vm.session().backends().walk()).isInstanceOf(ServiceWalk.class);

@@ -146,14 +146,28 @@ public final class LibraryView extends BorderPane {
     summary.textProperty().bind(vm.summaryProperty());
     Region spacer = new Region();
     HBox.setHgrow(spacer, Priority.ALWAYS);
-    HBox top = new HBox(10, root, folder, new Label("Sort by"), sort, spacer, busy, summary);
+    javafx.scene.control.MenuButton byFile = new javafx.scene.control.MenuButton("Similar to a file…");
+    byFile.setId("similar-file");
+    for (SimilarityMode mode : SimilarityMode.values()) {
+      MenuItem item = new MenuItem("… in " + mode.label());
+      item.setOnAction(e -> {
+        javafx.stage.FileChooser fc = new javafx.stage.FileChooser();
+        fc.setTitle("Find catalog images similar in " + mode.label() + " to a file");
+        java.io.File f = fc.showOpenDialog(getScene().getWindow());
+        if (f != null) {
+          vm.findSimilarToFile(f.toPath(), mode);
+        }
+      });
+      byFile.getItems().add(item);
+    }
+    HBox top = new HBox(10, root, folder, new Label("Sort by"), sort, byFile, spacer, busy, summary);
     top.setAlignment(Pos.CENTER_LEFT);
     Label only = new Label("Show only:");
     only.getStyleClass().add("summary");
     flags.getChildren().add(0, only);
     VBox bar = new VBox(8, top, flags);
     bar.getStyleClass().add("toolbar");
-    for (javafx.scene.Node n : List.of(summary, sort, only)) {
+    for (javafx.scene.Node n : List.of(summary, sort, only, byFile)) {
       ((Region) n).setMinWidth(Region.USE_PREF_SIZE);
     }
     return bar;

@@ -139,22 +139,47 @@ public final class LibraryViewModel {
     message.set("");
     searchTitle.set("Searching for images similar in " + mode.label() + " to " + session.name(source.id()) + "…");
     pending = runner.submit("find similar", token -> session.backends().similarity().similar(source.id(), mode,
-        SIMILAR_LIMIT, token), matches -> {
-          searching.set(false);
-          similar = matches;
-          Map<Long, Double> d = new HashMap<>();
-          for (Match m : matches) {
-            d.put(m.id(), m.distance());
-          }
-          distances = d;
-          searchTitle.set("Similar in " + mode.label() + " to " + session.name(source.id()));
-          sort.set(SortKey.SCORE);
-          apply();
-        }, e -> {
+        SIMILAR_LIMIT, token), matches -> showMatches(matches, "Similar in " + mode.label() + " to "
+            + session.name(source.id())), e -> {
           searching.set(false);
           searchTitle.set("");
           message.set(Messages.of(e));
         });
+  }
+
+  /** Shows the catalog images most similar to an image file, which need not be in the catalog. */
+  public void findSimilarToFile(Path file, SimilarityMode mode) {
+    if (session.backends() == null) {
+      message.set("Open a catalog first.");
+      return;
+    }
+    if (pending != null) {
+      pending.cancel();
+    }
+    String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
+    searching.set(true);
+    message.set("");
+    searchTitle.set("Analysing " + name + " and searching…");
+    pending = runner.submit("find similar to a file", token -> session.backends().similarity().similarToFile(file,
+        mode, SIMILAR_LIMIT, token), matches -> showMatches(matches, "Similar in " + mode.label() + " to " + name),
+        e -> {
+          searching.set(false);
+          searchTitle.set("");
+          message.set(Messages.of(e));
+        });
+  }
+
+  private void showMatches(List<Match> matches, String title) {
+    searching.set(false);
+    similar = matches;
+    Map<Long, Double> d = new HashMap<>();
+    for (Match m : matches) {
+      d.put(m.id(), m.distance());
+    }
+    distances = d;
+    searchTitle.set(title);
+    sort.set(SortKey.SCORE);
+    apply();
   }
 
   /** Back to the whole library. */

@@ -21,6 +21,18 @@ public final class ServiceSimilarity implements SimilarityBackend {
   public List<Match> similar(long id, SimilarityMode mode, int limit, CancellationToken token) {
     ImageAnalysis query = context.cache().get(id).orElseThrow(() -> new MorphscoutException(
         "image " + id + " has not been analysed yet, so it has no " + mode.label() + " to compare"));
+    return search(query, mode, limit);
+  }
+
+  @Override
+  public List<Match> similarToFile(java.nio.file.Path file, SimilarityMode mode, int limit, CancellationToken token) {
+    // the stored analysis when the file is a catalog image, else analysed now with the catalog's model
+    ImageAnalysis query = context.resolve(file.toString());
+    token.throwIfCancelled();
+    return search(query, mode, limit);
+  }
+
+  private List<Match> search(ImageAnalysis query, SimilarityMode mode, int limit) {
     SimilarityService.By by = mode == SimilarityMode.SHAPE ? SimilarityService.By.SHAPE
         : SimilarityService.By.APPEARANCE;
     try {
