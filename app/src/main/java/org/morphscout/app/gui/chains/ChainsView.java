@@ -1,15 +1,11 @@
 package org.morphscout.app.gui.chains;
 
-import java.awt.image.BufferedImage;
 import java.io.File;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import javafx.animation.KeyFrame;
-import javafx.animation.Timeline;
 import javafx.beans.property.ObjectProperty;
 import javafx.collections.ListChangeListener;
-import javafx.embed.swing.SwingFXUtils;
 import javafx.geometry.Insets;
 import javafx.geometry.Pos;
 import javafx.scene.control.Button;
@@ -21,8 +17,6 @@ import javafx.scene.control.MenuItem;
 import javafx.scene.control.Slider;
 import javafx.scene.control.Spinner;
 import javafx.scene.control.Tooltip;
-import javafx.scene.image.Image;
-import javafx.scene.image.ImageView;
 import javafx.scene.input.TransferMode;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.FlowPane;
@@ -31,7 +25,6 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.FileChooser;
-import javafx.util.Duration;
 import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.common.ImageDrag;
 import org.morphscout.app.gui.common.MessageLine;
@@ -49,10 +42,6 @@ public final class ChainsView extends BorderPane {
   private final Session session;
   private final ThumbnailCache thumbs;
   private final ListView<ChainCandidate> list = new ListView<>();
-  private final ImageView player = new ImageView();
-  private final Slider scrub = new Slider(0, 1, 0);
-  private final Timeline timeline = new Timeline();
-  private List<Image> frames = List.of();
   // kept as fields: bidirectional bindings to asObject() wrappers are weak
   private final ObjectProperty<Integer> alternatives;
   private final ObjectProperty<Integer> minSteps;
@@ -78,7 +67,6 @@ public final class ChainsView extends BorderPane {
     list.setPlaceholder(new Label("Choose a start and an end, then Find chains (Ctrl+Enter)."));
     setCenter(list);
     setBottom(previewBar());
-    vm.previewProperty().addListener((o, a, f) -> play(f));
   }
 
   private VBox endpoint(String label, boolean start) {
@@ -208,54 +196,12 @@ public final class ChainsView extends BorderPane {
     return l;
   }
 
-  private HBox previewBar() {
-    player.setFitWidth(192);
-    player.setFitHeight(192);
-    player.setPreserveRatio(true);
-    Button playButton = new Button("Play");
-    playButton.setId("play-preview");
-    playButton.setOnAction(e -> {
-      if (timeline.getStatus() == javafx.animation.Animation.Status.RUNNING) {
-        timeline.pause();
-      } else if (!frames.isEmpty()) {
-        timeline.play();
-      }
-    });
-    scrub.setPrefWidth(260);
-    scrub.valueProperty().addListener((o, a, v) -> {
-      if (!frames.isEmpty()) {
-        int i = (int) Math.round(v.doubleValue() * (frames.size() - 1));
-        player.setImage(frames.get(i));
-      }
-    });
-    Label hint = new Label("Preview along the chain (a quick warp and cross-fade, not a final render)");
-    hint.getStyleClass().add("summary");
-    VBox controls = new VBox(8, hint, new HBox(8, playButton, scrub));
-    HBox bar = new HBox(16, player, controls);
-    bar.getStyleClass().add("preview-bar");
-    bar.setPadding(new Insets(8, 12, 8, 12));
+  private PreviewPlayer previewBar() {
+    PreviewPlayer bar = new PreviewPlayer("Preview along the chain (a quick warp and cross-fade, not a final render)");
     bar.visibleProperty().bind(vm.previewProperty().isNotNull());
     bar.managedProperty().bind(bar.visibleProperty());
+    vm.previewProperty().addListener((o, a, f) -> bar.play(f));
     return bar;
-  }
-
-  private void play(List<BufferedImage> raw) {
-    timeline.stop();
-    timeline.getKeyFrames().clear();
-    if (raw == null || raw.isEmpty()) {
-      frames = List.of();
-      player.setImage(null);
-      return;
-    }
-    frames = raw.stream().map(b -> (Image) SwingFXUtils.toFXImage(b, null)).toList();
-    player.setImage(frames.get(0));
-    int n = frames.size();
-    for (int i = 0; i < n; i++) {
-      double t = n == 1 ? 0 : i / (double) (n - 1);
-      timeline.getKeyFrames().add(new KeyFrame(Duration.millis(1000.0 / 24 * i), e -> scrub.setValue(t)));
-    }
-    timeline.setCycleCount(1);
-    timeline.playFromStart();
   }
 
   /** A chain as a filmstrip: tiles with the step's size between them. */
