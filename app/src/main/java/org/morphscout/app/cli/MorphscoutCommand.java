@@ -40,7 +40,7 @@ import picocli.CommandLine.Spec;
       WalkCommand.class,
       PreviewCommand.class,
       ModelsCommand.class,
-      //TODO BrowseCommand.class,
+      BrowseCommand.class,
     })
 public final class MorphscoutCommand implements Callable<Integer> {
 

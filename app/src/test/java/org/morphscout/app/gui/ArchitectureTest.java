@@ -1,0 +1,56 @@
+package org.morphscout.app.gui;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+/** Layering rules: the library knows nothing of the application; view-models know nothing of scene graphs. */
+class ArchitectureTest {
+  private static JavaClasses classes;
+
+  @BeforeAll
+  static void importClasses() {
+    classes = new ClassFileImporter().withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS)
+        .importPackages("org.morphscout");
+  }
+
+  @Test
+  void indexerNeverUsesTheApplicationOrJavaFx() {
+    noClasses().that().resideInAPackage("org.morphscout.indexer..")
+        .should().dependOnClassesThat().resideInAnyPackage("org.morphscout.app..", "javafx..")
+        .check(classes);
+  }
+
+  @Test
+  void onlyTheCommandLineWritesToStandardOutput() {
+    // Main hands System.out to the command line's writers; everything else goes through those writers or SLF4J
+    noClasses().that().resideOutsideOfPackage("org.morphscout.app.cli..")
+        .and().doNotHaveFullyQualifiedName("org.morphscout.app.Main")
+        .should().accessField(System.class, "out")
+        .check(classes);
+  }
+
+  @Test
+  void viewModelsAndServicesDoNotTouchTheSceneGraph() {
+    noClasses().that().haveSimpleNameEndingWith("ViewModel")
+        .or().resideInAnyPackage("org.morphscout.app.gui.service..", "org.morphscout.app.gui.task..")
+        .or().haveSimpleName("Session")
+        .should().dependOnClassesThat().resideInAnyPackage("javafx.scene..", "javafx.stage..")
+        .check(classes);
+  }
+
+  @Test
+  void viewsLeaveTheLibraryToTheirViewModels() {
+    noClasses().that().haveSimpleNameEndingWith("View")
+        .should().dependOnClassesThat().haveFullyQualifiedName("org.morphscout.indexer.library.Library")
+        .orShould().dependOnClassesThat().haveFullyQualifiedName("org.morphscout.indexer.catalog.FeatureStore")
+        .orShould().dependOnClassesThat().haveFullyQualifiedName("org.morphscout.indexer.catalog.DecisionStore")
+        .orShould().dependOnClassesThat().haveFullyQualifiedName("org.morphscout.indexer.catalog.Catalog")
+        .orShould().dependOnClassesThat().haveSimpleNameEndingWith("Backend")
+        .check(classes);
+  }
+}

@@ -1,0 +1,157 @@
+package org.morphscout.app.gui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+import java.util.function.BooleanSupplier;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TabPane;
+import javafx.scene.control.TableView;
+import javafx.scene.input.KeyCode;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.app.gui.common.ThumbnailCache;
+import org.morphscout.app.gui.common.Tile;
+import org.morphscout.app.gui.pairs.PairRow;
+import org.morphscout.app.gui.service.ChainCandidate;
+import org.morphscout.app.gui.task.FxTaskRunner;
+import org.morphscout.indexer.catalog.DecisionStore;
+import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.library.Library;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The main flows driven through real widgets on the headless Monocle platform. */
+@ExtendWith(ApplicationExtension.class)
+class BrowserFxTest {
+  static {
+    HeadlessFx.configure();
+  }
+
+  @TempDir static Path shared;
+  static Path catalog;
+
+  private FxTaskRunner runner;
+  private ThumbnailCache thumbs;
+  private MainViewModel vm;
+  private FakeBackends fakes;
+
+  @BeforeAll
+  static void createCatalog() throws Exception {
+    catalog = SampleCatalog.create(shared, 11L);
+  }
+
+  @Start
+  void start(Stage stage) {
+    runner = new FxTaskRunner(2);
+    fakes = new FakeBackends();
+    vm = new MainViewModel(runner, fakes.factory());
+    thumbs = new ThumbnailCache(id -> vm.session().thumbnail(id), 144, 200);
+    MainView view = new MainView(vm, thumbs);
+    stage.setScene(view.scene(1400, 900));
+    stage.show();
+  }
+
+  @AfterEach
+  void close() {
+    WaitForAsyncUtils.asyncFx(() -> vm.close());
+    WaitForAsyncUtils.waitForFxEvents();
+    runner.close();
+    thumbs.close();
+  }
+
+  static void waitUntil(BooleanSupplier condition) throws Exception {
+    WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition::getAsBoolean).get());
+  }
+
+  private Tile tile(FxRobot robot, String name) {
+    return robot.lookup(".tile").queryAllAs(Tile.class).stream()
+        .filter(t -> t.isVisible() && t.caption().getText().endsWith(name)).findFirst().orElseThrow();
+  }
+
+  private void openCatalog() throws Exception {
+    WaitForAsyncUtils.asyncFx(() -> vm.open(catalog, false));
+    waitUntil(() -> vm.library().visible().size() == 27);
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  @Test
+  void openPickStartAndEndAndFindChains(FxRobot robot) throws Exception {
+    openCatalog();
+    robot.clickOn(tile(robot, "round-01.png"));
+    assertThat(vm.inspector().titleProperty().get()).isEqualTo("round-01.png");
+    robot.type(KeyCode.S);
+    robot.clickOn(tile(robot, "oval-04.png"));
+    robot.type(KeyCode.E);
+    assertThat(vm.session().startProperty().get().path()).endsWith("round-01.png");
+    assertThat(vm.session().endProperty().get().path()).endsWith("oval-04.png");
+    robot.press(KeyCode.CONTROL).press(KeyCode.DIGIT2).release(KeyCode.DIGIT2).release(KeyCode.CONTROL);
+    assertThat(robot.lookup("#panes").queryAs(TabPane.class).getSelectionModel().getSelectedItem().getText())
+        .isEqualTo("Chains");
+    robot.clickOn("#run-chains");
+    waitUntil(() -> !vm.chains().chains().isEmpty());
+    @SuppressWarnings("unchecked")
+    ListView<ChainCandidate> list = robot.lookup("#chain-list").queryAs(ListView.class);
+    assertThat(list.getItems()).hasSize(1);
+    assertThat(list.getItems().get(0).images()).containsExactly(vm.session().startProperty().get().id(),
+        vm.session().endProperty().get().id());
+  }
+
+  @Test
+  void findPartnersAndApproveAPair(FxRobot robot) throws Exception {
+    openCatalog();
+    robot.clickOn(tile(robot, "square-02.png"));
+    robot.type(KeyCode.P);
+    waitUntil(() -> !vm.pairs().rows().isEmpty());
+    assertThat(vm.session().paneProperty().get()).isEqualTo(Pane.PAIRS);
+    @SuppressWarnings("unchecked")
+    TableView<PairRow> table = robot.lookup("#pairs-table").queryAs(TableView.class);
+    robot.clickOn(robot.lookup("#pairs-table .table-row-cell").nth(0).queryAs(javafx.scene.Node.class));
+    PairRow chosen = table.getSelectionModel().getSelectedItem();
+    assertThat(chosen).isNotNull();
+    waitUntil(() -> vm.pairs().overlayProperty().get() != null);
+    robot.type(KeyCode.A);
+    waitUntil(() -> chosen.decisionProperty().get().equals("approved"));
+    try (Library lib = Library.openExisting(catalog)) {
+      DecisionStore.Decision d = lib.decisions().find(chosen.suggestion().a(), chosen.suggestion().b())
+          .orElseThrow();
+      assertThat(d.verdict()).isEqualTo(DecisionStore.Verdict.APPROVED);
+      lib.decisions().forget(d.imageA(), d.imageB());
+    }
+  }
+
+  @Test
+  void orderAWalkthroughFromTheSelection(FxRobot robot) throws Exception {
+    openCatalog();
+    robot.clickOn(tile(robot, "round-01.png"));
+    robot.press(KeyCode.CONTROL);
+    for (String n : new String[] {"star-03.png", "round-03.png", "square-01.png", "round-02.png"}) {
+      robot.clickOn(tile(robot, n));
+    }
+    robot.release(KeyCode.CONTROL);
+    assertThat(vm.session().selection()).hasSize(5);
+    robot.press(KeyCode.CONTROL).press(KeyCode.DIGIT4).release(KeyCode.DIGIT4).release(KeyCode.CONTROL);
+    robot.clickOn("#walk-use-selection");
+    robot.clickOn("#walk-order");
+    waitUntil(() -> vm.walkthrough().steps().size() == 4 && !vm.walkthrough().runningProperty().get());
+    assertThat(vm.walkthrough().strip()).extracting(ImageRow::path).hasSize(5);
+    // the three discs have the same shape, so a smooth order keeps them together
+    int first = -1;
+    int last = -1;
+    for (int i = 0; i < 5; i++) {
+      if (vm.walkthrough().strip().get(i).path().contains("/round-")) {
+        first = first < 0 ? i : first;
+        last = i;
+      }
+    }
+    assertThat(last - first).isEqualTo(2);
+    assertThat(robot.lookup("#walk-summary").queryLabeled().getText()).startsWith("5 images");
+  }
+}

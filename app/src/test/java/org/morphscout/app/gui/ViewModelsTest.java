@@ -1,0 +1,229 @@
+package org.morphscout.app.gui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.app.Main;
+import org.morphscout.app.gui.chains.ChainsViewModel;
+import org.morphscout.app.gui.library.LibraryViewModel;
+import org.morphscout.app.gui.library.SortKey;
+import org.morphscout.app.gui.pairs.PairRow;
+import org.morphscout.app.gui.pairs.PairsViewModel;
+import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.SimilarityMode;
+import org.morphscout.app.gui.task.DirectTaskRunner;
+import org.morphscout.indexer.catalog.DecisionStore;
+import org.morphscout.indexer.catalog.ImageRow;
+
+/** The view-models against a real sample catalog, without the toolkit (synchronous task runner). */
+class ViewModelsTest {
+  @TempDir static Path shared;
+  static Path catalog;
+
+  @TempDir Path tmp;
+  private FakeBackends fakes;
+  private MainViewModel main;
+
+  @BeforeAll
+  static void createCatalog() throws Exception {
+    catalog = SampleCatalog.create(shared, 7L);
+  }
+
+  @BeforeEach
+  void open() {
+    fakes = new FakeBackends();
+    main = new MainViewModel(new DirectTaskRunner(), fakes.factory());
+    main.open(catalog, false);
+    assertThat(main.messageProperty().get()).isEmpty();
+  }
+
+  private ImageRow row(String name) {
+    return main.library().visible().stream().filter(r -> r.path().endsWith("/" + name)).findFirst().orElseThrow();
+  }
+
+  @Test
+  void openingLoadsEveryImageAndCountsThem() {
+    LibraryViewModel lib = main.library();
+    assertThat(lib.visible()).hasSize(27);
+    assertThat(lib.summaryProperty().get()).isEqualTo("27 of 27 images");
+    assertThat(lib.roots()).hasSize(1);
+  }
+
+  @Test
+  void missingCatalogIsExplainedNotThrown() {
+    main.open(tmp.resolve("nothing-here"), false);
+    assertThat(main.messageProperty().get()).startsWith("No catalog in").contains("New catalog");
+    assertThat(main.library().visible()).hasSize(27); // the open catalog stays
+  }
+
+  @Test
+  void flagAndFolderFiltersNarrowTheGrid() {
+    LibraryViewModel lib = main.library();
+    lib.flagProperty(ImageFlag.FAILED).set(true);
+    assertThat(lib.visible()).extracting(ImageRow::path).singleElement().asString().endsWith("broken.jpg");
+    lib.flagProperty(ImageFlag.FAILED).set(false);
+    lib.flagProperty(ImageFlag.CUT_OFF).set(true);
+    assertThat(lib.visible()).extracting(ImageRow::path).anyMatch(p -> p.endsWith("round-cut.png"))
+        .noneMatch(p -> p.endsWith("round-01.png"));
+    lib.flagProperty(ImageFlag.CUT_OFF).set(false);
+    lib.flagProperty(ImageFlag.SEVERAL_OBJECTS).set(true);
+    assertThat(lib.visible()).extracting(ImageRow::path).singleElement().asString().endsWith("pair-of-tiles.png");
+    lib.flagProperty(ImageFlag.SEVERAL_OBJECTS).set(false);
+    lib.folderProperty().set("GARDEN");
+    assertThat(lib.visible()).isNotEmpty().allMatch(r -> r.path().contains("/garden/"));
+  }
+
+  @Test
+  void sortBySizePutsTheLargestFileFirst() {
+    LibraryViewModel lib = main.library();
+    lib.sortProperty().set(SortKey.SIZE);
+    List<ImageRow> v = lib.visible();
+    for (int i = 0; i + 1 < v.size(); i++) {
+      assertThat(v.get(i).size()).isGreaterThanOrEqualTo(v.get(i + 1).size());
+    }
+    lib.sortProperty().set(SortKey.NAME);
+    assertThat(v.get(0).path()).endsWith("broken.jpg");
+  }
+
+  @Test
+  void similarByShapeFindsTheSameShapeFirst() {
+    LibraryViewModel lib = main.library();
+    ImageRow round = row("round-01.png");
+    main.session().selectedProperty().set(round);
+    main.inspector().findSimilar(SimilarityMode.SHAPE);
+    assertThat(main.session().paneProperty().get()).isEqualTo(Pane.LIBRARY);
+    assertThat(lib.searchTitleProperty().get()).isEqualTo("Similar in shape to round-01.png");
+    // the other discs differ only in size and place, which the shape vector normalises away
+    assertThat(lib.visible().subList(0, 3)).extracting(ImageRow::path)
+        .allMatch(p -> p.contains("/round-"), "a round picture");
+    assertThat(lib.distance(lib.visible().get(0).id())).isLessThan(lib.distance(row("star-01.png").id()));
+    lib.clearSimilar();
+    assertThat(lib.visible()).hasSize(27);
+  }
+
+  @Test
+  void inspectorShowsFactsFlagsAndSwatches() {
+    main.session().selectedProperty().set(row("pair-of-tiles.png"));
+    assertThat(main.inspector().facts()).extracting(f -> f.label() + ": " + f.value())
+        .contains("Size: 320 × 240 px", "Flags: several objects");
+    assertThat(main.inspector().maskProperty().get()).isNotNull();
+    assertThat(main.inspector().swatches()).hasSize(2).allMatch(s -> s.matches("#[0-9a-f]{6}"));
+    main.session().selectedProperty().set(row("broken.jpg"));
+    assertThat(main.inspector().facts()).extracting(f -> f.label() + ": " + f.value())
+        .contains("Failed: not a readable JPEG: the file ends after 5 bytes");
+  }
+
+  @Test
+  void startEndAndAvoidReachTheChainSearch() {
+    ChainsViewModel chains = main.chains();
+    chains.run();
+    assertThat(chains.messageProperty().get()).contains("Choose a start and an end");
+    main.session().selectedProperty().set(row("round-01.png"));
+    main.inspector().useAsStart();
+    main.session().selectedProperty().set(row("oval-04.png"));
+    main.inspector().useAsEnd();
+    chains.minStepsProperty().set(5);
+    chains.maxStepsProperty().set(3);
+    chains.run();
+    assertThat(chains.messageProperty().get()).isEqualTo("The fewest steps (5) cannot be more than the most steps (3).");
+    chains.minStepsProperty().set(1);
+    chains.run();
+    assertThat(chains.chains()).hasSize(1);
+    ImageRow star = row("star-02.png");
+    chains.avoid(star);
+    assertThat(fakes.chainRequests).hasSize(2);
+    assertThat(fakes.chainRequests.get(1).avoid()).containsExactly(star.id());
+    chains.require(star);
+    assertThat(fakes.chainRequests.get(2).avoid()).isEmpty();
+    assertThat(fakes.chainRequests.get(2).require()).containsExactly(star.id());
+    chains.preview(chains.chains().get(0));
+    assertThat(chains.previewProperty().get()).hasSize(12);
+  }
+
+  @Test
+  void approvedPairIsStoredWhereTheCommandLineReadsIt() throws Exception {
+    PairsViewModel pairs = main.pairs();
+    main.session().selectedProperty().set(row("square-02.png"));
+    main.inspector().findPartners();
+    assertThat(main.session().paneProperty().get()).isEqualTo(Pane.PAIRS);
+    assertThat(pairs.scopeProperty().get()).isEqualTo("Partners of square-02.png");
+    assertThat(pairs.rows()).isNotEmpty();
+    List<Double> scores = pairs.rows().stream().map(r -> r.suggestion().score()).toList();
+    assertThat(scores).isSortedAccordingTo((a, b) -> Double.compare(b, a));
+    PairRow first = pairs.rows().get(0);
+    pairs.selectedProperty().set(first);
+    assertThat(pairs.overlayProperty().get()).isNotNull();
+    pairs.approve(first);
+    pairs.note(first, "lovely match");
+    assertThat(first.decisionProperty().get()).isEqualTo("approved");
+    PairRow second = pairs.rows().get(1);
+    pairs.reject(second);
+
+    StringWriter out = new StringWriter();
+    int code = Main.execute(new String[] {"--catalog", catalog.toString(), "decisions", "--only", "approved"},
+        new PrintWriter(out), new PrintWriter(new StringWriter()));
+    assertThat(code).isZero();
+    assertThat(out.toString()).contains("approved").contains(Path.of(main.session().row(first.suggestion().a())
+        .orElseThrow().path()).getFileName().toString());
+
+    Path csv = tmp.resolve("out/approved.csv");
+    pairs.exportApproved(csv);
+    List<CSVRecord> records = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+        .parse(Files.newBufferedReader(csv)).getRecords();
+    assertThat(records).hasSize(1);
+    assertThat(records.get(0).get("note")).isEqualTo("lovely match");
+    assertThat(Long.parseLong(records.get(0).get("a_id"))).isEqualTo(first.suggestion().a());
+    Path json = tmp.resolve("approved.json");
+    pairs.exportApproved(json);
+    var tree = new com.fasterxml.jackson.databind.ObjectMapper().readTree(json.toFile());
+    assertThat(tree.size()).isEqualTo(1);
+    assertThat(tree.get(0).get("b_id").asLong()).isEqualTo(first.suggestion().b());
+    // leave the shared catalog as found
+    try (var lib = org.morphscout.indexer.library.Library.openExisting(catalog)) {
+      for (DecisionStore.Decision d : lib.decisions().all()) {
+        lib.decisions().forget(d.imageA(), d.imageB());
+      }
+    }
+  }
+
+  @Test
+  void walkthroughOrdersAndFollowsMoves() {
+    var walk = main.walkthrough();
+    main.session().selection().setAll(main.library().visible().subList(1, 7));
+    walk.useSelection();
+    assertThat(walk.strip()).hasSize(6);
+    assertThat(walk.steps()).hasSize(5);
+    walk.order();
+    assertThat(walk.strip()).containsExactlyInAnyOrderElementsOf(main.library().visible().subList(1, 7));
+    double before = walk.steps().stream().mapToDouble(Double::doubleValue).sum();
+    ImageRow first = walk.strip().get(0);
+    walk.move(0, 5);
+    assertThat(walk.strip().get(5)).isEqualTo(first);
+    assertThat(walk.steps()).hasSize(5);
+    assertThat(walk.steps().stream().mapToDouble(Double::doubleValue).sum()).isGreaterThanOrEqualTo(before - 1e-9);
+  }
+
+  @Test
+  void indexingShowsProgressAndFailures() throws Exception {
+    var idx = main.indexing();
+    assertThat(idx.failures()).extracting(f -> f.reason()).containsExactly(
+        "not a readable JPEG: the file ends after 5 bytes");
+    Path folder = Files.createDirectories(tmp.resolve("more"));
+    idx.add(folder);
+    assertThat(fakes.indexed).containsExactly(folder.toString());
+    assertThat(idx.summaryProperty().get()).isEqualTo("4 found, 3 ready, 1 failed");
+    assertThat(idx.progressProperty().get()).isEqualTo(1.0);
+    idx.add(tmp.resolve("not-there"));
+    assertThat(idx.messageProperty().get()).endsWith("is not a folder.");
+  }
+}

@@ -1,0 +1,96 @@
+package org.morphscout.app.gui.library;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import javafx.scene.Scene;
+import javafx.scene.control.ListView;
+import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.morphscout.app.gui.HeadlessFx;
+import org.morphscout.app.gui.Session;
+import org.morphscout.app.gui.common.ThumbnailCache;
+import org.morphscout.app.gui.common.Tile;
+import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.task.DirectTaskRunner;
+import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.catalog.ImageStore;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** The grid with 100,000 images: only the rows on screen become nodes, and filtering and scrolling stay quick. */
+@ExtendWith(ApplicationExtension.class)
+class LibraryGridFxTest {
+  static {
+    HeadlessFx.configure();
+  }
+
+  static final int N = 100_000;
+  private LibraryViewModel vm;
+  private ThumbnailCache thumbs;
+  private LibraryView view;
+
+  @Start
+  void start(Stage stage) {
+    vm = new LibraryViewModel(new Session(), new DirectTaskRunner());
+    thumbs = new ThumbnailCache(id -> Optional.<Path>empty(), 144, 100);
+    view = new LibraryView(vm, thumbs);
+    stage.setScene(new Scene(view, 1100, 800));
+    stage.show();
+  }
+
+  @AfterEach
+  void close() {
+    thumbs.close();
+  }
+
+  @Test
+  void hundredThousandImagesMakeOnlyAScreenfulOfTiles(FxRobot robot) throws Exception {
+    List<ImageRow> rows = new ArrayList<>(N);
+    Map<Long, Set<ImageFlag>> flags = new HashMap<>();
+    for (int i = 0; i < N; i++) {
+      String folder = "/photos/set-" + (i % 50);
+      rows.add(new ImageRow(i, 1, folder + "/img-" + i + ".jpg", 1000 + i, 0, "h" + i, 640, 480, 1, "jpeg",
+          ImageStatus.READY));
+      if (i % 97 == 0) {
+        flags.put((long) i, EnumSet.of(ImageFlag.CUT_OFF));
+      }
+    }
+    long t0 = System.nanoTime();
+    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), flags)).get();
+    WaitForAsyncUtils.waitForFxEvents();
+    long loadMs = (System.nanoTime() - t0) / 1_000_000;
+    assertThat(vm.visible()).hasSize(N);
+    // a virtualised list creates cells for the visible rows only: a screenful of tiles, not 100,000
+    int tiles = robot.lookup(".tile").queryAll().size();
+    assertThat(tiles).isBetween(1, 400);
+
+    @SuppressWarnings("unchecked")
+    ListView<List<ImageRow>> grid = robot.lookup("#library-grid").queryAs(ListView.class);
+    WaitForAsyncUtils.asyncFx(() -> grid.scrollTo(grid.getItems().size() - 1)).get();
+    WaitForAsyncUtils.waitForFxEvents();
+    assertThat(robot.lookup(".tile").queryAllAs(Tile.class)).anyMatch(t -> t.shownId() == N - 1);
+    assertThat(robot.lookup(".tile").queryAll().size()).isLessThanOrEqualTo(tiles + 40);
+
+    long t1 = System.nanoTime();
+    WaitForAsyncUtils.asyncFx(() -> vm.flagProperty(ImageFlag.CUT_OFF).set(true)).get();
+    WaitForAsyncUtils.waitForFxEvents();
+    long filterMs = (System.nanoTime() - t1) / 1_000_000;
+    assertThat(vm.visible()).hasSize((N + 96) / 97);
+    // generous bounds (shared CI machines): the point is "well under a second", not a benchmark
+    assertThat(loadMs).as("showing 100,000 rows took %d ms", loadMs).isLessThan(5_000);
+    assertThat(filterMs).as("filtering 100,000 rows took %d ms", filterMs).isLessThan(5_000);
+  }
+}
