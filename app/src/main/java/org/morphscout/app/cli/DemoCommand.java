@@ -85,7 +85,7 @@ final class DemoCommand implements Callable<Integer> {
       out.printf("%nIndexing into the catalog %s ...%n", catalogDir);
       out.flush();
       IndexReport report = IndexCommand.run(library, AnalysisSetup.defaults(), IndexOptions.defaults(),
-          List.of(libraryDir), TerminalProgress.forTerminal(false));
+          List.of(libraryDir), TerminalProgress.forTerminal(false), spec.commandLine().getErr());
       out.printf("  %d analysed, %d unchanged, %d failed (%.1f s)%n", report.indexed(), report.unchanged(),
           report.failed(), report.elapsed().toMillis() / 1000.0);
       for (IndexReport.FileFailure f : report.failures()) {

@@ -8,8 +8,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import java.util.concurrent.CountDownLatch;
-import java.util.concurrent.TimeUnit;
 import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.IndexReport;
 import org.morphscout.indexer.library.Library;
@@ -86,7 +84,8 @@ final class IndexCommand implements Callable<Integer> {
           return ExitCodes.USAGE;
         }
       }
-      IndexReport report = run(library, analysis.setup(), options, roots, TerminalProgress.forTerminal(json));
+      IndexReport report = run(library, analysis.setup(), options, roots, TerminalProgress.forTerminal(json),
+          spec.commandLine().getErr());
       print(out, report);
       if (report.cancelled()) {
         return ExitCodes.CANCELLED;
@@ -97,27 +96,10 @@ final class IndexCommand implements Callable<Integer> {
 
   /** Runs the indexer, turning Ctrl-C into a clean cancellation that keeps finished work. */
   static IndexReport run(Library library, org.morphscout.indexer.library.AnalysisSetup setup, IndexOptions options,
-      List<Path> roots, ProgressListener progress) throws java.io.IOException {
+      List<Path> roots, ProgressListener progress, PrintWriter err) throws java.io.IOException {
     CancellationToken cancel = new CancellationToken();
-    CountDownLatch stopped = new CountDownLatch(1);
-    Thread hook = new Thread(() -> {
-      cancel.cancel();
-      try {
-        stopped.await(60, TimeUnit.SECONDS);
-      } catch (InterruptedException e) {
-        Thread.currentThread().interrupt();
-      }
-    }, "morphscout-ctrl-c");
-    Runtime.getRuntime().addShutdownHook(hook);
-    try {
+    try (Interrupts ctrlC = Interrupts.cancelOnCtrlC(cancel, err)) {
       return new LibraryIndexer(library, setup, options).index(roots, progress, cancel);
-    } finally {
-      try {
-        Runtime.getRuntime().removeShutdownHook(hook);
-      } catch (IllegalStateException shuttingDown) {
-        // Ctrl-C: the hook is running and waits for us.
-      }
-      stopped.countDown();
     }
   }
 
