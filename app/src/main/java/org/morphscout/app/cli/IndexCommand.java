@@ -12,6 +12,7 @@ import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.IndexReport;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.LibraryIndexer;
+import org.morphscout.indexer.library.LibrarySettings;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import picocli.CommandLine.Command;
@@ -55,6 +56,11 @@ final class IndexCommand implements Callable<Integer> {
   @Option(names = "--rebuild-vectors", description = "Rebuild the vector index from the vectors in the catalog.")
   boolean rebuildVectors;
 
+  @Option(names = "--int8", negatable = true,
+      description = "Keep the vector index int8-quantised (about 4x less vector memory, for large libraries; results "
+          + "are re-scored exactly). Changing it rebuilds the vector index. Default: off.")
+  Boolean int8;
+
   @Option(names = "--time-limit", paramLabel = "<seconds>", defaultValue = "60",
       description = "A file taking longer than this to read and analyse fails (default: ${DEFAULT-VALUE}).")
   int timeLimit;
@@ -75,6 +81,9 @@ final class IndexCommand implements Callable<Integer> {
       options = options.withThreads(threads);
     }
     try (Library library = Library.open(root.catalogDir())) {
+      // Without --int8/--no-int8 the catalog keeps the quantisation it has.
+      boolean keep = library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE").equals("INT8");
+      options = options.withInt8(int8 != null ? int8 : keep);
       List<Path> roots = new ArrayList<>(folders);
       if (roots.isEmpty()) {
         library.images().roots().forEach(r -> roots.add(Path.of(r.path())));

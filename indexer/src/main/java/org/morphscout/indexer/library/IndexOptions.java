@@ -16,6 +16,9 @@ import java.time.Duration;
  * @param neighbours neighbours kept per image in the neighbour graph (default 24)
  * @param commitEvery images between durable commits of the vector index (default 256); a crash loses at most this much
  *     vector-index work, which the next run restores from the catalog
+ * @param int8 store the vectors in the HNSW index as int8 scalar-quantised values (default false): about a quarter of
+ *     the index's vector memory, with a small loss of recall; results are re-scored exactly either way. Changing it
+ *     rebuilds the vector index from the catalog.
  */
 public record IndexOptions(
     int threads,
@@ -24,7 +27,8 @@ public record IndexOptions(
     boolean followLinks,
     boolean rebuildVectors,
     int neighbours,
-    int commitEvery) {
+    int commitEvery,
+    boolean int8) {
 
   public IndexOptions {
     if (threads < 1 || threads > 256) {
@@ -46,30 +50,35 @@ public record IndexOptions(
 
   public static IndexOptions defaults() {
     return new IndexOptions(Runtime.getRuntime().availableProcessors(), 16, Duration.ofSeconds(60), false, false, 24,
-        256);
+        256, false);
   }
 
   public IndexOptions withThreads(int n) {
-    return new IndexOptions(n, batchSize, perFileTimeLimit, followLinks, rebuildVectors, neighbours, commitEvery);
+    return new IndexOptions(n, batchSize, perFileTimeLimit, followLinks, rebuildVectors, neighbours, commitEvery, int8);
   }
 
   public IndexOptions withFollowLinks(boolean follow) {
-    return new IndexOptions(threads, batchSize, perFileTimeLimit, follow, rebuildVectors, neighbours, commitEvery);
+    return new IndexOptions(threads, batchSize, perFileTimeLimit, follow, rebuildVectors, neighbours, commitEvery, int8);
   }
 
   public IndexOptions withRebuildVectors(boolean rebuild) {
-    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuild, neighbours, commitEvery);
+    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuild, neighbours, commitEvery, int8);
   }
 
   public IndexOptions withPerFileTimeLimit(Duration limit) {
-    return new IndexOptions(threads, batchSize, limit, followLinks, rebuildVectors, neighbours, commitEvery);
+    return new IndexOptions(threads, batchSize, limit, followLinks, rebuildVectors, neighbours, commitEvery, int8);
   }
 
   public IndexOptions withNeighbours(int k) {
-    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuildVectors, k, commitEvery);
+    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuildVectors, k, commitEvery, int8);
   }
 
   public IndexOptions withCommitEvery(int n) {
-    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuildVectors, neighbours, n);
+    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuildVectors, neighbours, n, int8);
+  }
+
+  public IndexOptions withInt8(boolean quantize) {
+    return new IndexOptions(threads, batchSize, perFileTimeLimit, followLinks, rebuildVectors, neighbours, commitEvery,
+        quantize);
   }
 }

@@ -33,6 +33,7 @@ import org.morphscout.indexer.ingest.ScanResult;
 import org.morphscout.indexer.ingest.Thumbnails;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.slf4j.Logger;
@@ -65,9 +66,15 @@ public final class LibraryIndexer {
     List<IndexReport.FileFailure> failures = new ArrayList<>();
     try (WriterLock lock = WriterLock.acquire(library.catalog().dir())) {
       ImageAnalyzer analyzer = AnalyzerFactory.create(library, setup);
+      LuceneIndexOptions.Quantization quantization = options.int8() ? LuceneIndexOptions.Quantization.INT8
+          : LuceneIndexOptions.Quantization.NONE;
       try (VectorIndex index = LuceneVectorIndex.open(library.catalog().vectorDir(),
-              org.morphscout.indexer.vector.LuceneIndexOptions.defaults())) {
+              LuceneIndexOptions.defaults().withQuantization(quantization))) {
         String modelId = analyzer.embedder().modelId();
+        // The vector format is fixed per segment: a change of quantisation rebuilds the index from the catalog.
+        String stored = library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE");
+        boolean rebuild = options.rebuildVectors() || !stored.equals(quantization.name());
+        library.features().putSetting(LibrarySettings.VECTOR_QUANTIZATION, quantization.name());
         List<Long> reembed = switchModelIfNeeded(modelId, analyzer.embedder().dimension(), index);
 
         Map<Long, List<FoundFile>> found = scan(roots, failures, progress, cancel);
@@ -83,7 +90,7 @@ public final class LibraryIndexer {
         }
         // The catalog is the source of truth: restore what a crash lost, drop what went missing or changed.
         List<Long> invalid = new ArrayList<>();
-        int restored = VectorSync.sync(library.features(), index, modelId, options.rebuildVectors(), invalid);
+        int restored = VectorSync.sync(library.features(), index, modelId, rebuild, invalid);
         for (long id : invalid) {
           library.images().setStatus(id, ImageStatus.PENDING);
           if (queued.add(id)) {

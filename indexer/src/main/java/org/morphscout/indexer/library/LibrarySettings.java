@@ -9,6 +9,8 @@ public final class LibrarySettings {
   public static final String ACTIVE_MODEL = "active_model";
   /** The silhouette extractor whose masks the catalog holds ("default" or "learned"). */
   public static final String ACTIVE_SILHOUETTES = "active_silhouettes";
+  /** How the vector index stores vectors ("NONE" for float32, "INT8"). */
+  public static final String VECTOR_QUANTIZATION = "vector_quantization";
 
   private LibrarySettings() {}
 
