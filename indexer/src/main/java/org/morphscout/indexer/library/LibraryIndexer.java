@@ -4,33 +4,21 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
-import java.util.ArrayDeque;
 import java.util.ArrayList;
-import java.util.Deque;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
 import org.morphscout.indexer.MorphscoutException;
-import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.analysis.ImageAnalyzer;
-import org.morphscout.indexer.analysis.PreparedImage;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.ingest.FoundFile;
-import org.morphscout.indexer.ingest.ImageReadException;
 import org.morphscout.indexer.ingest.LibraryScanner;
 import org.morphscout.indexer.ingest.ScanOptions;
 import org.morphscout.indexer.ingest.ScanProblem;
 import org.morphscout.indexer.ingest.ScanResult;
-import org.morphscout.indexer.ingest.Thumbnails;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
@@ -101,7 +89,7 @@ public final class LibraryIndexer {
         List<Long> analysed = new ArrayList<>();
         boolean cancelled = false;
         try {
-          analyse(todo, analyzer, index, analysed, failures, progress, cancel);
+          new AnalysisPipeline(library, setup, options).run(todo, analyzer, index, analysed, failures, progress, cancel);
         } catch (CancellationToken.CancelledException e) {
           cancelled = true;
         }
@@ -187,143 +175,5 @@ public final class LibraryIndexer {
       }
     }
     return found;
-  }
-
-  private void analyse(List<ImageRow> todo, ImageAnalyzer analyzer, VectorIndex index, List<Long> analysed,
-      List<IndexReport.FileFailure> failures, ProgressListener progress, CancellationToken cancel) throws IOException {
-    progress.phase("analysing", todo.size());
-    if (todo.isEmpty()) {
-      return;
-    }
-    Thumbnails thumbnails = new Thumbnails(setup.decode());
-    ExecutorService pool = Executors.newFixedThreadPool(options.threads(),
-        Thread.ofPlatform().name("morphscout-analyse-", 1).daemon(true).factory());
-    int window = options.threads() * 2 + options.batchSize();
-    Deque<Submitted> inFlight = new ArrayDeque<>();
-    List<PreparedImage> batch = new ArrayList<>();
-    List<ImageRow> batchRows = new ArrayList<>();
-    int next = 0;
-    long done = 0;
-    int sinceCommit = 0;
-    try {
-      while (next < todo.size() || !inFlight.isEmpty()) {
-        while (next < todo.size() && inFlight.size() < window && !cancel.isCancelled()) {
-          ImageRow row = todo.get(next++);
-          inFlight.add(new Submitted(row, pool.submit(() -> prepare(analyzer, thumbnails, row))));
-        }
-        if (inFlight.isEmpty()) {
-          break;
-        }
-        Submitted s = inFlight.poll();
-        try {
-          batch.add(s.future.get(options.perFileTimeLimit().toMillis(), TimeUnit.MILLISECONDS));
-          batchRows.add(s.row);
-        } catch (TimeoutException e) {
-          s.future.cancel(true);
-          fail(s.row, "timed out: reading and analysing took more than " + options.perFileTimeLimit().toSeconds()
-              + " s", failures);
-        } catch (ExecutionException e) {
-          fail(s.row, reason(e.getCause()), failures);
-        } catch (InterruptedException e) {
-          Thread.currentThread().interrupt();
-          throw new CancellationToken.CancelledException();
-        }
-        progress.progressed(++done, s.row.path());
-        if (batch.size() >= options.batchSize() || (inFlight.isEmpty() && !batch.isEmpty())) {
-          sinceCommit += store(analyzer, batch, batchRows, index, analysed, failures);
-          batch.clear();
-          batchRows.clear();
-          if (sinceCommit >= options.commitEvery()) {
-            index.commit();
-            sinceCommit = 0;
-          }
-        }
-        if (cancel.isCancelled() && next < todo.size()) {
-          // Finish what is in flight, keep it, then stop.
-          next = todo.size();
-        }
-      }
-      cancel.throwIfCancelled();
-    } finally {
-      pool.shutdownNow();
-    }
-  }
-
-  private record Submitted(ImageRow row, Future<PreparedImage> future) {}
-
-  private PreparedImage prepare(ImageAnalyzer analyzer, Thumbnails thumbnails, ImageRow row) throws IOException {
-    Path file = Path.of(row.path());
-    PreparedImage p = analyzer.prepare(file, row.contentHash());
-    Path base = library.catalog().thumbnailBase(row.id());
-    Files.createDirectories(base.getParent());
-    try {
-      thumbnails.write(p.decoded().analysis(), base.getParent(), base.getFileName().toString());
-    } catch (IOException e) {
-      LOG.warn("no thumbnail for {}: {}", file, e.getMessage());
-    }
-    return p;
-  }
-
-  /** Embeds a batch and stores it in one transaction; returns how many were stored. */
-  private int store(ImageAnalyzer analyzer, List<PreparedImage> batch, List<ImageRow> rows, VectorIndex index,
-      List<Long> analysed, List<IndexReport.FileFailure> failures) throws IOException {
-    List<ImageAnalysis> results;
-    try {
-      results = analyzer.finish(batch, rows.stream().map(ImageRow::id).toList());
-    } catch (RuntimeException e) {
-      for (ImageRow r : rows) {
-        fail(r, "appearance model failed: " + e.getMessage(), failures);
-      }
-      return 0;
-    }
-    List<ImageAnalysis> good = new ArrayList<>();
-    List<PreparedImage> goodPrepared = new ArrayList<>();
-    for (int i = 0; i < results.size(); i++) {
-      if (VectorSync.finite(results.get(i).appearance()) && VectorSync.finite(results.get(i).shape().shapeVector())) {
-        good.add(results.get(i));
-        goodPrepared.add(batch.get(i));
-      } else {
-        fail(rows.get(i), "analysis produced an invalid vector (NaN); please report this file", failures);
-      }
-    }
-    library.catalog().inTransaction(c -> {
-      for (int i = 0; i < good.size(); i++) {
-        ImageAnalysis a = good.get(i);
-        PreparedImage p = goodPrepared.get(i);
-        library.features().put(a.id(), a);
-        library.images().markReady(a.id(), p.decoded().width(), p.decoded().height(), p.decoded().orientation(),
-            p.decoded().format());
-      }
-      return null;
-    });
-    for (ImageAnalysis a : good) {
-      index.upsert(a.id(), a.appearance(), VectorSync.nonZeroOrNull(a.shape().shapeVector()));
-      analysed.add(a.id());
-    }
-    return good.size();
-  }
-
-
-  private void fail(ImageRow row, String reason, List<IndexReport.FileFailure> failures) {
-    library.catalog().inTransaction(c -> {
-      library.images().markFailed(row.id(), reason);
-      return null;
-    });
-    failures.add(new IndexReport.FileFailure(row.path(), reason));
-    LOG.info("{}: {}", row.path(), reason);
-  }
-
-  static String reason(Throwable t) {
-    if (t instanceof ImageReadException r) {
-      return r.reason();
-    }
-    if (t instanceof java.nio.file.NoSuchFileException) {
-      return "file disappeared before it could be read";
-    }
-    if (t instanceof OutOfMemoryError) {
-      return "not enough memory to analyse this image";
-    }
-    String m = t.getMessage();
-    return "analysis failed: " + (m == null ? t.getClass().getSimpleName() : m);
   }
 }

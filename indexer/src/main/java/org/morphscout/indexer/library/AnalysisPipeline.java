@@ -1,0 +1,189 @@
+package org.morphscout.indexer.library;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
+import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.analysis.ImageAnalyzer;
+import org.morphscout.indexer.analysis.PreparedImage;
+import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.ingest.ImageReadException;
+import org.morphscout.indexer.ingest.Thumbnails;
+import org.morphscout.indexer.progress.CancellationToken;
+import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.vector.VectorIndex;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * The analysing part of an indexing run: decodes and analyses files on a pool of named worker threads, keeps a bounded
+ * window of images in flight (memory stays bounded), runs the appearance model in batches on the calling thread, and
+ * stores each batch (features, status, vectors) in one catalog transaction. A file that fails or takes longer than the
+ * per-file time limit is recorded with its reason and the run goes on.
+ */
+final class AnalysisPipeline {
+  private static final Logger LOG = LoggerFactory.getLogger(AnalysisPipeline.class);
+
+  private final Library library;
+  private final AnalysisSetup setup;
+  private final IndexOptions options;
+
+  AnalysisPipeline(Library library, AnalysisSetup setup, IndexOptions options) {
+    this.library = library;
+    this.setup = setup;
+    this.options = options;
+  }
+
+  /**
+   * Analyses {@code todo}, storing each batch; ids stored go to {@code analysed}, failures to {@code failures}.
+   *
+   * @throws CancellationToken.CancelledException when cancelled (after storing what was in flight)
+   */
+  void run(List<ImageRow> todo, ImageAnalyzer analyzer, VectorIndex index, List<Long> analysed,
+      List<IndexReport.FileFailure> failures, ProgressListener progress, CancellationToken cancel) throws IOException {
+    progress.phase("analysing", todo.size());
+    if (todo.isEmpty()) {
+      return;
+    }
+    Thumbnails thumbnails = new Thumbnails(setup.decode());
+    ExecutorService pool = Executors.newFixedThreadPool(options.threads(),
+        Thread.ofPlatform().name("morphscout-analyse-", 1).daemon(true).factory());
+    int window = options.threads() * 2 + options.batchSize();
+    Deque<Submitted> inFlight = new ArrayDeque<>();
+    List<PreparedImage> batch = new ArrayList<>();
+    List<ImageRow> batchRows = new ArrayList<>();
+    int next = 0;
+    long done = 0;
+    int sinceCommit = 0;
+    try {
+      while (next < todo.size() || !inFlight.isEmpty()) {
+        while (next < todo.size() && inFlight.size() < window && !cancel.isCancelled()) {
+          ImageRow row = todo.get(next++);
+          inFlight.add(new Submitted(row, pool.submit(() -> prepare(analyzer, thumbnails, row))));
+        }
+        if (inFlight.isEmpty()) {
+          break;
+        }
+        Submitted s = inFlight.poll();
+        try {
+          batch.add(s.future.get(options.perFileTimeLimit().toMillis(), TimeUnit.MILLISECONDS));
+          batchRows.add(s.row);
+        } catch (TimeoutException e) {
+          s.future.cancel(true);
+          fail(s.row, "timed out: reading and analysing took more than " + options.perFileTimeLimit().toSeconds()
+              + " s", failures);
+        } catch (ExecutionException e) {
+          fail(s.row, reason(e.getCause()), failures);
+        } catch (InterruptedException e) {
+          Thread.currentThread().interrupt();
+          throw new CancellationToken.CancelledException();
+        }
+        progress.progressed(++done, s.row.path());
+        if (batch.size() >= options.batchSize() || (inFlight.isEmpty() && !batch.isEmpty())) {
+          sinceCommit += store(analyzer, batch, batchRows, index, analysed, failures);
+          batch.clear();
+          batchRows.clear();
+          if (sinceCommit >= options.commitEvery()) {
+            index.commit();
+            sinceCommit = 0;
+          }
+        }
+        if (cancel.isCancelled() && next < todo.size()) {
+          // Finish what is in flight, keep it, then stop.
+          next = todo.size();
+        }
+      }
+      cancel.throwIfCancelled();
+    } finally {
+      pool.shutdownNow();
+    }
+  }
+
+  private record Submitted(ImageRow row, Future<PreparedImage> future) {}
+
+  private PreparedImage prepare(ImageAnalyzer analyzer, Thumbnails thumbnails, ImageRow row) throws IOException {
+    Path file = Path.of(row.path());
+    PreparedImage p = analyzer.prepare(file, row.contentHash());
+    Path base = library.catalog().thumbnailBase(row.id());
+    Files.createDirectories(base.getParent());
+    try {
+      thumbnails.write(p.decoded().analysis(), base.getParent(), base.getFileName().toString());
+    } catch (IOException e) {
+      LOG.warn("no thumbnail for {}: {}", file, e.getMessage());
+    }
+    return p;
+  }
+
+  /** Embeds a batch and stores it in one transaction; returns how many were stored. */
+  private int store(ImageAnalyzer analyzer, List<PreparedImage> batch, List<ImageRow> rows, VectorIndex index,
+      List<Long> analysed, List<IndexReport.FileFailure> failures) throws IOException {
+    List<ImageAnalysis> results;
+    try {
+      results = analyzer.finish(batch, rows.stream().map(ImageRow::id).toList());
+    } catch (RuntimeException e) {
+      for (ImageRow r : rows) {
+        fail(r, "appearance model failed: " + e.getMessage(), failures);
+      }
+      return 0;
+    }
+    List<ImageAnalysis> good = new ArrayList<>();
+    List<PreparedImage> goodPrepared = new ArrayList<>();
+    for (int i = 0; i < results.size(); i++) {
+      if (VectorSync.finite(results.get(i).appearance()) && VectorSync.finite(results.get(i).shape().shapeVector())) {
+        good.add(results.get(i));
+        goodPrepared.add(batch.get(i));
+      } else {
+        fail(rows.get(i), "analysis produced an invalid vector (NaN); please report this file", failures);
+      }
+    }
+    library.catalog().inTransaction(c -> {
+      for (int i = 0; i < good.size(); i++) {
+        ImageAnalysis a = good.get(i);
+        PreparedImage p = goodPrepared.get(i);
+        library.features().put(a.id(), a);
+        library.images().markReady(a.id(), p.decoded().width(), p.decoded().height(), p.decoded().orientation(),
+            p.decoded().format());
+      }
+      return null;
+    });
+    for (ImageAnalysis a : good) {
+      index.upsert(a.id(), a.appearance(), VectorSync.nonZeroOrNull(a.shape().shapeVector()));
+      analysed.add(a.id());
+    }
+    return good.size();
+  }
+
+
+  private void fail(ImageRow row, String reason, List<IndexReport.FileFailure> failures) {
+    library.catalog().inTransaction(c -> {
+      library.images().markFailed(row.id(), reason);
+      return null;
+    });
+    failures.add(new IndexReport.FileFailure(row.path(), reason));
+    LOG.info("{}: {}", row.path(), reason);
+  }
+
+  static String reason(Throwable t) {
+    if (t instanceof ImageReadException r) {
+      return r.reason();
+    }
+    if (t instanceof java.nio.file.NoSuchFileException) {
+      return "file disappeared before it could be read";
+    }
+    if (t instanceof OutOfMemoryError) {
+      return "not enough memory to analyse this image";
+    }
+    String m = t.getMessage();
+    return "analysis failed: " + (m == null ? t.getClass().getSimpleName() : m);
+  }
+}
