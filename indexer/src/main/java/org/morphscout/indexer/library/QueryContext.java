@@ -10,6 +10,7 @@ import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.analysis.ImageAnalyzer;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.ingest.ImageReadException;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
@@ -21,6 +22,8 @@ import org.morphscout.indexer.vector.VectorIndex;
  * catalog's own appearance model. Thread-safe. Close it when done.
  */
 public final class QueryContext implements AutoCloseable {
+  private static final org.slf4j.Logger LOG = org.slf4j.LoggerFactory.getLogger(QueryContext.class);
+
   private final Library library;
   private final AnalysisSetup setup;
   private final AnalysisCache cache;
@@ -48,11 +51,42 @@ public final class QueryContext implements AutoCloseable {
         throw new MorphscoutException("the catalog " + library.catalog().dir() + " has no vector index yet: run "
             + "morphscout index <folder> first");
       }
+      repairIfNeeded();
       index = LuceneVectorIndex.openReadOnly(library.catalog().vectorDir(), LuceneIndexOptions.defaults());
     } else {
       index.refresh();
     }
     return index;
+  }
+
+  /**
+   * On open, the vector index must hold exactly the catalog's ready images. When it does not (a crash between the two
+   * commits, a copied or damaged index) and no indexer is running, it is brought in line from the catalog's stored
+   * vectors; a running indexer does the same itself when it starts.
+   */
+  private void repairIfNeeded() throws IOException {
+    java.util.Set<Long> ready = new java.util.HashSet<>(library.features().readyIds(modelId()));
+    try (LuceneVectorIndex probe = LuceneVectorIndex.openReadOnly(library.catalog().vectorDir(),
+        LuceneIndexOptions.defaults())) {
+      if (probe.ids().equals(ready)) {
+        return;
+      }
+    }
+    WriterLock lock;
+    try {
+      lock = WriterLock.acquire(library.catalog().dir());
+    } catch (MorphscoutException inUse) {
+      LOG.info("vector index differs from the catalog; the running indexer will bring it in line");
+      return;
+    }
+    LuceneIndexOptions.Quantization q = "INT8".equals(
+        library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE"))
+        ? LuceneIndexOptions.Quantization.INT8 : LuceneIndexOptions.Quantization.NONE;
+    try (lock; LuceneVectorIndex writer = LuceneVectorIndex.open(library.catalog().vectorDir(),
+        LuceneIndexOptions.defaults().withQuantization(q))) {
+      int added = VectorSync.sync(library.features(), writer, modelId(), false, new java.util.ArrayList<>());
+      LOG.warn("vector index differed from the catalog; brought in line ({} images added)", added);
+    }
   }
 
   /** The catalog's active appearance model. */

@@ -157,6 +157,23 @@ class LibraryIndexerTest {
     }
   }
 
+  @Test
+  void queriesBringAnIndexThatLostImagesInLineWithTheCatalog() throws IOException {
+    try (Library library = Library.open(catalogDir)) {
+      index(library);
+      long lost = library.require(root.resolve("vessel-3.png").toString()).id();
+      try (LuceneVectorIndex idx = LuceneVectorIndex.open(library.catalog().vectorDir(),
+          org.morphscout.indexer.vector.LuceneIndexOptions.defaults())) {
+        idx.delete(lost);
+        idx.commit();
+      }
+      try (QueryContext context = new QueryContext(library, AnalysisSetup.defaults())) {
+        assertThat(context.index().ids()).contains(lost);
+      }
+      assertCatalogAndIndexAgree(library);
+    }
+  }
+
   private static void assertCatalogAndIndexAgree(Library library) throws IOException {
     Set<Long> ready = new HashSet<>();
     library.images().withStatus(ImageStatus.READY).forEach(r -> ready.add(r.id()));
