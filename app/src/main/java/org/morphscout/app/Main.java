@@ -42,5 +42,7 @@ public final class Main {
     // ONNX Runtime's Java package ships CPU and GPU providers; on a machine without CUDA, DJL warns at every start
     // that the GPU provider is missing. Morphscout runs on the CPU by design, so that warning is noise.
     System.setProperty("org.slf4j.simpleLogger.log.ai.djl.onnxruntime.engine.OrtEngine", "error");
+    // DJL notes that a model was loaded from a plain .onnx file rather than an archive: that is how we load them.
+    System.setProperty("org.slf4j.simpleLogger.log.ai.djl.repository.SimpleRepository", "error");
   }
 }
