@@ -19,7 +19,7 @@ import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
 
-/** {@code similar}, {@code pairs}, {@code screen}, {@code decide} and {@code decisions} on one small indexed catalog. */
+/** {@code similar}, {@code pairs}, {@code screen}, {@code decide}, {@code decisions} on one small indexed catalog. */
 class QueryCommandsTest {
   private static final long SEED = 7202;
 
@@ -109,21 +109,23 @@ class QueryCommandsTest {
 
   @Test
   void pairsTopMinScoreForAndCsv() throws IOException {
-    assertThat(cli.run("pairs", "--json", "--top", "3").succeeds().json().get("pairs")).hasSize(3);
+    assertThat(cli.run("pairs", "--candidates", "6", "--json", "--top", "3").succeeds().json().get("pairs"))
+        .hasSize(3);
 
-    JsonNode all = cli.run("pairs", "--json", "--top", "200").succeeds().json().get("pairs");
+    JsonNode all = cli.run("pairs", "--candidates", "6", "--json", "--top", "200").succeeds().json().get("pairs");
     double median = all.get(all.size() / 2).get("score").asDouble();
-    JsonNode high = cli.run("pairs", "--json", "--top", "200", "--min-score", "" + median).succeeds().json()
-        .get("pairs");
+    JsonNode high = cli.run("pairs", "--candidates", "6", "--json", "--top", "200", "--min-score", "" + median)
+        .succeeds().json().get("pairs");
     assertThat(high).isNotEmpty().hasSizeLessThan(all.size());
     high.forEach(p -> assertThat(p.get("score").asDouble()).isGreaterThanOrEqualTo(median));
 
     String member = Cli.abs(lib.family.get(2));
-    JsonNode partners = cli.run("pairs", "--for", member, "--json", "--top", "5").succeeds().json().get("pairs");
+    JsonNode partners = cli.run("pairs", "--candidates", "6", "--for", member, "--json", "--top", "5").succeeds()
+        .json().get("pairs");
     assertThat(partners).isNotEmpty().hasSizeLessThanOrEqualTo(5);
     partners.forEach(p -> assertThat(List.of(p.get("a").asText(), p.get("b").asText())).contains(member));
 
-    Cli.Run csv = cli.run("pairs", "--csv", "--top", "5").succeeds();
+    Cli.Run csv = cli.run("pairs", "--candidates", "6", "--csv", "--top", "5").succeeds();
     assertThat(csv.csvHeader()).startsWith("a", "b", "score", "verdict", "reasons");
     List<CSVRecord> rows = csv.csv();
     assertThat(rows).hasSize(5);
