@@ -60,7 +60,7 @@ class PairDiscoveryOnRealImagesTest {
       planted.add(Set.of(catalog.analysis(files.get(p.first())).id(), catalog.analysis(files.get(p.second())).id()));
     }
     group.forEach(p -> duplicateGroup.add(catalog.analysis(p).id()));
-    result = catalog.pairs.bestPairs(new PairQuery(20, 200, 0), ProgressListener.NONE, CancellationToken.none());
+    result = catalog.pairs.bestPairs(new PairQuery(10, 200, 0), ProgressListener.NONE, CancellationToken.none());
   }
 
   private static Path write(Path dir, EncodedImage e) throws IOException {
