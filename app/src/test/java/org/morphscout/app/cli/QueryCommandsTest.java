@@ -91,7 +91,7 @@ class QueryCommandsTest {
 
   @Test
   void pairsJsonHasScoresComponentsAndReasonsBestFirst() {
-    JsonNode pairs = cli.run("pairs", "--json", "--top", "30").succeeds().json().get("pairs");
+    JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--top", "30").succeeds().json().get("pairs");
     assertThat(pairs).isNotEmpty().hasSizeLessThanOrEqualTo(30);
     double last = Double.MAX_VALUE;
     for (JsonNode p : pairs) {
@@ -109,26 +109,23 @@ class QueryCommandsTest {
 
   @Test
   void pairsTopMinScoreForAndCsv() throws IOException {
-    assertThat(cli.run("pairs", "--candidates", "6", "--json", "--top", "3").succeeds().json().get("pairs"))
-        .hasSize(3);
-
-    JsonNode all = cli.run("pairs", "--candidates", "6", "--json", "--top", "200").succeeds().json().get("pairs");
+    JsonNode all = cli.run("pairs", "--candidates", "4", "--json", "--top", "200").succeeds().json().get("pairs");
     double median = all.get(all.size() / 2).get("score").asDouble();
-    JsonNode high = cli.run("pairs", "--candidates", "6", "--json", "--top", "200", "--min-score", "" + median)
+    JsonNode high = cli.run("pairs", "--candidates", "4", "--json", "--top", "200", "--min-score", "" + median)
         .succeeds().json().get("pairs");
     assertThat(high).isNotEmpty().hasSizeLessThan(all.size());
     high.forEach(p -> assertThat(p.get("score").asDouble()).isGreaterThanOrEqualTo(median));
 
     String member = Cli.abs(lib.family.get(2));
-    JsonNode partners = cli.run("pairs", "--candidates", "6", "--for", member, "--json", "--top", "5").succeeds()
+    JsonNode partners = cli.run("pairs", "--candidates", "4", "--for", member, "--json", "--top", "5").succeeds()
         .json().get("pairs");
     assertThat(partners).isNotEmpty().hasSizeLessThanOrEqualTo(5);
     partners.forEach(p -> assertThat(List.of(p.get("a").asText(), p.get("b").asText())).contains(member));
 
-    Cli.Run csv = cli.run("pairs", "--candidates", "6", "--csv", "--top", "5").succeeds();
+    Cli.Run csv = cli.run("pairs", "--candidates", "4", "--csv", "--top", "3").succeeds();
     assertThat(csv.csvHeader()).startsWith("a", "b", "score", "verdict", "reasons");
     List<CSVRecord> rows = csv.csv();
-    assertThat(rows).hasSize(5);
+    assertThat(rows).as("--top 3").hasSize(3);
     for (CSVRecord r : rows) {
       assertThat(Files.isRegularFile(Path.of(r.get("a")))).isTrue();
       assertThat(Double.parseDouble(r.get("score"))).isBetween(0.0, 100.0);
@@ -139,7 +136,8 @@ class QueryCommandsTest {
   @Test
   void nearDuplicatesAreListedAndNeverPaired() {
     Set<String> group = new HashSet<>(lib.duplicateGroup());
-    JsonNode dupes = cli.run("pairs", "--duplicates", "--json", "--top", "200").succeeds().json().get("duplicates");
+    JsonNode dupes = cli.run("pairs", "--candidates", "8", "--duplicates", "--json", "--top", "200").succeeds().json()
+        .get("duplicates");
     Set<String> seen = new HashSet<>();
     for (JsonNode d : dupes) {
       if (group.contains(d.get("a").asText()) && group.contains(d.get("b").asText())) {
@@ -150,7 +148,7 @@ class QueryCommandsTest {
     // Every edited copy is found as a near-duplicate inside its group (TestFamilies.nearDuplicates ground truth).
     assertThat(seen).as("seed %d", SEED).containsExactlyInAnyOrderElementsOf(group);
 
-    JsonNode pairs = cli.run("pairs", "--json", "--top", "500").succeeds().json().get("pairs");
+    JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--top", "500").succeeds().json().get("pairs");
     for (JsonNode p : pairs) {
       assertThat(group.contains(p.get("a").asText()) && group.contains(p.get("b").asText()))
           .as("near-duplicates proposed as a pair: %s", p).isFalse();
