@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Set;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
@@ -140,5 +141,28 @@ class ChainOnRealImagesTest {
         assertThat(s.score().score()).isBetween(0.0, 100.0);
       }
     }
+  }
+
+  @Test
+  @Disabled("bug: NearDuplicates takes members of a vase-to-bottle silhouette family up to 0.4 apart in t (same "
+      + "glaze, backdrop and light) for near-duplicates, so pair discovery drops them and lists them as duplicates")
+  void distinctFamilyMembersAreNotNearDuplicates() {
+    // Near-duplicates are the same picture resized, recompressed or lightly edited (NearDuplicateConfig); members of
+    // a silhouette family are different vessels. Members 0.2 or more apart in t must never count as duplicates.
+    List<String> flagged = new ArrayList<>();
+    for (int i = 0; i < FAMILY; i++) {
+      for (int j = i + 2; j < FAMILY; j++) {
+        if (catalog.pairs.areDuplicates(family.get(i), family.get(j))) {
+          float[] a = family.get(i).shape().shapeVector();
+          float[] b = family.get(j).shape().shapeVector();
+          double d2 = 0;
+          for (int k = 0; k < a.length; k++) {
+            d2 += (a[k] - b[k]) * (a[k] - b[k]);
+          }
+          flagged.add(String.format(java.util.Locale.ROOT, "%d-%d (shape distance %.3f)", i, j, Math.sqrt(d2)));
+        }
+      }
+    }
+    assertThat(flagged).as("seed %d: member pairs taken for near-duplicates", SEED).isEmpty();
   }
 }
