@@ -144,7 +144,7 @@ class ChainOnRealImagesTest {
   }
 
   @Test
-  @Disabled("bug: NearDuplicates takes members of a vase-to-bottle silhouette family up to 0.4 apart in t (same "
+  @Disabled("bug: NearDuplicates takes members of a vase-to-bottle silhouette family up to 0.5 apart in t (same "
       + "glaze, backdrop and light) for near-duplicates, so pair discovery drops them and lists them as duplicates")
   void distinctFamilyMembersAreNotNearDuplicates() {
     // Near-duplicates are the same picture resized, recompressed or lightly edited (NearDuplicateConfig); members of
