@@ -1,0 +1,158 @@
+package org.morphscout.app.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Disabled;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/** {@code index}, {@code status}, {@code models add-salient}, help and error lines, through {@code Main.execute}. */
+class IndexStatusCommandTest {
+  private static final long SEED = 7101;
+
+  @TempDir static Path tmp;
+  static TestLibrary lib;
+  static Cli cli;
+  static Path broken;
+  static Cli.Run first;
+
+  @BeforeAll
+  static void indexLibrary() throws IOException {
+    lib = new TestLibrary(tmp.resolve("library"), SEED);
+    byte[] jpeg = Files.readAllBytes(lib.distractors.get(0));
+    broken = Files.createDirectories(tmp.resolve("library/bad")).resolve("cut-short.jpg");
+    Files.write(broken, Arrays.copyOf(jpeg, jpeg.length / 3));
+    cli = new Cli(tmp.resolve("catalog"));
+    first = cli.run("index", tmp.resolve("library").toString(), "--json", "--threads", "2");
+  }
+
+  @Test
+  void indexReportsCountsAndTheCorruptFileWithExitCodeOne() {
+    // Keys and exit code 1 as fixed by the index issue: {"indexed","unchanged","failed","failures":[{path,reason}]}.
+    assertThat(first.code()).as("exit code with a corrupt file; stderr: %s", first.err())
+        .isEqualTo(ExitCodes.FINISHED_WITH_FAILURES).isEqualTo(1);
+    JsonNode doc = first.json();
+    assertThat(doc.get("indexed").asInt()).isEqualTo(lib.all().size());
+    assertThat(doc.get("unchanged").asInt()).isZero();
+    assertThat(doc.get("failed").asInt()).isEqualTo(1);
+    assertThat(doc.get("failures")).hasSize(1);
+    JsonNode failure = doc.get("failures").get(0);
+    assertThat(failure.get("path").asText()).isEqualTo(Cli.abs(broken));
+    assertThat(Path.of(failure.get("path").asText()).isAbsolute()).isTrue();
+    assertThat(failure.get("reason").asText()).isNotBlank();
+  }
+
+  @Test
+  void rerunReportsEverythingUnchanged() {
+    Cli.Run again = cli.run("index", tmp.resolve("library").toString(), "--json", "--threads", "2");
+    JsonNode doc = again.json();
+    assertThat(doc.get("indexed").asInt()).as("stderr: %s", again.err()).isZero();
+    // Every file seen before, the unreadable one included, is unchanged (the issue: "a rerun reports unchanged").
+    assertThat(doc.get("unchanged").asInt()).isEqualTo(lib.all().size() + 1);
+  }
+
+  @Test
+  @Disabled("bug: a rerun skips the unchanged corrupt file and reports failed 0, no failures and exit code 0, although "
+      + "the corrupt file is still present and status still counts it as failed")
+  void rerunStillReportsTheCorruptFile() {
+    Cli.Run again = cli.run("index", tmp.resolve("library").toString(), "--json", "--threads", "2");
+    // Index issue: exit code 1 ("finished with failures") when a corrupt file is present.
+    assertThat(again.code()).as("stdout %s", again.out()).isEqualTo(ExitCodes.FINISHED_WITH_FAILURES);
+    assertThat(again.json().get("failed").asInt()).isEqualTo(1);
+    assertThat(again.json().get("failures").get(0).get("path").asText()).isEqualTo(Cli.abs(broken));
+  }
+
+  @Test
+  void cleanFolderExitsZero(@TempDir Path other) throws IOException {
+    Path folder = other.resolve("clean");
+    Files.createDirectories(folder);
+    Files.copy(lib.family.get(0), folder.resolve("a.png"));
+    Files.copy(lib.family.get(3), folder.resolve("b.png"));
+    Cli.Run run = new Cli(other.resolve("catalog")).run("index", folder.toString(), "--json", "--threads", "1");
+    assertThat(run.code()).as("stderr: %s", run.err()).isEqualTo(ExitCodes.OK);
+    assertThat(run.json().get("indexed").asInt()).isEqualTo(2);
+    assertThat(run.json().get("failed").asInt()).isZero();
+    assertThat(run.json().get("failures")).isEmpty();
+  }
+
+  @Test
+  void unknownOptionIsAUsageError() {
+    Cli.Run run = cli.run("index", "--no-such-option", tmp.resolve("library").toString());
+    assertThat(run.code()).isEqualTo(ExitCodes.USAGE).isEqualTo(2);
+    assertThat(run.err()).contains("--no-such-option").doesNotContain("\tat ");
+  }
+
+  @Test
+  void missingFolderExitsThreeNamingIt(@TempDir Path other) {
+    Path nowhere = other.resolve("no-such-folder");
+    Cli.Run run = new Cli(other.resolve("catalog")).run("index", nowhere.toString(), "--json");
+    run.failsCleanly(ExitCodes.ERROR);
+    assertThat(run.code()).isEqualTo(3);
+    assertThat(run.err()).contains(nowhere.toString());
+  }
+
+  @Test
+  void statusCountsImagesFailuresAndRoots() {
+    JsonNode doc = cli.run("status", "--json").succeeds().json();
+    assertThat(doc.get("images").asInt()).isEqualTo(lib.all().size() + 1);
+    assertThat(doc.get("failed").asInt()).isEqualTo(1);
+    assertThat(Cli.texts(doc.get("roots"))).containsExactly(Cli.abs(tmp.resolve("library")));
+  }
+
+  @Test
+  void statusWithoutCatalogIsAClearError(@TempDir Path other) {
+    Cli.Run run = new Cli(other.resolve("empty")).run("status", "--json");
+    run.failsCleanly(ExitCodes.ERROR);
+    assertThat(run.err()).contains(Cli.abs(other.resolve("empty")));
+  }
+
+  @Test
+  void salientModelWithWrongBytesIsRefused(@TempDir Path other) throws IOException {
+    Path fake = Files.writeString(other.resolve("u2netp.onnx"), "these are not the model's bytes");
+    Cli.Run run = new Cli(other.resolve("catalog")).run("models", "add-salient", "--from", fake.toString());
+    run.failsCleanly(ExitCodes.ERROR);
+    assertThat(run.err()).contains("checksum mismatch");
+    assertThat(Files.exists(other.resolve("catalog/models/u2netp.onnx"))).isFalse();
+  }
+
+  @ParameterizedTest
+  @ValueSource(strings = {"index", "status", "similar", "pairs", "screen", "decide", "decisions", "chain", "walk",
+      "preview", "models", "demo"})
+  void everyHelpHasAOneLineHeaderAndTheExitCodes(String command) {
+    Cli.Run run = Cli.runRaw(command, "--help");
+    assertThat(run.code()).isZero();
+    List<String> lines = run.out().lines().toList();
+    // One header entry (picocli wraps it at the 80-column width when it is longer), printed before "Usage:".
+    String[] header = MorphscoutCommand.commandLine(new java.io.PrintWriter(java.io.Writer.nullWriter()),
+        new java.io.PrintWriter(java.io.Writer.nullWriter())).getSubcommands().get(command).getCommandSpec()
+        .usageMessage().header();
+    assertThat(header).as("header of %s", command).hasSize(1);
+    assertThat(header[0]).doesNotContain("\n").endsWith(".");
+    int usage = lines.indexOf(lines.stream().filter(l -> l.startsWith("Usage:")).findFirst().orElseThrow());
+    assertThat(usage).as("header lines before Usage:").isBetween(1, 2);
+    assertThat(String.join(" ", lines.subList(0, usage))).isEqualTo(header[0]);
+    assertThat(run.out()).contains("Exit codes:");
+    for (String code : List.of("0", "1", "2", "3", "130")) {
+      assertThat(lines).as("exit code %s listed by %s --help", code, command)
+          .anyMatch(l -> l.strip().startsWith(code + " ") || l.strip().startsWith(code + "\t"));
+    }
+  }
+
+  @Test
+  void aMissingImageIsOneLineNamingTheFile() {
+    Path nowhere = tmp.resolve("library/family/no-such.png");
+    Cli.Run run = cli.run("similar", nowhere.toString(), "--json");
+    run.failsCleanly(ExitCodes.ERROR);
+    assertThat(run.err()).contains(nowhere.toString());
+    assertThat(run.out()).isEmpty();
+  }
+}
