@@ -9,7 +9,6 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -61,8 +60,6 @@ class IndexStatusCommandTest {
   }
 
   @Test
-  @Disabled("bug: a rerun skips the unchanged corrupt file and reports failed 0, no failures and exit code 0, although "
-      + "the corrupt file is still present and status still counts it as failed")
   void rerunStillReportsTheCorruptFile() {
     Cli.Run again = cli.run("index", tmp.resolve("library").toString(), "--json", "--threads", "2");
     // Index issue: exit code 1 ("finished with failures") when a corrupt file is present.

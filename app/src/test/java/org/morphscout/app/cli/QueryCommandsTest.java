@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Set;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.BeforeAll;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
@@ -156,8 +155,6 @@ class QueryCommandsTest {
   }
 
   @Test
-  @Disabled("bug: NearDuplicates flags distinct silhouette-family members (t up to 3/7 apart, vase to bottle, same "
-      + "glaze and backdrop) as near-duplicates, so pairs leaves out the best morph pairs")
   void onlyEditedCopiesAreNearDuplicates() {
     Set<String> group = new HashSet<>(lib.duplicateGroup());
     JsonNode dupes = cli.run("pairs", "--duplicates", "--json", "--top", "200").succeeds().json().get("duplicates");

@@ -13,6 +13,7 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalyzer;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.ingest.FoundFile;
 import org.morphscout.indexer.ingest.LibraryScanner;
@@ -115,11 +116,33 @@ public final class LibraryIndexer {
             cancelled = true;
           }
         }
+        listKnownFailures(roots, failures);
         progress.finished();
         return new IndexReport(analysed.size(), plan.unchanged(), plan.moved(), plan.nowMissing().size(), failures,
             restored, cancelled, modelId, Duration.ofNanos(System.nanoTime() - start));
       } finally {
         analyzer.embedder().close();
+      }
+    }
+  }
+
+  /**
+   * Files under the indexed roots that failed in an earlier run and did not change stay failed: the summary lists them
+   * again (with their stored reason), so a run over a folder that still holds an unreadable file never reports a clean
+   * success.
+   */
+  private void listKnownFailures(List<Path> roots, List<IndexReport.FileFailure> failures) {
+    Set<String> listed = new java.util.HashSet<>();
+    failures.forEach(f -> listed.add(f.path()));
+    for (ImageStore.Failure f : library.images().failures()) {
+      if (listed.contains(f.path())) {
+        continue;
+      }
+      for (Path root : roots) {
+        if (Path.of(f.path()).startsWith(root.toAbsolutePath().normalize())) {
+          failures.add(new IndexReport.FileFailure(f.path(), f.reason()));
+          break;
+        }
       }
     }
   }

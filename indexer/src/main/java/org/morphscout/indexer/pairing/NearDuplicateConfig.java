@@ -14,11 +14,14 @@ package org.morphscout.indexer.pairing;
  *     object and background alike, while a different photo usually has another backdrop
  * @param maxBackgroundStdGap largest difference of the background's L* standard deviation (default 1.5): the
  *     backdrop's texture survives resizing and light edits but differs between shots
+ * @param maxObjectAspectGap largest relative difference of the objects' bounding-box aspect ratios, in [0, 1]
+ *     (default 0.03): resizing, recompressing and cropping around the object keep it, while two similar objects
+ *     (one vessel a little slimmer than the other) differ in it
  */
 public record NearDuplicateConfig(double minCosine, double maxShapeDistance, double maxDeltaE, double maxAspectGap,
-    double maxBackgroundDeltaE, double maxBackgroundStdGap) {
+    double maxBackgroundDeltaE, double maxBackgroundStdGap, double maxObjectAspectGap) {
 
-  public static final NearDuplicateConfig DEFAULTS = new NearDuplicateConfig(0.98, 0.16, 4.0, 0.02, 4.0, 1.5);
+  public static final NearDuplicateConfig DEFAULTS = new NearDuplicateConfig(0.98, 0.16, 4.0, 0.02, 4.0, 1.5, 0.03);
 
   public NearDuplicateConfig {
     if (!(minCosine >= 0 && minCosine <= 1)) {
@@ -35,6 +38,9 @@ public record NearDuplicateConfig(double minCosine, double maxShapeDistance, dou
     }
     if (!(maxBackgroundStdGap >= 0) || !Double.isFinite(maxBackgroundStdGap)) {
       throw new IllegalArgumentException("maxBackgroundStdGap must be >= 0, got " + maxBackgroundStdGap);
+    }
+    if (!(maxObjectAspectGap >= 0 && maxObjectAspectGap <= 1)) {
+      throw new IllegalArgumentException("maxObjectAspectGap must be in [0, 1], got " + maxObjectAspectGap);
     }
     if (!(maxAspectGap >= 0 && maxAspectGap <= 1)) {
       throw new IllegalArgumentException("maxAspectGap must be in [0, 1], got " + maxAspectGap);

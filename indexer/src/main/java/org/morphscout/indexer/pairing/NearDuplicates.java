@@ -40,6 +40,11 @@ public final class NearDuplicates {
     if (sa == null || sb == null || sa.length != sb.length || sa.length == 0 || distance(sa, sb) > config.maxShapeDistance()) {
       return false;
     }
+    double oa = a.shape().aspect();
+    double ob = b.shape().aspect();
+    if (!(oa > 0 && ob > 0) || Math.abs(oa / ob - 1) > config.maxObjectAspectGap()) {
+      return false;
+    }
     double ra = a.width() / (double) a.height();
     double rb = b.width() / (double) b.height();
     if (Math.abs(ra / rb - 1) > config.maxAspectGap()) {

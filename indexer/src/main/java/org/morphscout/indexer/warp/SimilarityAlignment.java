@@ -11,8 +11,12 @@ import org.morphscout.indexer.silhouette.Mask;
  * left-right flipped B is tried as well. The candidate whose masks overlap best (soft IoU on the canvas) wins; near
  * ties (within {@link #TIE_MARGIN}) go to the smaller rotation and to no flip.
  *
- * <p>Departure from a pure moment method: when either shape is nearly isotropic (anisotropy below
- * {@link #ISOTROPY_LIMIT}) its principal axis is noise, so the unrotated candidates are tried too.
+ * <p>Departures from a pure moment method: the unrotated candidate is always tried, because objects in photographs
+ * are mostly upright and the principal axis of a nearly round or square outline is noise (a bowl is wide, a bottle
+ * tall: their axes differ by 90 degrees while the best morph turns neither); and a rotation of more than
+ * {@link #LARGE_ROTATION} radians must beat the best smaller one by {@link #LARGE_ROTATION_MARGIN} IoU, since a morph
+ * that spins the object is rarely wanted. When either shape is nearly isotropic (anisotropy below
+ * {@link #ISOTROPY_LIMIT}) the upside-down candidate is tried too.
  *
  * <p>The canvas is square and covers A's bounding box and the disc that B covers after the similarity whatever its
  * rotation, plus a margin on each side. Immutable and thread-safe.
@@ -23,6 +27,12 @@ public final class SimilarityAlignment {
 
   /** A less preferred candidate must beat a more preferred one by this much IoU to be chosen. */
   static final double TIE_MARGIN = 0.01;
+
+  /** Rotations larger than this (30 degrees) count as turning the object. */
+  static final double LARGE_ROTATION = Math.PI / 6;
+
+  /** The IoU a large rotation must gain over the best smaller candidate to be chosen. */
+  static final double LARGE_ROTATION_MARGIN = 0.05;
 
   /** Preference cost of a flip, in radians of rotation: a flip is preferred over turning more than 90 degrees. */
   private static final double MIRROR_COST = 0.5 * Math.PI;
@@ -65,7 +75,7 @@ public final class SimilarityAlignment {
       double thetaB = mirror ? -mb.orientation() : mb.orientation();
       double base = ma.orientation() - thetaB;
       double[] rotations = isotropic ? new double[] {base, base + Math.PI, 0, Math.PI}
-          : new double[] {base, base + Math.PI};
+          : new double[] {base, base + Math.PI, 0};
       for (double rot : rotations) {
         // through() applies the flip itself, so pass B's unflipped centroid.
         candidates.add(Similarity.through(scale, rot, mirror, mb.cx(), mb.cy(), ma.cx(), ma.cy()));
@@ -74,20 +84,28 @@ public final class SimilarityAlignment {
     // Prefer upright and unflipped: photographs are mostly taken upright, and symmetric outlines (an egg, a bottle)
     // give near-equal overlaps for several candidates that differ only by pixel noise.
     candidates.sort(java.util.Comparator.comparingDouble(
-        (Similarity c) -> Math.abs(c.rotation()) + (c.mirror() ? MIRROR_COST : 0)));
+        (Similarity c) -> Math.abs(normalised(c.rotation())) + (c.mirror() ? MIRROR_COST : 0)));
     Similarity best = null;
     float[] bestB = null;
     double bestIou = -1;
     for (Similarity sim : candidates) {
       float[] gridB = Grids.rasterise(b, canvas, sim);
       double iou = Grids.iou(gridA, gridB);
-      if (iou > bestIou + TIE_MARGIN) {
+      double needed = best != null && Math.abs(normalised(sim.rotation())) > LARGE_ROTATION
+          && Math.abs(normalised(best.rotation())) <= LARGE_ROTATION ? LARGE_ROTATION_MARGIN : TIE_MARGIN;
+      if (iou > bestIou + needed) {
         best = sim;
         bestB = gridB;
         bestIou = iou;
       }
     }
     return new Alignment(best, canvas, gridA, bestB, bestIou);
+  }
+
+  /** An angle in (-pi, pi]. */
+  static double normalised(double angle) {
+    double a = Math.IEEEremainder(angle, 2 * Math.PI);
+    return a <= -Math.PI ? a + 2 * Math.PI : a;
   }
 
   /** A canvas over A's mask, with B placed on A's centroid by any rotation; no transform. */

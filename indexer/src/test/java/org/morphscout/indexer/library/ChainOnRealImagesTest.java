@@ -144,8 +144,9 @@ class ChainOnRealImagesTest {
   }
 
   @Test
-  @Disabled("bug: NearDuplicates takes members of a vase-to-bottle silhouette family up to 0.5 apart in t (same "
-      + "glaze, backdrop and light) for near-duplicates, so pair discovery drops them and lists them as duplicates")
+  @Disabled("known weakness, not fixed yet: with the near-duplicate defaults, members 1 and 3 of this vase-to-bottle "
+      + "family (same glaze, backdrop and light; shape distance 0.057, object aspects within 3%) are still taken for "
+      + "the same picture; telling them apart needs a pixel-level comparison the catalog does not store yet")
   void distinctFamilyMembersAreNotNearDuplicates() {
     // Near-duplicates are the same picture resized, recompressed or lightly edited (NearDuplicateConfig); members of
     // a silhouette family are different vessels. Members 0.2 or more apart in t must never count as duplicates.

@@ -91,9 +91,9 @@ class ScoresOnRealImagesTest {
   }
 
   @Test
-  @Disabled("bug: bowl-to-bottle family, seed 8603: the score of member 0 with members 1..6 is 83.0, 65.6, 69.2, 71.6, "
-      + "67.5, 64.2 because the aligned IoU is 0.77, 0.62, 0.71, 0.80, 0.75, 0.70 while the unaligned IoU falls "
-      + "0.68 .. 0.43: the similarity alignment finds a poor fit for the nearer members")
+  @Disabled("known weakness, not fixed yet: bowl-to-bottle family, seed 8603: the score of member 0 with members 1..6 "
+      + "is 83, 66, 69, 72, 67, 64 because the aligned IoU (0.77, 0.62, 0.71, 0.80, 0.75, 0.70) is not monotone while "
+      + "the unaligned IoU falls 0.68 .. 0.43; always trying the upright candidate did not change it")
   void growingSilhouetteDifferenceLowersTheScoreFromBowlToBottle() throws IOException {
     assertScoreFallsAlongTheFamily(Archetype.BOWL, Archetype.BOTTLE);
   }
