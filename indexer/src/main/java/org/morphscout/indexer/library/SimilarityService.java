@@ -8,6 +8,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.morphscout.indexer.vector.VectorMath;
@@ -45,12 +46,18 @@ public final class SimilarityService {
     context.sameContent(query).ifPresent(exclude::add);
     Set<Long> candidates = new LinkedHashSet<>();
     int fetch = by == By.BOTH ? Math.max(3 * k, 30) : k;
-    if (by != By.SHAPE) {
-      index.search(VectorIndex.Field.APPEARANCE, query.appearance(), fetch, exclude).forEach(h -> candidates.add(h.id()));
+    // A zero vector (no silhouette: a uniform or fully transparent picture) has no direction to search with.
+    float[] appearanceQuery = VectorSync.nonZeroOrNull(query.appearance());
+    float[] shapeQuery = VectorSync.nonZeroOrNull(query.shape().shapeVector());
+    if (by == By.SHAPE && shapeQuery == null) {
+      throw new MorphscoutException(query.path() + " has no silhouette (a uniform or fully transparent picture), so "
+          + "there is no shape to compare: search by appearance instead");
     }
-    if (by != By.APPEARANCE) {
-      index.search(VectorIndex.Field.SHAPE, query.shape().shapeVector(), fetch, exclude)
-          .forEach(h -> candidates.add(h.id()));
+    if (by != By.SHAPE && appearanceQuery != null) {
+      index.search(VectorIndex.Field.APPEARANCE, appearanceQuery, fetch, exclude).forEach(h -> candidates.add(h.id()));
+    }
+    if (by != By.APPEARANCE && shapeQuery != null) {
+      index.search(VectorIndex.Field.SHAPE, shapeQuery, fetch, exclude).forEach(h -> candidates.add(h.id()));
     }
     List<Hit> hits = new ArrayList<>();
     for (long id : candidates) {
