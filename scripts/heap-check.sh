@@ -36,7 +36,8 @@ if [ "$have" -lt "$n" ]; then
   "$java_bin" -Djava.awt.headless=true "$here/scripts/LargeJpegs.java" "$pool" "$n" "$w" "$h"
   echo "heap-check: generated in $(( $(date +%s) - start )) s" >&2
 fi
-find "$pool" -maxdepth 1 -name 'large-*.jpg' | sort | head -n "$n" | while read -r f; do
+mapfile -t all < <(find "$pool" -maxdepth 1 -name 'large-*.jpg' | sort)
+for f in "${all[@]:0:$n}"; do
   [ -e "$images/$(basename "$f")" ] || ln "$f" "$images/" 2>/dev/null || cp "$f" "$images/"
 done
 echo "heap-check: $n images, $(du -sh "$images" | cut -f1) on disk" >&2

@@ -64,6 +64,7 @@ public final class LibraryIndexer {
     long start = System.nanoTime();
     List<IndexReport.FileFailure> failures = new ArrayList<>();
     try (WriterLock lock = WriterLock.acquire(library.catalog().dir())) {
+      library.catalog().requireIntact();
       ImageAnalyzer analyzer = AnalyzerFactory.create(library, setup);
       try (VectorIndex index = LuceneVectorIndex.open(library.catalog().vectorDir(),
               org.morphscout.indexer.vector.LuceneIndexOptions.defaults())) {
