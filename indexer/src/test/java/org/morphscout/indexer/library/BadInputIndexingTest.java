@@ -181,6 +181,29 @@ class BadInputIndexingTest {
     }
   }
 
+  @Test
+  @Timeout(value = 60, unit = TimeUnit.SECONDS)
+  void filesOverThePerFileTimeLimitFailAsTimedOutAndTheRunReturns() throws IOException {
+    // A limit far below what reading and analysing a 320 px picture takes (tens of ms): every file hits it.
+    Path root = Files.createDirectories(tmp.resolve("library"));
+    List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 3, Archetype.CUP, Archetype.BOWL);
+    for (int i = 0; i < family.size(); i++) {
+      ImageIO.write(family.get(i).image(), "png", root.resolve("slow-" + i + ".png").toFile());
+    }
+    IndexOptions options = IndexOptions.defaults().withThreads(1).withNeighbours(2)
+        .withPerFileTimeLimit(Duration.ofMillis(1));
+    try (Library library = Library.open(tmp.resolve("catalog"))) {
+      IndexReport report = new LibraryIndexer(library, AnalysisSetup.defaults(), options)
+          .index(List.of(root), ProgressListener.NONE, CancellationToken.none());
+      assertThat(report.indexed()).isZero();
+      assertThat(report.failures()).hasSize(3)
+          .allSatisfy(f -> assertThat(f.reason()).startsWith("timed out: reading and analysing took more than"));
+      assertThat(library.images().withStatus(ImageStatus.FAILED)).hasSize(3);
+      CatalogChecks.catalogAndIndexAgree(library, "after timeouts");
+      CatalogChecks.noDuplicatesOrOrphans(library, "after timeouts");
+    }
+  }
+
   private static boolean[] opaqueWhere(FamilyItem item) {
     int w = item.image().getWidth();
     int h = item.image().getHeight();
