@@ -11,6 +11,7 @@ import java.util.List;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.concurrent.atomic.AtomicInteger;
@@ -33,7 +34,7 @@ import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.testing.CatalogChecks;
 
 /**
- * Queries ({@code similar}, {@code chain}) while an indexing run adds, changes and re-analyses images: every answer is
+ * Queries ({@code similar}, {@code chain}, partners of an image) while an indexing run adds, changes and re-analyses images: every answer is
  * well-formed and refers only to catalog images, and no query fails. One query loop shares the indexer's
  * {@link Library} (the browser's case), the other opens the catalog a second time (a command run beside the indexer:
  * its own database connection and a read-only view of the vector index).
@@ -53,9 +54,39 @@ class QueriesWhileIndexingTest {
   }
 
   private IndexReport index(Library library, Path root) throws IOException {
+    return index(library, root, ProgressListener.NONE);
+  }
+
+  private IndexReport index(Library library, Path root, ProgressListener progress) throws IOException {
     return new LibraryIndexer(library, AnalysisSetup.defaults(),
         new IndexOptions(2, 4, java.time.Duration.ofSeconds(30), false, false, 4, 8))
-        .index(List.of(root), ProgressListener.NONE, CancellationToken.none());
+        .index(List.of(root), progress, CancellationToken.none());
+  }
+
+  /**
+   * Holds the run at the start of its analysis (changed pictures pending again, the links others stored to them still
+   * there) until the queries have answered a few times, so that they surely meet that state.
+   */
+  private static ProgressListener pauseMidRun(CountDownLatch queried) {
+    return new ProgressListener() {
+      private volatile boolean analysing;
+
+      @Override
+      public void phase(String name, long total) {
+        analysing = name.equals("analysing");
+      }
+
+      @Override
+      public void progressed(long done, String item) {
+        if (analysing && done == 1) {
+          try {
+            queried.await(60, TimeUnit.SECONDS);
+          } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+          }
+        }
+      }
+    };
   }
 
   @Test
@@ -83,9 +114,10 @@ class QueriesWhileIndexingTest {
       }
 
       AtomicBoolean indexing = new AtomicBoolean(true);
+      CountDownLatch queried = new CountDownLatch(4);
       CompletableFuture<IndexReport> run = CompletableFuture.supplyAsync(() -> {
         try {
-          return index(library, root);
+          return index(library, root, pauseMidRun(queried));
         } catch (IOException e) {
           throw new java.io.UncheckedIOException(e);
         } finally {
@@ -94,10 +126,10 @@ class QueriesWhileIndexingTest {
       });
       ConcurrentLinkedQueue<Throwable> errors = new ConcurrentLinkedQueue<>();
       AtomicInteger whileIndexing = new AtomicInteger();
-      Runnable shared = () -> queryLoop(library, fromFile, toFile, from, to, indexing, whileIndexing, errors);
+      Runnable shared = () -> queryLoop(library, fromFile, toFile, from, to, indexing, whileIndexing, queried, errors);
       Runnable separate = () -> {
         try (Library second = Library.open(catalog)) {
-          queryLoop(second, fromFile, toFile, from, to, indexing, whileIndexing, errors);
+          queryLoop(second, fromFile, toFile, from, to, indexing, whileIndexing, queried, errors);
         } catch (Throwable t) {
           errors.add(t);
         }
@@ -110,14 +142,14 @@ class QueriesWhileIndexingTest {
 
       assertThat(errors).as("query errors while indexing (seed %d)", SEED).isEmpty();
       assertThat(report.indexed()).isEqualTo(22); // 8 + 8 new, 6 changed
-      assertThat(whileIndexing.get()).as("queries answered while the run was going on").isGreaterThan(2);
+      assertThat(whileIndexing.get()).as("queries answered while the run was going on").isGreaterThanOrEqualTo(4);
       CatalogChecks.catalogAndIndexAgree(library, "after the run");
     }
   }
 
   /** Queries until the run is over (and once more after it), checking each answer; failures go to {@code errors}. */
   private static void queryLoop(Library library, Path fromFile, Path toFile, long from, long to, AtomicBoolean indexing,
-      AtomicInteger answered, ConcurrentLinkedQueue<Throwable> errors) {
+      AtomicInteger answered, CountDownLatch queried, ConcurrentLinkedQueue<Throwable> errors) {
     try (QueryContext context = new QueryContext(library, AnalysisSetup.defaults())) {
       boolean last = false;
       while (!last) {
@@ -127,7 +159,11 @@ class QueriesWhileIndexingTest {
           for (SimilarityService.By by : SimilarityService.By.values()) {
             checkSimilar(library, from, new SimilarityService(context).similar(query, 5, by));
           }
-          ChainService chains = new ChainService(context, new PairService(context, ScoreConfig.DEFAULTS));
+          PairService pairs = new PairService(context, ScoreConfig.DEFAULTS);
+          org.morphscout.indexer.pairing.PairSearchResult partners = pairs.partners(query,
+              org.morphscout.indexer.pairing.PairQuery.DEFAULTS, ProgressListener.NONE, CancellationToken.none());
+          partners.pairs().forEach(pair -> assertThat(library.images().byId(pair.b())).isPresent());
+          ChainService chains = new ChainService(context, pairs);
           ChainService.ChainAnswer answer = chains.chains(query, context.resolve(toFile.toString()),
               ChainQuery.between(from, to));
           for (ChainService.ChainDetail d : answer.chains()) {
@@ -135,6 +171,7 @@ class QueriesWhileIndexingTest {
           }
           if (!last) {
             answered.incrementAndGet();
+            queried.countDown();
           }
         } catch (Throwable t) {
           errors.add(t);
