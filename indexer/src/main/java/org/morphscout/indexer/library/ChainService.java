@@ -1,7 +1,9 @@
 package org.morphscout.indexer.library;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.NeighbourStore;
@@ -46,15 +48,22 @@ public final class ChainService {
   public record ChainAnswer(ImageAnalysis from, ImageAnalysis to, PairScore direct, List<ChainDetail> chains,
       long closestReachable, String reason) {}
 
-  /** The stored neighbour graph, loaded once per service. */
+  /**
+   * The stored neighbour graph over the ready images, loaded once per service. Links to images that are not ready are
+   * left out: while an indexing run goes on, a changed image is pending again but the links others stored to it are
+   * only recomputed at the end of the run.
+   */
   public synchronized StepGraph graph() {
     if (graph == null) {
       InMemoryStepGraph.Builder b = InMemoryStepGraph.builder();
-      for (long id : context.library().features().readyIds(context.modelId())) {
+      Set<Long> ready = new HashSet<>(context.library().features().readyIds(context.modelId()));
+      for (long id : ready) {
         b.addNode(id);
       }
       for (NeighbourStore.Link l : context.library().neighbours().all()) {
-        b.addEdge(l.from(), l.to(), StepCost.of(l.appearance(), Math.min(1, l.shape()), l.colour()));
+        if (ready.contains(l.from()) && ready.contains(l.to())) {
+          b.addEdge(l.from(), l.to(), StepCost.of(l.appearance(), Math.min(1, l.shape()), l.colour()));
+        }
       }
       graph = b.build();
     }
@@ -79,11 +88,18 @@ public final class ChainService {
   private ChainDetail detail(Chain c) {
     List<StepDetail> steps = new ArrayList<>();
     for (Edge e : c.steps()) {
-      ImageAnalysis a = context.cache().get(e.from()).orElseThrow();
-      ImageAnalysis b = context.cache().get(e.to()).orElseThrow();
+      ImageAnalysis a = stored(e.from());
+      ImageAnalysis b = stored(e.to());
       steps.add(new StepDetail(e.from(), e.to(), e.cost(), e.components(), pairs.score(a, b)));
     }
     return new ChainDetail(c, steps);
+  }
+
+  /** A chain image's analysis; it can vanish when an indexing run re-analyses the image after the graph was read. */
+  private ImageAnalysis stored(long id) {
+    return context.cache().get(id).orElseThrow(() -> new MorphscoutException("image " + id + " ("
+        + context.library().images().byId(id).map(r -> r.path()).orElse("no longer in the catalog")
+        + ") is being analysed again by an indexing run; ask for the chain again when it is over"));
   }
 
   private static void requireInCatalog(ImageAnalysis a) {

@@ -54,6 +54,7 @@ public final class LibraryIndexer {
     long start = System.nanoTime();
     List<IndexReport.FileFailure> failures = new ArrayList<>();
     try (WriterLock lock = WriterLock.acquire(library.catalog().dir())) {
+      library.catalog().requireIntact();
       ImageAnalyzer analyzer = AnalyzerFactory.create(library, setup);
       LuceneIndexOptions.Quantization quantization = options.int8() ? LuceneIndexOptions.Quantization.INT8
           : LuceneIndexOptions.Quantization.NONE;

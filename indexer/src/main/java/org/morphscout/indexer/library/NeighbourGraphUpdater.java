@@ -85,11 +85,19 @@ public final class NeighbourGraphUpdater {
   List<NeighbourStore.Link> nearest(ImageAnalysis a) throws IOException {
     Set<Long> candidates = new LinkedHashSet<>();
     Set<Long> self = Set.of(a.id());
-    for (VectorIndex.Hit h : index.search(VectorIndex.Field.APPEARANCE, a.appearance(), 2 * k, self)) {
-      candidates.add(h.id());
+    // An image without a silhouette (uniform, fully transparent) has a zero shape vector, which has no direction to
+    // search with: its candidates come from appearance alone (and a degenerate zero appearance gives none).
+    float[] appearance = VectorSync.nonZeroOrNull(a.appearance());
+    if (appearance != null) {
+      for (VectorIndex.Hit h : index.search(VectorIndex.Field.APPEARANCE, appearance, 2 * k, self)) {
+        candidates.add(h.id());
+      }
     }
-    for (VectorIndex.Hit h : index.search(VectorIndex.Field.SHAPE, a.shape().shapeVector(), k, self)) {
-      candidates.add(h.id());
+    float[] shape = VectorSync.nonZeroOrNull(a.shape().shapeVector());
+    if (shape != null) {
+      for (VectorIndex.Hit h : index.search(VectorIndex.Field.SHAPE, shape, k, self)) {
+        candidates.add(h.id());
+      }
     }
     List<NeighbourStore.Link> links = new ArrayList<>();
     for (long c : candidates) {

@@ -8,12 +8,16 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.morphscout.indexer.vector.VectorMath;
 
 /** Finds the catalog images nearest to a query image by appearance, by silhouette shape, or both. */
 public final class SimilarityService {
+  /** Most candidates asked of the index per field when many are not ready. */
+  private static final int MAX_FETCH = 4096;
+
   private final QueryContext context;
 
   public SimilarityService(QueryContext context) {
@@ -40,18 +44,41 @@ public final class SimilarityService {
 
   /** The {@code k} nearest catalog images, nearest first, the query itself (or a file with its bytes) left out. */
   public List<Hit> similar(ImageAnalysis query, int k, By by) throws IOException {
+    // A zero vector (no silhouette: a uniform or fully transparent picture) has no direction to search with.
+    float[] appearanceQuery = VectorSync.nonZeroOrNull(query.appearance());
+    float[] shapeQuery = VectorSync.nonZeroOrNull(query.shape().shapeVector());
+    if (by == By.SHAPE && shapeQuery == null) {
+      throw new MorphscoutException(query.path() + " has no silhouette (a uniform or fully transparent picture), so "
+          + "there is no shape to compare: search by appearance instead");
+    }
     VectorIndex index = context.index();
     Set<Long> exclude = new HashSet<>();
     context.sameContent(query).ifPresent(exclude::add);
-    Set<Long> candidates = new LinkedHashSet<>();
+    // Candidates that are not ready (being analysed again by a running indexer) are dropped; ask for more until k
+    // remain or the index has no more to give.
     int fetch = by == By.BOTH ? Math.max(3 * k, 30) : k;
-    if (by != By.SHAPE) {
-      index.search(VectorIndex.Field.APPEARANCE, query.appearance(), fetch, exclude).forEach(h -> candidates.add(h.id()));
+    while (true) {
+      Set<Long> candidates = new LinkedHashSet<>();
+      boolean exhausted = true;
+      if (by != By.SHAPE && appearanceQuery != null) {
+        List<VectorIndex.Hit> found = index.search(VectorIndex.Field.APPEARANCE, appearanceQuery, fetch, exclude);
+        found.forEach(h -> candidates.add(h.id()));
+        exhausted &= found.size() < fetch;
+      }
+      if (by != By.APPEARANCE && shapeQuery != null) {
+        List<VectorIndex.Hit> found = index.search(VectorIndex.Field.SHAPE, shapeQuery, fetch, exclude);
+        found.forEach(h -> candidates.add(h.id()));
+        exhausted &= found.size() < fetch;
+      }
+      List<Hit> hits = score(query, candidates, by);
+      if (hits.size() >= k || exhausted || fetch >= MAX_FETCH) {
+        return hits.size() > k ? List.copyOf(hits.subList(0, k)) : hits;
+      }
+      fetch = Math.min(MAX_FETCH, fetch * 4);
     }
-    if (by != By.APPEARANCE) {
-      index.search(VectorIndex.Field.SHAPE, query.shape().shapeVector(), fetch, exclude)
-          .forEach(h -> candidates.add(h.id()));
-    }
+  }
+
+  private List<Hit> score(ImageAnalysis query, Set<Long> candidates, By by) {
     List<Hit> hits = new ArrayList<>();
     for (long id : candidates) {
       Optional<ImageAnalysis> a = context.cache().get(id);
@@ -68,6 +95,6 @@ public final class SimilarityService {
       hits.add(new Hit(id, a.get().path(), Math.max(0, d)));
     }
     hits.sort(Comparator.comparingDouble(Hit::distance).thenComparingLong(Hit::id));
-    return hits.size() > k ? List.copyOf(hits.subList(0, k)) : hits;
+    return hits;
   }
 }
