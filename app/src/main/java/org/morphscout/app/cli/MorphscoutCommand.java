@@ -38,6 +38,7 @@ import picocli.CommandLine.Spec;
       WalkCommand.class,
       PreviewCommand.class,
       ModelsCommand.class,
+      BenchCommand.class,
       //TODO BrowseCommand.class,
     })
 public final class MorphscoutCommand implements Callable<Integer> {
