@@ -1,5 +1,6 @@
 package org.morphscout.app.cli;
 
+import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
@@ -89,8 +90,13 @@ final class BenchCommand implements Callable<Integer> {
     List<Integer> sizes = vectorSizes != null ? vectorSizes : quick ? List.of(10_000, 100_000)
         : List.of(10_000, 100_000, 1_000_000);
     Path base = work != null ? work : Path.of(System.getProperty("java.io.tmpdir"), "morphscout-bench");
-    Path photoDir = PhotoCache.ensure(base.resolve("photos-3000x2000-q90-" + photoCount), photoCount, err);
+    Path cache = PhotoCache.ensure(base.resolve("photos-3000x2000-q90"), photoCount, err);
     Path scratch = Files.createTempDirectory(Files.createDirectories(base), "run-");
+    Path photoDir = Files.createDirectories(scratch.resolve("photos"));
+    for (int i = 0; i < photoCount; i++) { // links to the first photoCount cached photos: the folder to index
+      Path cached = PhotoCache.file(cache, i);
+      Files.createLink(photoDir.resolve(cached.getFileName()), cached);
+    }
     String loadBefore = MachineInfo.currentLoadAverage();
     long start = System.nanoTime();
     Report r = new Report();
@@ -98,7 +104,11 @@ final class BenchCommand implements Callable<Integer> {
       r.header(MachineInfo.current(), quick, photoCount);
       status("indexing " + photoCount + " photos");
       IndexingBenchmark.Result indexing = IndexingBenchmark.run(photoDir, scratch.resolve("indexing"));
-      r.indexing(indexing);
+      long photoBytes = 0;
+      for (int i = 0; i < photoCount; i++) {
+        photoBytes += Files.size(PhotoCache.file(cache, i));
+      }
+      r.indexing(indexing, photoBytes / photoCount);
       status("features");
       List<Path> files;
       try (Stream<Path> s = Files.list(photoDir)) {
@@ -162,6 +172,10 @@ final class BenchCommand implements Callable<Integer> {
   static final class PhotoCache {
     static final int WIDTH = 3000;
     static final int HEIGHT = 2000;
+    /** Distinct rendered scenes; larger photo sets reuse them as variants. */
+    static final int SCENES = 60;
+    /** Sensor-like noise, 8-bit levels (a clean base-ISO camera file shows about 1.5-3). */
+    static final double NOISE_SD = 2.5;
 
     private PhotoCache() {}
 
@@ -186,12 +200,27 @@ final class BenchCommand implements Callable<Integer> {
         return t;
       });
       try {
+        // Rendering a 3000x2000 scene costs seconds, so each scene is rendered once and saved in up to
+        // VARIANTS_PER_SCENE variants (mirrored or not, its own sensor noise): distinct files, as in a real shoot.
         List<Future<?>> done = new ArrayList<>();
-        for (int i : missing) {
+        for (int scene = 0; scene < Math.min(count, SCENES); scene++) {
+          List<Integer> todo = new ArrayList<>();
+          for (int i = scene; i < count; i += SCENES) {
+            if (missing.contains(i)) {
+              todo.add(i);
+            }
+          }
+          if (todo.isEmpty()) {
+            continue;
+          }
+          int sceneId = scene;
           done.add(pool.submit(() -> {
-            Path tmp = dir.resolve("photo-" + i + ".tmp");
-            Files.write(tmp, ImageCodec.jpeg(renderer.render(shot(i)).image(), 0.9f));
-            Files.move(tmp, file(dir, i));
+            BufferedImage image = renderer.render(shot(sceneId)).image();
+            for (int i : todo) {
+              Path tmp = dir.resolve("photo-" + i + ".tmp");
+              Files.write(tmp, ImageCodec.jpeg(variant(image, i, (i / SCENES) % 2 == 1), 0.9f));
+              Files.move(tmp, file(dir, i));
+            }
             return null;
           }));
         }
@@ -204,7 +233,38 @@ final class BenchCommand implements Callable<Integer> {
       return dir;
     }
 
-    private static Path file(Path dir, int i) {
+    /**
+     * Photo {@code i} from its scene: Gaussian sensor-like noise (sd {@value #NOISE_SD} levels, independent per
+     * channel), mirrored when asked. The noise makes the files as large and as costly to decode as camera JPEGs of
+     * the same size (a noiseless rendering compresses several times better than any photo).
+     */
+    static BufferedImage variant(BufferedImage src, int i, boolean mirror) {
+      int w = src.getWidth();
+      int h = src.getHeight();
+      BufferedImage out = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+      SplittableRandom rnd = new SplittableRandom(SEED ^ (31L * i + 17));
+      int[] row = new int[w];
+      for (int y = 0; y < h; y++) {
+        src.getRGB(0, y, w, 1, row, 0, w);
+        for (int x = 0; x < w; x++) {
+          int p = row[mirror ? w - 1 - x : x];
+          int r = noisy((p >> 16) & 0xFF, rnd);
+          int g = noisy((p >> 8) & 0xFF, rnd);
+          int b = noisy(p & 0xFF, rnd);
+          row[x] = (r << 16) | (g << 8) | b;
+        }
+        out.setRGB(0, y, w, 1, row, 0, w);
+      }
+      return out;
+    }
+
+    private static int noisy(int v, SplittableRandom rnd) {
+      // Sum of three uniforms approximates a Gaussian cheaply (variance 3/12 per unit range -> scale to the sd).
+      double n = (rnd.nextDouble() + rnd.nextDouble() + rnd.nextDouble() - 1.5) * 2 * NOISE_SD;
+      return Math.max(0, Math.min(255, (int) Math.round(v + n)));
+    }
+
+    static Path file(Path dir, int i) {
       return dir.resolve(String.format(Locale.ROOT, "photo-%04d.jpg", i));
     }
 
@@ -250,10 +310,10 @@ final class BenchCommand implements Callable<Integer> {
       line("");
     }
 
-    void indexing(IndexingBenchmark.Result r) {
+    void indexing(IndexingBenchmark.Result r, long meanFileBytes) {
       line("## Indexing");
       line("");
-      line(photosLine(r.images()));
+      line(photosLine(r.images()) + " Mean file size " + Text.bytes(meanFileBytes) + ".");
       line("");
       line("| threads | decode-only (floor) | full indexing | ratio (wall) | CPU s per image: decode-only / "
           + "indexing | ratio (CPU) | target >= 0.8x | peak heap |");
@@ -270,7 +330,8 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     private static String photosLine(int n) {
-      return n + " generated product photos, 3000x2000 JPEG quality 90 (vessel, glaze texture, backdrop, light). "
+      return n + " generated product photos, 3000x2000 JPEG quality 90 (vessel, glaze texture, backdrop, light, "
+          + "sensor-like noise of sd 2.5 levels; 60 rendered scenes, further photos are mirrored/re-noised variants). "
           + "Full indexing = scan, SHA-256, decode, silhouette, shape, colour, ONNX descriptor, thumbnail, catalog, "
           + "vector index, neighbour graph. Decode-only = the same decoder and options on the same threads.";
     }
