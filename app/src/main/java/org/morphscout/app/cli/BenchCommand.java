@@ -52,7 +52,8 @@ import picocli.CommandLine.Spec;
           + "and graphs (seeded), runs each benchmark and prints a Markdown report with the machine description and "
           + "the targets met or missed. Progress goes to stderr. Does not touch the catalog.",
       "The full run indexes 300 photos and searches up to 1,000,000 vectors; give the JVM room for it, for example "
-          + "MORPHSCOUT_JAVA_OPTS=-Xmx12g ./morphscout bench --out docs/BENCHMARKS.md. --quick takes a few minutes.",
+          + "MORPHSCOUT_JAVA_OPTS=-Xmx12g ./morphscout bench --out docs/BENCHMARKS.md. --quick takes ~13 minutes on 2 "
+          + "busy cores (plus ~5 minutes to render the photos the first time).",
     })
 final class BenchCommand implements Callable<Integer> {
   private static final long SEED = 20_261_201L;
@@ -60,7 +61,7 @@ final class BenchCommand implements Callable<Integer> {
 
   @Spec CommandSpec spec;
 
-  @Option(names = "--quick", description = "Smaller sizes (60 photos, 10k and 100k vectors): a few minutes.")
+  @Option(names = "--quick", description = "Smaller sizes (60 photos, 10k and 100k vectors, fewer chain queries).")
   boolean quick;
 
   @Option(names = "--out", paramLabel = "<file.md>", description = "Also write the report to this file.")
