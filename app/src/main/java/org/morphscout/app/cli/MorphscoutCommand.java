@@ -41,6 +41,7 @@ import picocli.CommandLine.Spec;
       PreviewCommand.class,
       ModelsCommand.class,
       BrowseCommand.class,
+      BenchCommand.class,
     })
 public final class MorphscoutCommand implements Callable<Integer> {
 

@@ -24,7 +24,7 @@ public final class IndexingChild {
     Path folder = Path.of(args[1]);
     // Small batches and commits, so that kills fall between, and inside, many catalog and index commits.
     IndexOptions options = new IndexOptions(Integer.parseInt(args[2]), 8, java.time.Duration.ofSeconds(60), false,
-        false, 6, Integer.parseInt(args[3]));
+        false, 6, Integer.parseInt(args[3]), false);
     ProgressListener phases = new ProgressListener() {
       private volatile boolean analysing;
 

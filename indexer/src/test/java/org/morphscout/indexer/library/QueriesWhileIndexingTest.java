@@ -59,7 +59,7 @@ class QueriesWhileIndexingTest {
 
   private IndexReport index(Library library, Path root, ProgressListener progress) throws IOException {
     return new LibraryIndexer(library, AnalysisSetup.defaults(),
-        new IndexOptions(2, 4, java.time.Duration.ofSeconds(30), false, false, 4, 8))
+        new IndexOptions(2, 4, java.time.Duration.ofSeconds(30), false, false, 4, 8, false))
         .index(List.of(root), progress, CancellationToken.none());
   }
 

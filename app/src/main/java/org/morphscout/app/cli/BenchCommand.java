@@ -1,0 +1,477 @@
+package org.morphscout.app.cli;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.ZoneOffset;
+import java.time.ZonedDateTime;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.SplittableRandom;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.stream.Stream;
+import org.morphscout.demo.Archetype;
+import org.morphscout.demo.Backdrop;
+import org.morphscout.demo.BackdropKind;
+import org.morphscout.demo.Glazes;
+import org.morphscout.demo.ImageCodec;
+import org.morphscout.demo.Lighting;
+import org.morphscout.demo.Placement;
+import org.morphscout.demo.Shot;
+import org.morphscout.demo.VesselRenderer;
+import org.morphscout.indexer.bench.CatalogVolumes;
+import org.morphscout.indexer.bench.ChainBenchmark;
+import org.morphscout.indexer.bench.FeatureBenchmark;
+import org.morphscout.indexer.bench.HeapMeter;
+import org.morphscout.indexer.bench.IndexingBenchmark;
+import org.morphscout.indexer.bench.MachineInfo;
+import org.morphscout.indexer.bench.PairBenchmark;
+import org.morphscout.indexer.bench.VectorSearchBenchmark;
+import org.morphscout.indexer.bench.WalkBenchmark;
+import org.morphscout.indexer.vector.LuceneIndexOptions.Quantization;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code morphscout bench}: measures indexing, features, vector search, pairs, chains and walks; prints Markdown. */
+@Command(
+    name = "bench",
+    mixinStandardHelpOptions = true,
+    header = "Measure indexing, features, vector search, pairs, chains and walks on this machine (Markdown report).",
+    description = {
+      "Generates realistic test photos (3000x2000 JPEG, quality 90, cached in the work folder) and synthetic vectors "
+          + "and graphs (seeded), runs each benchmark and prints a Markdown report with the machine description and "
+          + "the targets met or missed. Progress goes to stderr. Does not touch the catalog.",
+      "The full run indexes 300 photos and searches up to 1,000,000 vectors; give the JVM room for it, for example "
+          + "MORPHSCOUT_JAVA_OPTS=-Xmx12g ./morphscout bench --out docs/BENCHMARKS.md. --quick takes ~13 minutes on 2 "
+          + "busy cores (plus ~5 minutes to render the photos the first time).",
+    })
+final class BenchCommand implements Callable<Integer> {
+  private static final long SEED = 20_261_201L;
+  private static final int DIMENSION = 560; // the built-in appearance descriptor
+
+  @Spec CommandSpec spec;
+
+  @Option(names = "--quick", description = "Smaller sizes (60 photos, 10k and 100k vectors, fewer chain queries).")
+  boolean quick;
+
+  @Option(names = "--out", paramLabel = "<file.md>", description = "Also write the report to this file.")
+  Path out;
+
+  @Option(names = "--work", paramLabel = "<folder>", description = "Scratch folder (default: a folder in the system "
+      + "temp folder); generated photos are cached there between runs.")
+  Path work;
+
+  @Option(names = "--photos", paramLabel = "<n>", description = "Photos to index (default 300, quick 60).")
+  Integer photos;
+
+  @Option(names = "--vectors", paramLabel = "<n>", split = ",", description = "Vector counts to search (default "
+      + "10000,100000,1000000; quick 10000,100000).")
+  List<Integer> vectorSizes;
+
+  @Option(names = "--catalog-volumes", paramLabel = "<catalog>", description = "Also report the per-image data "
+      + "volumes of this catalog folder (for example a demo catalog).")
+  Path volumesCatalog;
+
+  private PrintWriter err;
+
+  @Override
+  public Integer call() throws Exception {
+    err = spec.commandLine().getErr();
+    int photoCount = photos != null ? photos : quick ? 60 : 300;
+    List<Integer> sizes = vectorSizes != null ? vectorSizes : quick ? List.of(10_000, 100_000)
+        : List.of(10_000, 100_000, 1_000_000);
+    Path base = work != null ? work : Path.of(System.getProperty("java.io.tmpdir"), "morphscout-bench");
+    Path cache = PhotoCache.ensure(base.resolve("photos-3000x2000-q90"), photoCount, err);
+    Path scratch = Files.createTempDirectory(Files.createDirectories(base), "run-");
+    Path photoDir = Files.createDirectories(scratch.resolve("photos"));
+    for (int i = 0; i < photoCount; i++) { // links to the first photoCount cached photos: the folder to index
+      Path cached = PhotoCache.file(cache, i);
+      Files.createLink(photoDir.resolve(cached.getFileName()), cached);
+    }
+    String loadBefore = MachineInfo.currentLoadAverage();
+    long start = System.nanoTime();
+    Report r = new Report();
+    try {
+      r.header(MachineInfo.current(), quick, photoCount);
+      status("indexing " + photoCount + " photos");
+      IndexingBenchmark.Result indexing = IndexingBenchmark.run(photoDir, scratch.resolve("indexing"));
+      long photoBytes = 0;
+      for (int i = 0; i < photoCount; i++) {
+        photoBytes += Files.size(PhotoCache.file(cache, i));
+      }
+      r.indexing(indexing, photoBytes / photoCount);
+      status("features");
+      List<Path> files;
+      try (Stream<Path> s = Files.list(photoDir)) {
+        files = s.sorted().limit(quick ? 60 : 120).toList();
+      }
+      FeatureBenchmark.Result features = FeatureBenchmark.run(files, scratch.resolve("models"));
+      r.features(features);
+      List<VectorSearchBenchmark.Result> vectors = new ArrayList<>();
+      for (int n : sizes) {
+        for (Quantization q : Quantization.values()) {
+          status("vector search, " + n + " vectors, " + q);
+          vectors.add(VectorSearchBenchmark.run(new VectorSearchBenchmark.Config(n, DIMENSION, q,
+              n >= 1_000_000 ? 100 : 200, 10, SEED), scratch.resolve("vectors-" + n + "-" + q)));
+          deleteTree(scratch.resolve("vectors-" + n + "-" + q));
+        }
+      }
+      r.vectors(vectors);
+      status("pairs");
+      r.pairs(PairBenchmark.run(features.analyses(), 100));
+      features = null; // the analyses hold masks and images' statistics; free them for the heap figures below
+      status("chains, 100,000-image graph");
+      r.chains(ChainBenchmark.run(100_000, 24, quick ? 30 : 100, SEED));
+      status("walk of 1,000 images");
+      r.walk(WalkBenchmark.run(1000, quick ? 3 : 5, SEED));
+      r.memory(indexing, vectors);
+      r.volumes("the benchmark's own catalog (" + photoCount + " photos of 3000x2000)",
+          CatalogVolumes.measure(scratch.resolve("indexing").resolve("catalog")));
+      if (volumesCatalog != null) {
+        r.volumes(volumesCatalog.toString(), CatalogVolumes.measure(volumesCatalog));
+      }
+      r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
+    } finally {
+      deleteTree(scratch);
+    }
+    String text = r.toString();
+    spec.commandLine().getOut().print(text);
+    spec.commandLine().getOut().flush();
+    if (out != null) {
+      Files.writeString(out, text);
+    }
+    return ExitCodes.OK;
+  }
+
+  private void status(String what) {
+    err.printf("bench: %s (load %s)%n", what, MachineInfo.currentLoadAverage());
+    err.flush();
+  }
+
+  private static void deleteTree(Path dir) throws IOException {
+    if (!Files.exists(dir)) {
+      return;
+    }
+    try (Stream<Path> walk = Files.walk(dir)) {
+      for (Path p : walk.sorted(Comparator.reverseOrder()).toList()) {
+        Files.deleteIfExists(p);
+      }
+    }
+  }
+
+  /** Renders demo-style product photos at 3000x2000 and caches them as quality-90 JPEGs. */
+  static final class PhotoCache {
+    static final int WIDTH = 3000;
+    static final int HEIGHT = 2000;
+    /** Distinct rendered scenes; larger photo sets reuse them as variants. */
+    static final int SCENES = 60;
+    /** Sensor-like noise, 8-bit levels (a clean base-ISO camera file shows about 1.5-3). */
+    static final double NOISE_SD = 2.5;
+
+    private PhotoCache() {}
+
+    static Path ensure(Path dir, int count, PrintWriter err) throws Exception {
+      Files.createDirectories(dir);
+      List<Integer> missing = new ArrayList<>();
+      for (int i = 0; i < count; i++) {
+        if (!Files.isRegularFile(file(dir, i))) {
+          missing.add(i);
+        }
+      }
+      if (missing.isEmpty()) {
+        return dir;
+      }
+      err.printf("bench: rendering %d photos of %dx%d into %s (cached for later runs)%n", missing.size(), WIDTH,
+          HEIGHT, dir);
+      err.flush();
+      VesselRenderer renderer = new VesselRenderer();
+      ExecutorService pool = Executors.newFixedThreadPool(Runtime.getRuntime().availableProcessors(), r -> {
+        Thread t = new Thread(r, "morphscout-bench-render");
+        t.setDaemon(true);
+        return t;
+      });
+      try {
+        // Rendering a 3000x2000 scene costs seconds, so each scene is rendered once and saved in up to
+        // VARIANTS_PER_SCENE variants (mirrored or not, its own sensor noise): distinct files, as in a real shoot.
+        List<Future<?>> done = new ArrayList<>();
+        for (int scene = 0; scene < Math.min(count, SCENES); scene++) {
+          List<Integer> todo = new ArrayList<>();
+          for (int i = scene; i < count; i += SCENES) {
+            if (missing.contains(i)) {
+              todo.add(i);
+            }
+          }
+          if (todo.isEmpty()) {
+            continue;
+          }
+          int sceneId = scene;
+          done.add(pool.submit(() -> {
+            BufferedImage image = renderer.render(shot(sceneId)).image();
+            for (int i : todo) {
+              Path tmp = dir.resolve("photo-" + i + ".tmp");
+              Files.write(tmp, ImageCodec.jpeg(variant(image, i, (i / SCENES) % 2 == 1), 0.9f));
+              Files.move(tmp, file(dir, i));
+            }
+            return null;
+          }));
+        }
+        for (Future<?> f : done) {
+          f.get();
+        }
+      } finally {
+        pool.shutdownNow();
+      }
+      return dir;
+    }
+
+    /**
+     * Photo {@code i} from its scene: Gaussian sensor-like noise (sd {@value #NOISE_SD} levels, independent per
+     * channel), mirrored when asked. The noise makes the files as large and as costly to decode as camera JPEGs of
+     * the same size (a noiseless rendering compresses several times better than any photo).
+     */
+    static BufferedImage variant(BufferedImage src, int i, boolean mirror) {
+      int w = src.getWidth();
+      int h = src.getHeight();
+      BufferedImage out = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
+      SplittableRandom rnd = new SplittableRandom(SEED ^ (31L * i + 17));
+      int[] row = new int[w];
+      for (int y = 0; y < h; y++) {
+        src.getRGB(0, y, w, 1, row, 0, w);
+        for (int x = 0; x < w; x++) {
+          int p = row[mirror ? w - 1 - x : x];
+          int r = noisy((p >> 16) & 0xFF, rnd);
+          int g = noisy((p >> 8) & 0xFF, rnd);
+          int b = noisy(p & 0xFF, rnd);
+          row[x] = (r << 16) | (g << 8) | b;
+        }
+        out.setRGB(0, y, w, 1, row, 0, w);
+      }
+      return out;
+    }
+
+    private static int noisy(int v, SplittableRandom rnd) {
+      // Sum of three uniforms approximates a Gaussian cheaply (variance 3/12 per unit range -> scale to the sd).
+      double n = (rnd.nextDouble() + rnd.nextDouble() + rnd.nextDouble() - 1.5) * 2 * NOISE_SD;
+      return Math.max(0, Math.min(255, (int) Math.round(v + n)));
+    }
+
+    static Path file(Path dir, int i) {
+      return dir.resolve(String.format(Locale.ROOT, "photo-%04d.jpg", i));
+    }
+
+    /** Photo {@code i}: a random vessel, glaze, backdrop and light, like the demo library's product shots. */
+    static Shot shot(int i) {
+      SplittableRandom rnd = new SplittableRandom(SEED + 7919L * i);
+      Archetype[] all = Archetype.values();
+      BackdropKind[] kinds = {BackdropKind.STUDIO_SWEEP, BackdropKind.GRADIENT, BackdropKind.LINEN,
+          BackdropKind.WOOD_TABLE};
+      int a = 0xD0D0D0 + rnd.nextInt(0x202020);
+      Backdrop backdrop = new Backdrop(kinds[rnd.nextInt(kinds.length)], a, a - 0x181818, 0.55 + 0.1
+          * rnd.nextDouble(), rnd.nextLong());
+      double side = rnd.nextBoolean() ? -1 : 1;
+      Lighting light = new Lighting(side * (25 + 35 * rnd.nextDouble()), 20 + 30 * rnd.nextDouble(),
+          0.85 + 0.3 * rnd.nextDouble(), 0.22 + 0.16 * rnd.nextDouble(), -0.4 + 0.9 * rnd.nextDouble(), 1.0);
+      double tilt = 0.10 + 0.12 * rnd.nextDouble();
+      Placement p = Placement.fitted(all[rnd.nextInt(all.length)].profile().varied(rnd.nextLong(), 0.08),
+          Glazes.pick(rnd), WIDTH, HEIGHT, 0.55 + 0.25 * rnd.nextDouble(), tilt, 0.15 * (rnd.nextDouble() - 0.5));
+      return new Shot(WIDTH, HEIGHT, backdrop, light, tilt, List.of(p));
+    }
+  }
+
+  /** The Markdown report. */
+  static final class Report {
+    private final StringBuilder md = new StringBuilder();
+
+    void header(MachineInfo m, boolean quick, int photos) {
+      line("# Morphscout benchmarks");
+      line("");
+      line("Run " + ZonedDateTime.now(ZoneOffset.UTC).format(DateTimeFormatter.ISO_OFFSET_DATE_TIME) + " with `"
+          + (quick ? "./morphscout bench --quick" : "./morphscout bench") + "`" + (quick ? " (quick sizes)" : "")
+          + ".");
+      line("");
+      line("| machine | |");
+      line("|---|---|");
+      line("| CPU | " + m.cpuModel() + " |");
+      line("| cores (available to the JVM) | " + m.cores() + " |");
+      line("| JDK | " + m.jdk() + " |");
+      line("| max heap | " + Text.bytes(m.maxHeapBytes()) + " |");
+      line("| jdk.incubator.vector | " + (m.vectorModule() ? "on" : "off") + " |");
+      line("| OS | " + m.os() + " |");
+      line("| load average at start (1/5/15 min) | " + m.loadAverage() + " |");
+      line("");
+    }
+
+    void indexing(IndexingBenchmark.Result r, long meanFileBytes) {
+      line("## Indexing");
+      line("");
+      line(photosLine(r.images()) + " Mean file size " + Text.bytes(meanFileBytes) + ".");
+      line("");
+      line("| threads | decode-only (floor) | full indexing | ratio (wall) | CPU s per image: decode-only / "
+          + "indexing | ratio (CPU) | target >= 0.8x | peak heap |");
+      line("|---|---|---|---|---|---|---|---|");
+      line("| " + r.threads() + " | " + f(r.decodeOnlyPerSecond(), 2) + " images/s | " + f(r.indexPerSecond(), 2)
+          + " images/s | " + f(r.ratio(), 2) + "x | " + f(r.decodeCpuSecondsPerImage(), 3) + " / "
+          + f(r.indexCpuSecondsPerImage(), 3) + " | " + f(r.cpuRatio(), 2) + "x | " + met(r.ratio() >= 0.8)
+          + " | " + Text.bytes(r.peakHeapBytes()) + " |");
+      if (r.failures() > 0) {
+        line("");
+        line("**" + r.failures() + " photos failed to index.**");
+      }
+      line("");
+    }
+
+    private static String photosLine(int n) {
+      return n + " generated product photos, 3000x2000 JPEG quality 90 (vessel, glaze texture, backdrop, light, "
+          + "sensor-like noise of sd 2.5 levels; 60 rendered scenes, further photos are mirrored/re-noised variants). "
+          + "Full indexing = scan, SHA-256, decode, silhouette, shape, colour, ONNX descriptor, thumbnail, catalog, "
+          + "vector index, neighbour graph. Decode-only = the same decoder and options on the same threads.";
+    }
+
+    void features(FeatureBenchmark.Result r) {
+      line("## Features (CPU ms per image, one thread, " + r.images() + " photos)");
+      line("");
+      line("| decode to analysis size | silhouette | shape descriptors | colour statistics | ONNX descriptor "
+          + "(batches of 16) |");
+      line("|---|---|---|---|---|");
+      line("| " + f(r.decodeMs(), 1) + " | " + f(r.silhouetteMs(), 1) + " | " + f(r.shapeMs(), 1) + " | "
+          + f(r.colourMs(), 1) + " | " + f(r.descriptorMs(), 1) + " |");
+      line("");
+    }
+
+    void vectors(List<VectorSearchBenchmark.Result> rs) {
+      line("## Vector search (k = 10, " + DIMENSION + "-d synthetic embedding-like vectors)");
+      line("");
+      line("LuceneVectorIndex.search (HNSW M 16, beam 100, 200 candidates rescored exactly) against an exact scan "
+          + "(SIMD dot products over all vectors, one thread). Heap = index open read-only after warm-up.");
+      line("");
+      line("| vectors | HNSW vectors | build | kNN p50 | kNN p99 | kNN CPU p50 | recall@10 | scan p50 | speed-up | "
+          + "index heap | index on disk |");
+      line("|---|---|---|---|---|---|---|---|---|---|---|");
+      for (VectorSearchBenchmark.Result r : rs) {
+        line("| " + r.config().size() + " | " + (r.config().quantization() == Quantization.INT8 ? "int8" : "float")
+            + " | " + f(r.buildSeconds(), 1) + " s | " + f(r.knn().p50Ms(), 2) + " ms | " + f(r.knn().p99Ms(), 2)
+            + " ms | " + f(r.knnCpu().p50Ms(), 2) + " ms | " + f(r.recall(), 3) + " | " + f(r.scan().p50Ms(), 2)
+            + " ms | " + f(r.speedUp(), 1) + "x | "
+            + Text.bytes(r.heapBytes()) + " | " + Text.bytes(r.diskBytes()) + " |");
+      }
+      line("");
+      for (VectorSearchBenchmark.Result r : rs) {
+        if (r.config().size() == 100_000) {
+          line("- Target at 100k (" + r.config().quantization() + "): p50 <= 2 ms " + met(r.knn().p50Ms() <= 2)
+              + " (CPU p50 " + f(r.knnCpu().p50Ms(), 2) + " ms)"
+              + ", recall@10 >= 0.97 " + met(r.recall() >= 0.97) + ", >= 20x the scan " + met(r.speedUp() >= 20)
+              + ".");
+        }
+      }
+      line("");
+    }
+
+    void pairs(PairBenchmark.Result r) {
+      line("## Pairs");
+      line("");
+      line("| exact pair score (with warp), one thread: p50 | p99 | CPU p50 | discovery measured | projected at "
+          + "10,000 images |");
+      line("|---|---|---|---|---|");
+      line("| " + f(r.pairMs().p50Ms(), 1) + " ms (mean " + f(r.pairMs().meanMs(), 1) + ") | "
+          + f(r.pairMs().p99Ms(), 1) + " ms | " + f(r.pairCpuMs().p50Ms(), 1) + " ms | " + r.discoveryImages()
+          + " images, " + r.pairsScored()
+          + " candidate pairs, " + f(r.discoverySeconds(), 1) + " s on " + r.threads() + " threads | "
+          + f(r.projectedSeconds(10_000) / 60, 1) + " min (linear: fixed candidates per image) |");
+      line("");
+    }
+
+    void chains(ChainBenchmark.Result r) {
+      line("## Chains");
+      line("");
+      line("| graph | build | chain query p50 | p99 | CPU p50 | found | target |");
+      line("|---|---|---|---|---|---|---|");
+      line("| " + r.nodes() + " images, " + r.edges() + " steps (24 nearest each, 2-d layout) | "
+          + f(r.buildSeconds(), 1) + " s | " + f(r.query().p50Ms(), 1) + " ms | " + f(r.query().p99Ms(), 1)
+          + " ms | " + f(r.queryCpu().p50Ms(), 1) + " ms | " + r.found() + "/" + r.query().count()
+          + " | p50 <= 100 ms: " + met(r.query().p50Ms() <= 100)
+          + " |");
+      line("");
+    }
+
+    void walk(WalkBenchmark.Result r) {
+      line("## Walk");
+      line("");
+      line("Walk of " + r.items() + " images (nearest-neighbour starts + 2-opt + Or-opt): p50 "
+          + f(r.plan().p50Ms(), 0) + " ms (CPU " + f(r.planCpu().p50Ms(), 0) + " ms), worst "
+          + f(r.plan().p99Ms(), 0) + " ms over " + r.plan().count() + " runs.");
+      line("");
+    }
+
+    void memory(IndexingBenchmark.Result indexing, List<VectorSearchBenchmark.Result> vectors) {
+      line("## Memory");
+      line("");
+      line("- Peak heap while indexing " + indexing.images() + " photos on " + indexing.threads() + " threads: "
+          + Text.bytes(indexing.peakHeapBytes()) + " (sum of heap pools' peaks; bounded by threads x batch, not "
+          + "by library size).");
+      for (VectorSearchBenchmark.Result r : vectors) {
+        if (r.config().quantization() == Quantization.INT8) {
+          long perMillion = r.heapBytes() * (1_000_000L / r.config().size());
+          line("- int8 index of " + r.config().size() + " vectors: " + Text.bytes(r.heapBytes()) + " heap"
+              + (r.config().size() < 1_000_000 ? " (linear projection to 1M: " + Text.bytes(perMillion) + ")" : "")
+              + "; target 1M within 2 GB: " + met(perMillion <= 2L << 30)
+              + (r.config().size() < 1_000_000 ? " (projected)" : "") + ".");
+        }
+      }
+      line("- Browser library view at 100,000 images: not measured (the JavaFX browser is not on this branch; "
+          + "see docs/BENCHMARKS.md).");
+      line("- Heap in use now: " + Text.bytes(HeapMeter.usedAfterGc()) + ".");
+      line("");
+    }
+
+    void volumes(String what, CatalogVolumes v) {
+      line("## Catalog data volumes: " + what);
+      line("");
+      line("| per image | bytes |");
+      line("|---|---|");
+      line("| appearance vector | " + f(v.appearanceBytes(), 0) + " |");
+      line("| shape vector | " + f(v.shapeBytes(), 0) + " |");
+      line("| packed silhouette mask (mean " + f(v.maskPixels(), 0) + " px) | " + f(v.maskBytes(), 0) + " |");
+      line("| shape descriptors (JSON) | " + f(v.descriptorBytes(), 0) + " |");
+      line("| colour statistics (JSON) | " + f(v.colourBytes(), 0) + " |");
+      line("| neighbour rows | " + f(v.neighbourRowsPerImage(), 1) + " rows |");
+      line("| catalog.db total | " + f(v.databaseBytesPerImage(), 0) + " |");
+      line("| thumbnails | " + f(v.thumbnailBytesPerImage(), 0) + " |");
+      line("| vector index | " + f(v.vectorIndexBytesPerImage(), 0) + " |");
+      line("");
+      line(v.images() + " images measured.");
+      line("");
+    }
+
+    void footer(String loadBefore, String loadAfter, double minutes) {
+      line("Load average (1/5/15 min) before " + loadBefore + ", after " + loadAfter + "; run took "
+          + f(minutes, 1) + " min.");
+    }
+
+    private void line(String s) {
+      md.append(s).append('\n');
+    }
+
+    private static String f(double v, int decimals) {
+      return Text.num(v, decimals);
+    }
+
+    private static String met(boolean ok) {
+      return ok ? "met" : "**missed**";
+    }
+
+    @Override
+    public String toString() {
+      return md.toString();
+    }
+  }
+}
