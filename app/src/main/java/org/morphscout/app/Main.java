@@ -6,6 +6,10 @@ import org.morphscout.app.cli.MorphscoutCommand;
 
 /** Entry point of the {@code morphscout} command. */
 public final class Main {
+  /** Held so the setting is not lost when the logging framework lets go of an unreferenced logger. */
+  private static final java.util.logging.Logger LUCENE_VECTORS =
+      java.util.logging.Logger.getLogger("org.apache.lucene.internal.vectorization");
+
   private Main() {}
 
   public static void main(String[] args) {
@@ -32,6 +36,8 @@ public final class Main {
         level = "info";
       }
     }
+    // Lucene reports through java.util.logging that SIMD is on, at every start; that is a diagnostic (-v).
+    LUCENE_VECTORS.setLevel(level.equals("warn") ? java.util.logging.Level.WARNING : java.util.logging.Level.INFO);
     if (System.getProperty("org.slf4j.simpleLogger.defaultLogLevel") == null) {
       System.setProperty("org.slf4j.simpleLogger.defaultLogLevel", level);
     }
