@@ -15,8 +15,9 @@ package org.morphscout.indexer.pairing;
  * @param maxBackgroundStdGap largest difference of the background's L* standard deviation (default 1.5): the
  *     backdrop's texture survives resizing and light edits but differs between shots
  * @param maxObjectAspectGap largest relative difference of the objects' bounding-box aspect ratios, in [0, 1]
- *     (default 0.03): resizing, recompressing and cropping around the object keep it, while two similar objects
- *     (one vessel a little slimmer than the other) differ in it
+ *     (default 0.03, plus 4 pixels' worth of the smaller object's bounding box, since a small copy's outline is
+ *     measured on fewer pixels): resizing, recompressing and cropping around the object keep it, while two similar
+ *     objects (one vessel a little slimmer than the other) differ in it
  */
 public record NearDuplicateConfig(double minCosine, double maxShapeDistance, double maxDeltaE, double maxAspectGap,
     double maxBackgroundDeltaE, double maxBackgroundStdGap, double maxObjectAspectGap) {

@@ -42,7 +42,12 @@ public final class NearDuplicates {
     }
     double oa = a.shape().aspect();
     double ob = b.shape().aspect();
-    if (!(oa > 0 && ob > 0) || Math.abs(oa / ob - 1) > config.maxObjectAspectGap()) {
+    // A small copy's outline is measured on fewer pixels: allow about 4 pixels of bounding-box error on top.
+    double objectPixels = Math.min(
+        Math.min(a.shape().bboxW() * a.width(), a.shape().bboxH() * a.height()),
+        Math.min(b.shape().bboxW() * b.width(), b.shape().bboxH() * b.height()));
+    double tolerance = config.maxObjectAspectGap() + (objectPixels > 0 ? 4.0 / objectPixels : 1);
+    if (!(oa > 0 && ob > 0) || Math.abs(oa / ob - 1) > tolerance) {
       return false;
     }
     double ra = a.width() / (double) a.height();
