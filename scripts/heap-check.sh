@@ -15,7 +15,8 @@
 # Measured 2026-12-01 on 2 shared cores (load 10-16), JDK 25, N=300 (3000x2000, 189 MB), default 2 threads:
 #   -Xmx512m PASS, peak RSS 749 MB, 632 s;  -Xmx384m PASS, peak RSS 625 MB, 346 s
 # (RSS counts the heap plus ONNX Runtime's native memory, metaspace and code.) N=2000 was not run for lack of time;
-# what grows with N is small (about 6 KB of cached analysis per image while the neighbour graph is updated).
+# what grows with N is the indexer's analysis cache during the neighbour-graph update, about 15-20 KB per image
+# (a 128 px byte-per-pixel mask plus vectors): some 40 MB at N=2000, but up to ~1 GB at its 50,000-entry cap.
 set -euo pipefail
 
 here="$(cd "$(dirname "$(readlink -f "${BASH_SOURCE[0]}")")/.." && pwd)"
