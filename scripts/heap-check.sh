@@ -3,8 +3,9 @@
 #
 # Generates N invented 3000x2000 JPEGs (scripts/LargeJpegs.java: 200 distinct pictures, each file made unique by bytes
 # after its end-of-image marker; cached in the work folder, so a second run skips this), then indexes them into a
-# fresh catalog once per heap size with `./morphscout index`, the heap given through MORPHSCOUT_JAVA_OPTS (the launcher passes it to the JVM). A heap size passes when the run exits 0 and every image
-# is indexed (no "not enough memory" failure, no OutOfMemoryError). Reports the peak resident set size (RSS) of the
+# fresh catalog once per heap size with `./morphscout index`, the heap given through MORPHSCOUT_JAVA_OPTS (the
+# launcher passes it to the JVM). A heap size passes when the run exits 0 and every image is indexed (no "not enough
+# memory" failure, no OutOfMemoryError). Reports the peak resident set size (RSS) of the
 # JVM: from /usr/bin/time -v when installed, else from VmHWM in /proc/<pid>/status sampled once a second.
 #
 # Usage: scripts/heap-check.sh [N=2000] [heap sizes=512m 768m 1g]
