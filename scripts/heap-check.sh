@@ -2,20 +2,23 @@
 # Heap check: does indexing a folder of large photographs stay inside a given Java heap?
 #
 # Generates N invented 3000x2000 JPEGs (scripts/LargeJpegs.java: 200 distinct pictures, each file made unique by bytes
-# after its end-of-image marker; cached in the work folder, so a second run skips this), then indexes them into a fresh catalog once per heap size with `./morphscout index`, the heap given through
-# MORPHSCOUT_JAVA_OPTS (the launcher passes it to the JVM). A heap size passes when the run exits 0 and every image
-# is indexed (no "not enough memory" failure, no OutOfMemoryError). Reports the peak resident set size (RSS) of the
+# after its end-of-image marker; cached in the work folder, so a second run skips this), then indexes them into a
+# fresh catalog once per heap size with `./morphscout index`, the heap given through MORPHSCOUT_JAVA_OPTS (the
+# launcher passes it to the JVM). A heap size passes when the run exits 0 and every image is indexed (no "not enough
+# memory" failure, no OutOfMemoryError). Reports the peak resident set size (RSS) of the
 # JVM: from /usr/bin/time -v when installed, else from VmHWM in /proc/<pid>/status sampled once a second.
 #
 # Usage: scripts/heap-check.sh [N=2000] [heap sizes=512m 768m 1g]
-#   MORPHSCOUT_HEAP_WORK  work folder (default /tmp/morphscout-heap-check); images in images-WxH/, catalogs beside
+#   MORPHSCOUT_HEAP_WORK  work folder (default /tmp/morphscout-heap-check); images in pool-WxH/, catalogs beside
 #   MORPHSCOUT_HEAP_SIZE  image size, WxH (default 3000x2000)
 # Exit code: 0 when at least one heap size passed, 1 when none did.
 #
-# Measured 2026-12-01 on 2 shared cores (load 10-16), JDK 25, N=300 (3000x2000, 189 MB), default 2 threads:
-#   -Xmx512m PASS, peak RSS 749 MB, 632 s;  -Xmx384m PASS, peak RSS 625 MB, 346 s
-# (RSS counts the heap plus ONNX Runtime's native memory, metaspace and code.) N=2000 was not run for lack of time;
-# what grows with N is small (about 6 KB of cached analysis per image while the neighbour graph is updated).
+# Measured 2026-12-01 on 2 shared cores, JDK 25, 3000x2000 JPEGs, default 2 threads (peak RSS counts the heap plus
+# ONNX Runtime's native memory, metaspace and code):
+#   N=2000 (1.3 GB): -Xmx256m PASS, peak RSS 512 MB, 540 s
+#   N=300  (189 MB): -Xmx256m PASS, peak RSS 503 MB;  -Xmx384m PASS, 625 MB;  -Xmx512m PASS, 749 MB
+# What grows with N is the indexer's analysis cache during the neighbour-graph update, about 15-20 KB per image
+# (a 128 px byte-per-pixel mask plus vectors): some 40 MB at N=2000, but up to ~1 GB at its 50,000-entry cap.
 set -euo pipefail
 
 here="$(cd "$(dirname "$(readlink -f "${BASH_SOURCE[0]}")")/.." && pwd)"
