@@ -97,7 +97,7 @@ public final class LibraryIndexer {
         }
         index.commit();
         if (!cancelled) {
-          AnalysisCache cache = new AnalysisCache(library, 50_000);
+          AnalysisCache cache = new AnalysisCache(library, 10_000); // about 20 KB an image: at most ~200 MB
           List<Long> removed = new ArrayList<>(plan.nowMissing());
           for (IndexReport.FileFailure f : failures) {
             library.images().byPath(f.path()).ifPresent(r -> removed.add(r.id()));
