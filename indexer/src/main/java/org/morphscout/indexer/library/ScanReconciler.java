@@ -77,6 +77,13 @@ final class ScanReconciler {
         ImageRow row = images.byPath(path).orElse(null);
         if (row != null && row.status() != ImageStatus.MISSING && row.size() == f.size() && row.mtimeMs() == mtime
             && row.status() != ImageStatus.PENDING) {
+          if (row.status() == ImageStatus.FAILED && transientFailure(row.id())) {
+            // A time-out or a lack of memory says more about the machine than the file: try again.
+            long id = row.id();
+            writes.add(() -> images.setStatus(id, ImageStatus.PENDING));
+            pendingIds.add(id);
+            continue;
+          }
           unchanged++;
           continue;
         }
@@ -147,6 +154,11 @@ final class ScanReconciler {
       }
     }
     return new Plan(toAnalyse, unchanged, moved, nowMissing, changedReady);
+  }
+
+  private boolean transientFailure(long id) {
+    String reason = library.images().failureReason(id).orElse("");
+    return reason.startsWith("timed out") || reason.contains("took longer than") || reason.contains("not enough memory");
   }
 
   static String key(Path p) {

@@ -158,6 +158,21 @@ class LibraryIndexerTest {
   }
 
   @Test
+  void filesThatTimedOutAreTriedAgainButUnreadableOnesAreNot() throws IOException {
+    try (Library library = Library.open(catalogDir)) {
+      index(library);
+      ImageRow v4 = library.require(root.resolve("vessel-4.png").toString());
+      library.images().markFailed(v4.id(), "timed out: reading and analysing took more than 60 s");
+      IndexReport again = index(library);
+      assertThat(again.indexed()).isEqualTo(1);
+      assertThat(library.images().byId(v4.id())).get().extracting(ImageRow::status).isEqualTo(ImageStatus.READY);
+      // The truncated JPEG and the text file stay failed, are not analysed again, and are still reported.
+      assertThat(again.failures()).extracting(IndexReport.FileFailure::reason)
+          .containsExactlyInAnyOrder("truncated JPEG data", "not an image");
+    }
+  }
+
+  @Test
   void queriesBringAnIndexThatLostImagesInLineWithTheCatalog() throws IOException {
     try (Library library = Library.open(catalogDir)) {
       index(library);
