@@ -66,15 +66,15 @@ final class PairsCommand implements Callable<Integer> {
         QueryContext context = new QueryContext(library, analysis.setup())) {
       PairService service = new PairService(context, scoring.config());
       PairSearchResult result;
-      if (forImage != null) {
-        ImageAnalysis image = context.resolve(forImage);
+      ImageAnalysis image = forImage == null ? null : context.resolve(forImage);
+      if (image != null) {
         result = service.partners(image, query, TerminalProgress.forTerminal(format.json || format.csv),
             CancellationToken.none());
       } else {
         result = service.bestPairs(query, TerminalProgress.forTerminal(format.json || format.csv),
             CancellationToken.none());
       }
-      Paths paths = new Paths(context, forImage == null ? null : context.resolve(forImage).path());
+      Paths paths = new Paths(context, image == null ? null : image.path());
       if (duplicates) {
         printDuplicates(out, result, paths);
       } else {

@@ -106,6 +106,18 @@ public final class FeatureStore {
     });
   }
 
+  /** Whether an image has stored features (without reading them). */
+  public boolean has(long imageId) {
+    return catalog.read(c -> {
+      try (PreparedStatement s = c.prepareStatement("SELECT 1 FROM features WHERE image_id = ?")) {
+        s.setLong(1, imageId);
+        try (ResultSet rs = s.executeQuery()) {
+          return rs.next();
+        }
+      }
+    });
+  }
+
   /** The stored vectors of one image, when it has features. */
   public Optional<Vectors> vectorsOf(long imageId) {
     return catalog.read(c -> {

@@ -43,15 +43,20 @@ final class ScanReconciler {
     // Rows that were under a scanned root but are not there any more, or were missing already: move sources.
     Map<String, List<ImageRow>> vanishedByHash = new HashMap<>();
     List<ImageRow> vanished = new ArrayList<>();
+    // Every row under the scanned roots, by path: one query per root instead of one per file.
+    Map<String, ImageRow> known = new HashMap<>();
     for (long rootId : found.keySet()) {
       for (ImageRow row : images.underRoot(rootId)) {
+        known.put(row.path(), row);
         if (!foundPaths.contains(row.path())) {
           vanished.add(row);
         }
       }
     }
+    Set<Long> vanishedIds = new HashSet<>();
+    vanished.forEach(v -> vanishedIds.add(v.id()));
     for (ImageRow row : images.withStatus(ImageStatus.MISSING)) {
-      if (!foundPaths.contains(row.path()) && vanished.stream().noneMatch(v -> v.id() == row.id())) {
+      if (!foundPaths.contains(row.path()) && vanishedIds.add(row.id())) {
         vanished.add(row);
       }
     }
@@ -74,7 +79,8 @@ final class ScanReconciler {
       for (FoundFile f : e.getValue()) {
         String path = key(f.path());
         long mtime = f.mtime().toEpochMilli();
-        ImageRow row = images.byPath(path).orElse(null);
+        // A path under overlapping roots may be registered under another root: look it up then.
+        ImageRow row = known.containsKey(path) ? known.get(path) : images.byPath(path).orElse(null);
         if (row != null && row.status() != ImageStatus.MISSING && row.size() == f.size() && row.mtimeMs() == mtime
             && row.status() != ImageStatus.PENDING) {
           if (row.status() == ImageStatus.FAILED && transientFailure(row.id())) {
@@ -98,7 +104,7 @@ final class ScanReconciler {
           boolean same = hash.equals(row.contentHash()) && row.status() != ImageStatus.PENDING;
           ImageStatus status = same && row.status() != ImageStatus.MISSING ? row.status()
               : same ? ImageStatus.READY : ImageStatus.PENDING;
-          if (status == ImageStatus.READY && !library.features().load(row).isPresent()) {
+          if (status == ImageStatus.READY && !library.features().has(row.id())) {
             status = ImageStatus.PENDING;
           }
           ImageStatus next = status;
@@ -117,7 +123,7 @@ final class ScanReconciler {
         ImageRow source = sources.stream().filter(s -> !reused.contains(s.id())).findFirst().orElse(null);
         if (source != null) {
           reused.add(source.id());
-          boolean hasFeatures = library.features().load(source).isPresent();
+          boolean hasFeatures = library.features().has(source.id());
           ImageStatus next = hasFeatures ? ImageStatus.READY : ImageStatus.PENDING;
           writes.add(() -> images.updateFile(source.id(), rootId, path, f.size(), mtime, hash, next));
           if (next == ImageStatus.PENDING) {
