@@ -10,8 +10,6 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
 import org.morphscout.indexer.vector.LuceneIndexOptions.Quantization;
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
 
 /**
  * Recall@10 at an embedding-like length (560) with default options, on 3,000 seeded vectors near a 16-dimensional
@@ -20,8 +18,6 @@ import org.slf4j.LoggerFactory;
  * LuceneVectorIndexRecallBenchmark. Measured with the default seed: 1.000 for float and int8.
  */
 class LuceneVectorIndexHighDimensionRecallTest {
-  private static final Logger LOG = LoggerFactory.getLogger(LuceneVectorIndexHighDimensionRecallTest.class);
-
   @TempDir Path temp;
 
   @ParameterizedTest
@@ -31,18 +27,10 @@ class LuceneVectorIndexHighDimensionRecallTest {
     float[][] all = TestVectors.lowIntrinsicUnits(random, 3_100, 560, 16, 0.3);
     float[][] vectors = Arrays.copyOf(all, 3_000);
     float[][] queries = Arrays.copyOfRange(all, 3_000, 3_100);
-    BruteForceVectorIndex exact = new BruteForceVectorIndex();
-    RecallMeter.load(exact, vectors);
-    LuceneIndexOptions options = LuceneIndexOptions.defaults().withQuantization(quantization);
-    try (LuceneVectorIndex hnsw = LuceneVectorIndex.open(temp.resolve("vectors"), options)) {
-      long buildMs = RecallMeter.load(hnsw, vectors);
-      RecallMeter.Result result = RecallMeter.measure(hnsw, exact, vectors, queries, 10);
-      LOG.info("recall@10 {} ({}; 3000 x 560-d, intrinsic 16; build {} ms CPU, query {} ms CPU; seed {})",
-          String.format("%.3f", result.recall()), quantization, buildMs,
-          String.format("%.2f", result.meanQueryCpuMillis()), TestVectors.SEED);
-      assertThat(result.recall())
-          .as("recall@10, %s, seed=%d", quantization, TestVectors.SEED)
-          .isGreaterThanOrEqualTo(0.95);
-    }
+    RecallMeter.Result result = RecallMeter.hnswRecallAt10(temp.resolve("vectors"), quantization, vectors, queries,
+        "3000 x 560-d, intrinsic 16");
+    assertThat(result.recall())
+        .as("recall@10, %s, seed=%d", quantization, TestVectors.SEED)
+        .isGreaterThanOrEqualTo(0.95);
   }
 }

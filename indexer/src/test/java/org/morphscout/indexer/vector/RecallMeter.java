@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import java.io.IOException;
+import java.nio.file.Path;
 import java.lang.management.ManagementFactory;
 import java.lang.management.ThreadMXBean;
 import java.util.HashSet;
@@ -25,6 +26,25 @@ final class RecallMeter {
   private RecallMeter() {}
 
   /** Loads {@code vectors} (ids = indices) into the index as appearance vectors and commits; returns CPU ms spent. */
+  /**
+   * Builds an HNSW index of {@code vectors} in {@code dir} with {@code quantization}, measures recall@10 of
+   * {@code queries} against an exact scan, logs the figures under {@code label} and returns them.
+   */
+  static Result hnswRecallAt10(Path dir, LuceneIndexOptions.Quantization quantization, float[][] vectors,
+      float[][] queries, String label) throws IOException {
+    BruteForceVectorIndex exact = new BruteForceVectorIndex();
+    load(exact, vectors);
+    LuceneIndexOptions options = LuceneIndexOptions.defaults().withQuantization(quantization);
+    try (LuceneVectorIndex hnsw = LuceneVectorIndex.open(dir, options)) {
+      long buildMs = load(hnsw, vectors);
+      Result result = measure(hnsw, exact, vectors, queries, 10);
+      org.slf4j.LoggerFactory.getLogger(RecallMeter.class).info(
+          "recall@10 {} ({}; {}; build {} ms CPU, query {} ms CPU; seed {})", String.format("%.3f", result.recall()),
+          quantization, label, buildMs, String.format("%.2f", result.meanQueryCpuMillis()), TestVectors.SEED);
+      return result;
+    }
+  }
+
   static long load(VectorIndex index, float[][] vectors) throws IOException {
     long start = THREADS.getCurrentThreadCpuTime();
     for (int i = 0; i < vectors.length; i++) {
