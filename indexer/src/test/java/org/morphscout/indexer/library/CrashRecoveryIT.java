@@ -125,6 +125,10 @@ class CrashRecoveryIT {
         }
         System.out.printf("CrashRecoveryIT round %d: %s (%d ms after the last wait); %s%n", round,
             ended ? "ended" : "killed", delay, summary(catalog));
+        if (ended) {
+          // On a fast machine a run can finish all its work before the kill: give the next runs more to do.
+          changeSome(good, rnd);
+        }
       } finally {
         p.destroyForcibly();
       }
@@ -226,6 +230,18 @@ class CrashRecoveryIT {
         "-Dorg.slf4j.simpleLogger.defaultLogLevel=warn",
         "-cp", System.getProperty("java.class.path"), IndexingChild.class.getName(),
         catalog.toString(), root.toString(), "2", "16");
+  }
+
+  /**
+   * Changes 60 of the good files (one byte appended after the JPEG end marker, which decoders ignore), so the next run
+   * analyses them again; they stay good files.
+   */
+  private static void changeSome(List<String> good, SplittableRandom rnd) throws IOException {
+    List<String> jpegs = good.stream().filter(g -> g.endsWith(".jpg")).toList();
+    for (int i = 0; i < 60 && !jpegs.isEmpty(); i++) {
+      Path file = Path.of(jpegs.get(rnd.nextInt(jpegs.size())));
+      Files.write(file, new byte[] {0}, java.nio.file.StandardOpenOption.APPEND);
+    }
   }
 
   private static void awaitLine(Process p, Path catalog, String prefix, int seconds) throws Exception {
