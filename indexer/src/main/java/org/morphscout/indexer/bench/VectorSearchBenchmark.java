@@ -3,6 +3,7 @@ package org.morphscout.indexer.bench;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -27,33 +28,80 @@ public final class VectorSearchBenchmark {
    * @param size vectors indexed, at least 100
    * @param dimension vector dimension (560 = the built-in appearance descriptor)
    * @param quantization float or int8 HNSW vectors
-   * @param queries timed queries, at least 10 (plus as many untimed warm-up queries)
+   * @param queries timed queries, at least 10 (plus as many untimed warm-up queries per candidate count)
    * @param k neighbours per query (10 for recall@10)
    * @param seed seed of the synthetic data
+   * @param candidateCounts HNSW candidates per query to measure, each on the same built index (the production search
+   *     with {@code LuceneIndexOptions.withFanOut(1, c)}); empty = the default options only
    */
   public record Config(int size, int dimension, LuceneIndexOptions.Quantization quantization, int queries, int k,
-      long seed) {
+      long seed, List<Integer> candidateCounts) {
     public Config {
       if (size < 100 || queries < 10 || k < 1 || k > size) {
         throw new IllegalArgumentException("need size >= 100, queries >= 10 and 1 <= k <= size");
       }
+      candidateCounts = List.copyOf(candidateCounts);
+      for (int c : candidateCounts) {
+        if (c < k) {
+          throw new IllegalArgumentException("candidate counts must be at least k = " + k + ": " + c);
+        }
+      }
+    }
+
+    /** Measures the default options only. */
+    public Config(int size, int dimension, LuceneIndexOptions.Quantization quantization, int queries, int k,
+        long seed) {
+      this(size, dimension, quantization, queries, k, seed, List.of());
     }
   }
 
   /**
-   * @param buildSeconds time to add all vectors and commit (single writer thread)
+   * One candidate setting on the built index.
+   *
+   * @param candidates HNSW candidates per query (all rescored exactly)
    * @param knn latency of {@link LuceneVectorIndex#search}
    * @param knnCpu CPU time of the querying thread per search (insensitive to other processes' load)
+   * @param recall mean recall@k against the scan
+   */
+  public record Probe(int candidates, Latencies knn, Latencies knnCpu, double recall) {}
+
+  /**
+   * @param buildSeconds time to add all vectors and commit (single writer thread)
+   * @param probes one per measured candidate count; the first is the default options' count
    * @param scan latency of the exact scan
-   * @param recall mean recall@k of the index against the scan
    * @param heapBytes heap held by the open, warmed-up index
    * @param diskBytes the index's files
    */
-  public record Result(Config config, double buildSeconds, Latencies knn, Latencies knnCpu, Latencies scan,
-      double recall, long heapBytes, long diskBytes) {
-    /** Median scan latency over median kNN latency. */
+  public record Result(Config config, double buildSeconds, List<Probe> probes, Latencies scan, long heapBytes,
+      long diskBytes) {
+    public Result {
+      probes = List.copyOf(probes);
+    }
+
+    /** The default options' measurement. */
+    public Probe atDefault() {
+      return probes.getFirst();
+    }
+
+    public Latencies knn() {
+      return atDefault().knn();
+    }
+
+    public Latencies knnCpu() {
+      return atDefault().knnCpu();
+    }
+
+    public double recall() {
+      return atDefault().recall();
+    }
+
+    /** Median scan latency over median kNN latency at the default options. */
     public double speedUp() {
-      return scan.p50Ms() / knn.p50Ms();
+      return speedUp(atDefault());
+    }
+
+    public double speedUp(Probe probe) {
+      return scan.p50Ms() / probe.knn().p50Ms();
     }
   }
 
@@ -85,36 +133,59 @@ public final class VectorSearchBenchmark {
     }
     double buildSeconds = (System.nanoTime() - start) / 1e9;
 
-    try (LuceneVectorIndex index = LuceneVectorIndex.openReadOnly(workDir, options)) {
-      for (int q = config.queries(); q < queries.length; q++) { // warm-up on the second half of the queries
-        index.search(VectorIndex.Field.APPEARANCE, queries[q], config.k(), Set.of());
-      }
-      long[] knnNanos = new long[config.queries()];
-      long[] knnCpu = new long[config.queries()];
-      long[] scanNanos = new long[config.queries()];
-      double recallSum = 0;
-      for (int q = 0; q < config.queries(); q++) {
-        long c0 = CpuClock.threadNanos();
-        long t0 = System.nanoTime();
-        List<VectorIndex.Hit> hits = index.search(VectorIndex.Field.APPEARANCE, queries[q], config.k(), Set.of());
-        knnNanos[q] = System.nanoTime() - t0;
-        knnCpu[q] = CpuClock.threadNanos() - c0;
-        t0 = System.nanoTime();
-        int[] exact = exactTop(data, queries[q], config.k());
-        scanNanos[q] = System.nanoTime() - t0;
-        Set<Long> found = new HashSet<>();
-        hits.forEach(h -> found.add(h.id()));
-        int overlap = 0;
-        for (int id : exact) {
-          overlap += found.contains((long) id) ? 1 : 0;
-        }
-        recallSum += (double) overlap / config.k();
-      }
-      long heap = Math.max(0, HeapMeter.usedAfterGc() - before);
-      return new Result(config, buildSeconds, Latencies.ofNanos(knnNanos), Latencies.ofNanos(knnCpu),
-          Latencies.ofNanos(scanNanos),
-          recallSum / config.queries(), heap, folderBytes(workDir));
+    int[][] exact = new int[config.queries()][];
+    long[] scanNanos = new long[config.queries()];
+    for (int q = 0; q < config.queries(); q++) {
+      long t0 = System.nanoTime();
+      exact[q] = exactTop(data, queries[q], config.k());
+      scanNanos[q] = System.nanoTime() - t0;
     }
+    List<Probe> probes = new ArrayList<>();
+    long heap = 0;
+    int defaultCount = options.candidates(config.k());
+    List<Integer> counts = new ArrayList<>(List.of(defaultCount));
+    config.candidateCounts().stream().filter(c -> c != defaultCount).forEach(counts::add);
+    try (LuceneVectorIndex index = LuceneVectorIndex.openReadOnly(workDir, options)) {
+      for (float[] query : queries) { // JIT and page-cache warm-up, so the first probe measured is not penalised
+        index.search(VectorIndex.Field.APPEARANCE, query, config.k(), Set.of());
+      }
+    }
+    for (int c : counts) {
+      LuceneIndexOptions probeOptions = c == defaultCount ? options : options.withFanOut(1, c);
+      try (LuceneVectorIndex index = LuceneVectorIndex.openReadOnly(workDir, probeOptions)) {
+        probes.add(probe(index, c, queries, exact, config));
+        if (c == defaultCount) {
+          heap = Math.max(0, HeapMeter.usedAfterGc() - before);
+        }
+      }
+    }
+    return new Result(config, buildSeconds, probes, Latencies.ofNanos(scanNanos), heap, folderBytes(workDir));
+  }
+
+  private static Probe probe(LuceneVectorIndex index, int candidates, float[][] queries, int[][] exact, Config config)
+      throws IOException {
+    for (int q = config.queries(); q < queries.length; q++) { // warm-up on the second half of the queries
+      index.search(VectorIndex.Field.APPEARANCE, queries[q], config.k(), Set.of());
+    }
+    long[] knnNanos = new long[config.queries()];
+    long[] knnCpu = new long[config.queries()];
+    double recallSum = 0;
+    for (int q = 0; q < config.queries(); q++) {
+      long c0 = CpuClock.threadNanos();
+      long t0 = System.nanoTime();
+      List<VectorIndex.Hit> hits = index.search(VectorIndex.Field.APPEARANCE, queries[q], config.k(), Set.of());
+      knnNanos[q] = System.nanoTime() - t0;
+      knnCpu[q] = CpuClock.threadNanos() - c0;
+      Set<Long> found = new HashSet<>();
+      hits.forEach(h -> found.add(h.id()));
+      int overlap = 0;
+      for (int id : exact[q]) {
+        overlap += found.contains((long) id) ? 1 : 0;
+      }
+      recallSum += (double) overlap / config.k();
+    }
+    return new Probe(candidates, Latencies.ofNanos(knnNanos), Latencies.ofNanos(knnCpu),
+        recallSum / config.queries());
   }
 
   /** The k largest dot products with {@code query}, by a scan with a small insertion-sorted top list. */

@@ -16,7 +16,10 @@ import org.morphscout.indexer.silhouette.Mask;
  * tall: their axes differ by 90 degrees while the best morph turns neither); and a rotation of more than
  * {@link #LARGE_ROTATION} radians must beat the best smaller one by {@link #LARGE_ROTATION_MARGIN} IoU, since a morph
  * that spins the object is rarely wanted. When either shape is nearly isotropic (anisotropy below
- * {@link #ISOTROPY_LIMIT}) the upside-down candidate is tried too.
+ * {@link #ISOTROPY_LIMIT}) the upside-down candidate is tried too. A {@code maxRotation} below pi leaves out every
+ * candidate that turns B further than that: for morphs of upright objects the pair scorer uses
+ * {@link #MORPH_MAX_ROTATION}, so a tall bottle is never laid on its side to match a wide bowl (its overlap would
+ * look good while the morph would spin the object).
  *
  * <p>The canvas is square and covers A's bounding box and the disc that B covers after the similarity whatever its
  * rotation, plus a margin on each side. Immutable and thread-safe.
@@ -34,19 +37,33 @@ public final class SimilarityAlignment {
   /** The IoU a large rotation must gain over the best smaller candidate to be chosen. */
   static final double LARGE_ROTATION_MARGIN = 0.05;
 
+  /**
+   * The turn allowed when aligning silhouettes for a morph (45 degrees): covers a tilted shot, excludes laying an
+   * object on its side or upside down.
+   */
+  public static final double MORPH_MAX_ROTATION = Math.PI / 4;
+
   /** Preference cost of a flip, in radians of rotation: a flip is preferred over turning more than 90 degrees. */
   private static final double MIRROR_COST = 0.5 * Math.PI;
 
   private final int gridSize;
   private final boolean allowMirror;
   private final double margin;
+  private final double maxRotation;
+
+  /** Any rotation allowed: {@code SimilarityAlignment(gridSize, allowMirror, margin, Math.PI)}. */
+  public SimilarityAlignment(int gridSize, boolean allowMirror, double margin) {
+    this(gridSize, allowMirror, margin, Math.PI);
+  }
 
   /**
    * @param gridSize canvas side in pixels (e.g. 64)
    * @param allowMirror whether a left-right flip of B may be used (default true: a flipped photo morphs as well)
    * @param margin free border on each side as a fraction of the covered extent, in [0, 1] (default 0.15)
+   * @param maxRotation largest turn of B in radians, in [0, pi]; pi allows any (the unrotated candidate is always
+   *     tried)
    */
-  public SimilarityAlignment(int gridSize, boolean allowMirror, double margin) {
+  public SimilarityAlignment(int gridSize, boolean allowMirror, double margin, double maxRotation) {
     if (gridSize < 8) {
       throw new IllegalArgumentException("alignment grid must be at least 8 pixels, got " + gridSize);
     }
@@ -55,7 +72,11 @@ public final class SimilarityAlignment {
     }
     this.gridSize = gridSize;
     this.allowMirror = allowMirror;
+    if (!(maxRotation >= 0 && maxRotation <= Math.PI)) {
+      throw new IllegalArgumentException("largest alignment rotation must be in [0, pi] radians, got " + maxRotation);
+    }
     this.margin = margin;
+    this.maxRotation = maxRotation;
   }
 
   /**
@@ -77,6 +98,9 @@ public final class SimilarityAlignment {
       double[] rotations = isotropic ? new double[] {base, base + Math.PI, 0, Math.PI}
           : new double[] {base, base + Math.PI, 0};
       for (double rot : rotations) {
+        if (Math.abs(normalised(rot)) > maxRotation + 1e-9) {
+          continue;
+        }
         // through() applies the flip itself, so pass B's unflipped centroid.
         candidates.add(Similarity.through(scale, rot, mirror, mb.cx(), mb.cy(), ma.cx(), ma.cy()));
       }

@@ -12,14 +12,17 @@ public final class WarpEstimator {
   private final DemonsRegistration demons;
   private final int gridSize;
 
-  /** Defaults: {@link DemonsConfig#DEFAULT}, mirroring allowed, 15% margin. */
+  /**
+   * Defaults: {@link DemonsConfig#DEFAULT}, mirroring allowed, 15% margin, turns up to
+   * {@link SimilarityAlignment#MORPH_MAX_ROTATION}.
+   */
   public WarpEstimator() {
     this(DemonsConfig.DEFAULT, true);
   }
 
   public WarpEstimator(DemonsConfig config, boolean allowMirror) {
     this.gridSize = config.gridSize();
-    this.alignment = new SimilarityAlignment(gridSize, allowMirror, 0.15);
+    this.alignment = new SimilarityAlignment(gridSize, allowMirror, 0.15, SimilarityAlignment.MORPH_MAX_ROTATION);
     this.demons = new DemonsRegistration(config);
   }
 

@@ -62,6 +62,40 @@ class SimilarityAlignmentTest {
   }
 
   @Test
+  void forAMorphATallShapeIsNotLaidOnItsSideToMatchAWideOne() {
+    // A wide ellipse (a bowl's outline) and the same ellipse standing (a bottle's): principal axes 90 degrees apart.
+    // Without a limit the turned candidate overlaps best; with the morph limit (45 degrees) B stays upright.
+    Mask wide = TestMasks.draw(200, 200, new java.awt.geom.Ellipse2D.Double(30, 72, 140, 56));
+    Mask tall = TestMasks.draw(200, 200, new java.awt.geom.Ellipse2D.Double(72, 30, 56, 140));
+    Alignment free = new SimilarityAlignment(64, true, 0.15).align(wide, tall);
+    Alignment morph = new SimilarityAlignment(64, true, 0.15, SimilarityAlignment.MORPH_MAX_ROTATION)
+        .align(wide, tall);
+    assertThat(Math.abs(Math.abs(free.similarity().rotation()) - Math.PI / 2)).isLessThan(0.05);
+    assertThat(free.iou()).isGreaterThan(0.9);
+    assertThat(Math.abs(morph.similarity().rotation())).isLessThanOrEqualTo(SimilarityAlignment.MORPH_MAX_ROTATION);
+    assertThat(morph.iou()).isLessThan(free.iou() - 0.2);
+  }
+
+  @Test
+  void aTiltedShotIsStillStraightenedWithinTheMorphLimit() {
+    // The boot outline turned by 25 degrees (a tilted shot): within the limit, so the turn is recovered.
+    Mask a = TestMasks.draw(240, 240, TestMasks.transformed(TestMasks.boot(),
+        AffineTransform.getTranslateInstance(120, 120)));
+    AffineTransform tilt = AffineTransform.getTranslateInstance(120, 120);
+    tilt.rotate(Math.toRadians(25));
+    Mask b = TestMasks.draw(240, 240, TestMasks.transformed(TestMasks.boot(), tilt));
+    Alignment al = new SimilarityAlignment(64, true, 0.15, SimilarityAlignment.MORPH_MAX_ROTATION).align(a, b);
+    assertThat(Math.toDegrees(al.similarity().rotation())).isCloseTo(-25, within(3.0));
+    assertThat(al.iou()).isGreaterThan(0.85);
+  }
+
+  @Test
+  void theRotationLimitIsValidated() {
+    org.assertj.core.api.Assertions.assertThatThrownBy(() -> new SimilarityAlignment(64, true, 0.15, 4.0))
+        .hasMessageContaining("rotation");
+  }
+
+  @Test
   void similarityInverseUndoesApply() {
     Similarity s = Similarity.through(1.7, 2.2, true, 10, 20, 50, 60);
     double[] p = s.apply(13, -4);
