@@ -32,7 +32,8 @@ import org.testfx.util.WaitForAsyncUtils;
 
 /**
  * Heap of the browser's library view on large catalogs (run with {@link #COMMAND}; give the test JVM another heap
- * limit with {@code _JAVA_OPTIONS=-Xmx512m}, which the JVM applies after the pom's {@code -Xmx2g}). For each size
+ * limit with {@code -Dmorphscout.test.heap=-Xmx512m} on the Maven command line; the default is the pom's
+ * {@code -Xmx2g}). For each size
  * (default 10,000 and 100,000 images; system property {@code morphscout.bench.browserSizes}) it writes a real
  * catalog ({@link LargeCatalog}), shows the real window ({@link MainView} with the app's own backends, task runner
  * and thumbnail cache settings) on the headless Monocle platform, opens the catalog through
@@ -62,7 +63,7 @@ class LibraryViewMemoryBenchmark {
   private static final int SCROLL_STOPS = 80;
   private static final long WAIT_S = 120;
   /** How it is run (printed in the report). */
-  static final String COMMAND = "nice -n 19 mvn -o -B -q -P benchmarks -Dgroups=benchmark -pl app -am test "
+  static final String COMMAND = "mvn -B -q -P benchmarks -Dgroups=benchmark -pl app -am test "
       + "-Dtest=LibraryViewMemoryBenchmark -Dsurefire.failIfNoSpecifiedTests=false";
 
   @BeforeAll
