@@ -64,7 +64,7 @@ public final class ImageAnalyzer {
     Silhouette silhouette = silhouettes.extract(decoded.analysis());
     ShapeDescriptor shape = shapes.describe(silhouette.mask());
     ColourStats colour = colours.compute(decoded.analysis(), silhouette.mask());
-    float[] fingerprint = PixelFingerprint.of(decoded.analysis(), shape);
+    float[] fingerprint = PixelFingerprint.of(decoded.analysis(), silhouette.mask());
     return new PreparedImage(file, contentHash, decoded, silhouette, shape, colour, fingerprint);
   }
 

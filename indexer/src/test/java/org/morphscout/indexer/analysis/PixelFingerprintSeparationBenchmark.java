@@ -144,6 +144,11 @@ class PixelFingerprintSeparationBenchmark {
           r.isEmpty() ? Double.NaN : r.get(0), r.isEmpty() ? Double.NaN : r.get(r.size() / 2),
           r.isEmpty() ? Double.NaN : r.get(r.size() - 1), passing, threshold,
           kind.equals("copy") ? "lowest:" : "highest:", worst));
+      report.append("    at or above");
+      for (double t : new double[] {0.993, 0.994, 0.995, 0.996, 0.997, 0.998}) {
+        report.append(String.format(Locale.ROOT, " %.3f: %d;", t, r.stream().filter(c -> c >= t).count()));
+      }
+      report.append(System.lineSeparator());
     }
     System.out.print(report);
     assertThat(pairs).isNotEmpty();

@@ -15,8 +15,7 @@ import org.morphscout.demo.ImageCodec;
 import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.pairing.NearDuplicateConfig;
 import org.morphscout.indexer.silhouette.DefaultSilhouettes;
-import org.morphscout.indexer.silhouette.ShapeDescriptor;
-import org.morphscout.indexer.silhouette.ShapeDescriptors;
+import org.morphscout.indexer.silhouette.Mask;
 
 class PixelFingerprintTest {
   private static final long SEED = 7202;
@@ -156,24 +155,39 @@ class PixelFingerprintTest {
 
   @Test
   void windowIsASquareAroundTheObjectOrTheWholeFrame() {
-    ShapeDescriptor tall = new ShapeDescriptor(new float[1], new double[7], 0.4, 0.2, 0.2, 0.6, 0.5, 0.1, 0.5, 0.5, 0);
-    double[] w = PixelFingerprint.window(200, 100, tall, 0.15);
-    // Box 40 x 60 px centred at (100, 50): the window is 60 * 1.3 = 78 px square around the same centre.
-    assertThat(w).containsExactly(new double[] {61, 11, 78, 78}, within(1e-9));
-    ShapeDescriptor none = new ShapeDescriptor(new float[1], new double[7], 0, 0, 0, 0, 1, 0, 0.5, 0.5, 0);
-    assertThat(PixelFingerprint.window(200, 100, none, 0.15)).containsExactly(0, 0, 200, 100);
+    // A solid 40 x 60 px rectangle at (80..120, 20..80) in a 200 x 100 mask: centroid (100, 50). The pixel rows are
+    // a discrete uniform distribution over n = 60 values, variance (n^2 - 1) / 12 (standard result), so the window
+    // side is 2 sqrt(3) sqrt((n^2 - 1) / 12) (1 + 2 * 0.15) = sqrt(n^2 - 1) * 1.3, just under 60 * 1.3 = 78 px.
+    byte[] bits = new byte[200 * 100];
+    for (int y = 20; y < 80; y++) {
+      for (int x = 80; x < 120; x++) {
+        bits[y * 200 + x] = 1;
+      }
+    }
+    double side = Math.sqrt(60 * 60 - 1) * 1.3;
+    assertThat(PixelFingerprint.window(200, 100, new Mask(200, 100, bits), 0.15))
+        .containsExactly(new double[] {100 - side / 2, 50 - side / 2, side, side}, within(1e-9));
+    // The same rectangle in a mask at half the image's resolution: n = 30 mask rows, each 2 image pixels.
+    byte[] half = new byte[100 * 50];
+    for (int y = 10; y < 40; y++) {
+      for (int x = 40; x < 60; x++) {
+        half[y * 100 + x] = 1;
+      }
+    }
+    double halfSide = 2 * Math.sqrt(30 * 30 - 1) * 1.3;
+    assertThat(PixelFingerprint.window(200, 100, new Mask(100, 50, half), 0.15))
+        .containsExactly(new double[] {100 - halfSide / 2, 50 - halfSide / 2, halfSide, halfSide}, within(1e-9));
+    assertThat(PixelFingerprint.window(200, 100, Mask.empty(200, 100), 0.15)).containsExactly(0, 0, 200, 100);
   }
 
   // ---- rendered pictures: edited copies above the threshold, neighbouring family members below ----
 
   private final DefaultSilhouettes silhouettes = new DefaultSilhouettes();
-  private final ShapeDescriptors shapes = new ShapeDescriptors();
 
   private float[] fingerprint(BufferedImage image) {
     BufferedImage argb = new BufferedImage(image.getWidth(), image.getHeight(), BufferedImage.TYPE_INT_ARGB);
     argb.createGraphics().drawImage(image, 0, 0, null);
-    ShapeDescriptor shape = shapes.describe(silhouettes.extract(argb).mask());
-    return PixelFingerprint.of(argb, shape);
+    return PixelFingerprint.of(argb, silhouettes.extract(argb).mask());
   }
 
   /** A global brightness and contrast edit: v' = 1.08 (v - 128) + 128 + 5, per channel, clipped to [0, 255]. */
