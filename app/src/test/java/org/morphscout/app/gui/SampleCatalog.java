@@ -183,8 +183,9 @@ public final class SampleCatalog {
         ? 0.35 : 0.9, "border-model");
     ShapeDescriptor d = new ShapeDescriptor(shape, new double[7], 0.2, 0.2, 0.6, 0.6, 1.33, coverage, 0.5 + p.dx(),
         0.5, p.rotate());
+    // No pixel fingerprint (unknown): near-duplicates among the samples are decided by the other evidence.
     return new ImageAnalysis(id, file.toString(), 320, 240, "png", appearance, MODEL, s, d, colour,
-        "hash-" + p.name());
+        "hash-" + p.name(), null);
   }
 
   /** The row of a sample picture by file name. */

@@ -19,6 +19,8 @@ import org.morphscout.indexer.silhouette.Silhouette;
  * @param shape shape descriptors of the silhouette
  * @param colour CIELAB colour statistics
  * @param contentHash hex SHA-256 of the file's bytes ("" when unknown)
+ * @param fingerprint the {@link PixelFingerprint} ({@value PixelFingerprint#LENGTH} z-normalised luminance cells), or
+ *     null when unknown (features stored before catalog schema version 4, until the next index run fills them in)
  */
 public record ImageAnalysis(
     long id,
@@ -31,4 +33,12 @@ public record ImageAnalysis(
     Silhouette silhouette,
     ShapeDescriptor shape,
     ColourStats colour,
-    String contentHash) {}
+    String contentHash,
+    float[] fingerprint) {
+
+  /** An analysis without a pixel fingerprint (unknown): near-duplicate checks then use the other evidence only. */
+  public ImageAnalysis(long id, String path, int width, int height, String format, float[] appearance, String modelId,
+      Silhouette silhouette, ShapeDescriptor shape, ColourStats colour, String contentHash) {
+    this(id, path, width, height, format, appearance, modelId, silhouette, shape, colour, contentHash, null);
+  }
+}

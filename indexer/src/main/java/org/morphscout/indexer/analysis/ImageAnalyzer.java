@@ -59,12 +59,13 @@ public final class ImageAnalyzer {
     return prepare(file, hash, decoded);
   }
 
-  /** Computes silhouette, shape and colour of an already decoded image. */
+  /** Computes silhouette, shape, colour and pixel fingerprint of an already decoded image. */
   public PreparedImage prepare(Path file, String contentHash, DecodedImage decoded) {
     Silhouette silhouette = silhouettes.extract(decoded.analysis());
     ShapeDescriptor shape = shapes.describe(silhouette.mask());
     ColourStats colour = colours.compute(decoded.analysis(), silhouette.mask());
-    return new PreparedImage(file, contentHash, decoded, silhouette, shape, colour);
+    float[] fingerprint = PixelFingerprint.of(decoded.analysis(), silhouette.mask());
+    return new PreparedImage(file, contentHash, decoded, silhouette, shape, colour, fingerprint);
   }
 
   /** Runs the appearance model on a batch; {@code ids} gives each image's catalog id (-1 when outside it). */
@@ -78,7 +79,7 @@ public final class ImageAnalyzer {
       PreparedImage p = batch.get(i);
       result.add(new ImageAnalysis(ids.get(i), p.file().toAbsolutePath().normalize().toString(), p.decoded().width(),
           p.decoded().height(), p.decoded().format(), vectors.get(i), embedder.modelId(), p.silhouette(), p.shape(),
-          p.colour(), p.contentHash()));
+          p.colour(), p.contentHash(), p.fingerprint()));
     }
     return result;
   }

@@ -52,11 +52,11 @@ public final class FeatureStore {
     catalog.read(c -> {
       try (PreparedStatement s = c.prepareStatement("INSERT OR REPLACE INTO features(image_id, model_id, appearance, "
           + "shape, silhouette_source, mask_width, mask_height, mask, components, touches_frame, coverage, confidence, "
-          + "descriptors, colour, computed_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+          + "descriptors, colour, computed_at, fingerprint) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
         ImageStore.bind(s, imageId, a.modelId(), Blobs.floats(a.appearance()), Blobs.floats(a.shape().shapeVector()),
             a.silhouette().source(), small.width(), small.height(), Blobs.maskBits(small), a.silhouette().components(),
             a.silhouette().touchesFrame() ? 1 : 0, a.silhouette().coverage(), a.silhouette().confidence(), descriptors,
-            json(a.colour()), ImageStore.now());
+            json(a.colour()), ImageStore.now(), a.fingerprint() == null ? null : Blobs.floats(a.fingerprint()));
         return s.executeUpdate();
       }
     });
@@ -66,7 +66,8 @@ public final class FeatureStore {
   public Optional<ImageAnalysis> load(ImageRow row) {
     return catalog.read(c -> {
       try (PreparedStatement s = c.prepareStatement("SELECT model_id, appearance, shape, silhouette_source, mask_width, "
-          + "mask_height, mask, components, touches_frame, coverage, confidence, descriptors, colour FROM features "
+          + "mask_height, mask, components, touches_frame, coverage, confidence, descriptors, colour, fingerprint "
+          + "FROM features "
           + "WHERE image_id = ?")) {
         s.setLong(1, row.id());
         try (ResultSet rs = s.executeQuery()) {
@@ -84,8 +85,10 @@ public final class FeatureStore {
     ShapeDescriptor shape = new ShapeDescriptor(Blobs.floats(rs.getBytes(3)), d.hu(), d.bboxX(), d.bboxY(), d.bboxW(),
         d.bboxH(), d.aspect(), d.areaFraction(), d.centroidX(), d.centroidY(), d.orientation());
     ColourStats colour = parse(rs.getString(13), ColourStats.class);
+    byte[] fingerprint = rs.getBytes(14); // NULL for features stored before schema version 4
     return new ImageAnalysis(row.id(), row.path(), row.width(), row.height(), row.format(), Blobs.floats(rs.getBytes(2)),
-        rs.getString(1), silhouette, shape, colour, row.contentHash() == null ? "" : row.contentHash());
+        rs.getString(1), silhouette, shape, colour, row.contentHash() == null ? "" : row.contentHash(),
+        fingerprint == null ? null : Blobs.floats(fingerprint));
   }
 
   /** One image's stored vectors. */
@@ -143,6 +146,24 @@ public final class FeatureStore {
           while (rs.next()) {
             ids.add(rs.getLong(1));
           }
+        }
+      }
+      return ids;
+    });
+  }
+
+  /**
+   * Ids of ready images whose features have no pixel fingerprint (stored before schema version 4): the indexer
+   * analyses them again.
+   */
+  public List<Long> readyIdsWithoutFingerprint() {
+    return catalog.read(c -> {
+      List<Long> ids = new ArrayList<>();
+      try (Statement s = c.createStatement();
+          ResultSet rs = s.executeQuery("SELECT f.image_id FROM features f JOIN images i ON i.id = f.image_id "
+              + "WHERE i.status = 'ready' AND f.fingerprint IS NULL ORDER BY f.image_id")) {
+        while (rs.next()) {
+          ids.add(rs.getLong(1));
         }
       }
       return ids;

@@ -73,7 +73,11 @@ public final class LibraryIndexer {
         hashFailures.forEach((p, r) -> failures.add(new IndexReport.FileFailure(ScanReconciler.key(p), r)));
         List<ImageRow> todo = new ArrayList<>(plan.toAnalyse());
         Set<Long> queued = new java.util.HashSet<>(todo.stream().map(ImageRow::id).toList());
-        for (long id : reembed) {
+        // Features stored before the pixel fingerprint existed (catalog schema version 4) lack it: analyse those
+        // images again, keeping their ids (and so the user's decisions).
+        List<Long> again = new ArrayList<>(reembed);
+        again.addAll(library.features().readyIdsWithoutFingerprint());
+        for (long id : again) {
           if (queued.add(id)) {
             library.images().byId(id).filter(r -> Files.exists(Path.of(r.path()))).ifPresent(todo::add);
           }

@@ -125,7 +125,7 @@ public final class QueryContext implements AutoCloseable {
 
   private static ImageAnalysis withId(ImageAnalysis a, long id) {
     return new ImageAnalysis(id, a.path(), a.width(), a.height(), a.format(), a.appearance(), a.modelId(),
-        a.silhouette(), a.shape(), a.colour(), a.contentHash());
+        a.silhouette(), a.shape(), a.colour(), a.contentHash(), a.fingerprint());
   }
 
   /** The id of a catalog image with the same bytes as {@code a}, when there is one (to leave the query out). */

@@ -1,12 +1,17 @@
 package org.morphscout.indexer.pairing;
 
 import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.analysis.PixelFingerprint;
 import org.morphscout.indexer.feature.ColourStats;
 
 /**
  * Decides whether two analyses show the same picture, resized, recompressed or lightly edited: identical file
- * hashes, or appearance cosine, shape vector distance, foreground colour difference and aspect ratio all within
- * {@link NearDuplicateConfig}. Such pairs are no morph; the pair finder lists them apart. Immutable, thread-safe.
+ * hashes, or appearance cosine, shape vector distance, foreground colour difference, aspect ratio and (when both
+ * images have one) the pixel fingerprint correlation all within {@link NearDuplicateConfig}. The fingerprint is what
+ * tells an edited copy from a neighbouring member of a silhouette family (same glaze, backdrop and light, a slightly
+ * different outline), which passes everything else; without fingerprints (features stored before catalog schema
+ * version 4) the other conditions decide alone. Such pairs are no morph; the pair finder lists them apart.
+ * Immutable, thread-safe.
  */
 public final class NearDuplicates {
   private final NearDuplicateConfig config;
@@ -66,11 +71,20 @@ public final class NearDuplicates {
     }
     if (ca.backgroundMean() == null || cb.backgroundMean() == null || Double.isNaN(ca.backgroundMean()[0])
         || Double.isNaN(cb.backgroundMean()[0])) {
-      return true; // cut-outs without background: the object decides alone
+      return samePixels(a, b); // cut-outs without background: the object decides alone
     }
     double bg = colour.deltaE(ca.backgroundMean(), cb.backgroundMean());
     double texture = Math.abs(ca.backgroundStd()[0] - cb.backgroundStd()[0]);
-    return bg <= config.maxBackgroundDeltaE() && texture <= config.maxBackgroundStdGap();
+    return bg <= config.maxBackgroundDeltaE() && texture <= config.maxBackgroundStdGap() && samePixels(a, b);
+  }
+
+  /**
+   * Whether the pixel fingerprints correlate well enough; true when either is unknown (or flat, or of another
+   * length), so that the other conditions decide alone as before fingerprints existed.
+   */
+  private boolean samePixels(ImageAnalysis a, ImageAnalysis b) {
+    double r = PixelFingerprint.correlation(a.fingerprint(), b.fingerprint());
+    return Double.isNaN(r) || r >= config.minFingerprintCorrelation();
   }
 
   /** Euclidean distance of two vectors after L2 normalisation. */

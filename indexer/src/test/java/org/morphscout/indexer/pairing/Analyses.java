@@ -74,6 +74,7 @@ public final class Analyses {
     private double[] bgStd = {3, 1, 1};
     private float[] appearance = look(7);
     private String hash = "";
+    private float[] fingerprint;
     private boolean empty;
 
     private Builder(long id) {
@@ -134,6 +135,12 @@ public final class Analyses {
       return this;
     }
 
+    /** The pixel fingerprint (default null: unknown). */
+    public Builder fingerprint(float[] f) {
+      this.fingerprint = f == null ? null : f.clone();
+      return this;
+    }
+
     public Builder hash(String h) {
       hash = h;
       return this;
@@ -153,7 +160,7 @@ public final class Analyses {
           empty ? 0 : 0.9, "test");
       ColourStats colour = new ColourStats(fgMean.clone(), fgStd.clone(), bgMean.clone(), bgStd.clone(), List.of());
       return new ImageAnalysis(id, "/photos/img" + id + ".jpg", width, height, "jpeg", appearance.clone(), "test-model",
-          sil, describe(mask), colour, hash);
+          sil, describe(mask), colour, hash, fingerprint);
     }
   }
 
