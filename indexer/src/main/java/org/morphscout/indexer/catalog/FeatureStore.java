@@ -56,7 +56,7 @@ public final class FeatureStore {
         ImageStore.bind(s, imageId, a.modelId(), Blobs.floats(a.appearance()), Blobs.floats(a.shape().shapeVector()),
             a.silhouette().source(), small.width(), small.height(), Blobs.maskBits(small), a.silhouette().components(),
             a.silhouette().touchesFrame() ? 1 : 0, a.silhouette().coverage(), a.silhouette().confidence(), descriptors,
-            json(a.colour()), ImageStore.now(), a.fingerprint() == null ? null : Blobs.floats(a.fingerprint()));
+            json(a.colour()), ImageStore.now(), a.fingerprint() == null ? null : Blobs.halfFloats(a.fingerprint()));
         return s.executeUpdate();
       }
     });
@@ -88,7 +88,7 @@ public final class FeatureStore {
     byte[] fingerprint = rs.getBytes(14); // NULL for features stored before schema version 4
     return new ImageAnalysis(row.id(), row.path(), row.width(), row.height(), row.format(), Blobs.floats(rs.getBytes(2)),
         rs.getString(1), silhouette, shape, colour, row.contentHash() == null ? "" : row.contentHash(),
-        fingerprint == null ? null : Blobs.floats(fingerprint));
+        fingerprint == null ? null : Blobs.fromHalfFloats(fingerprint));
   }
 
   /** One image's stored vectors. */
