@@ -52,6 +52,9 @@ import picocli.CommandLine.Spec;
       "Generates realistic test photos (3000x2000 JPEG, quality 90, cached in the work folder) and synthetic vectors "
           + "and graphs (seeded), runs each benchmark and prints a Markdown report with the machine description and "
           + "the targets met or missed. Progress goes to stderr. Does not touch the catalog.",
+      "Each vector index is searched at the default candidate count and at 50, 100 and 200 candidates per query "
+          + "(recall against speed, no rebuild needed). The browser's memory is measured by a separate benchmark "
+          + "that needs the test tools' headless JavaFX (see docs/BENCHMARKS.md).",
       "The full run indexes 300 photos and searches up to 1,000,000 vectors; give the JVM room for it, for example "
           + "MORPHSCOUT_JAVA_OPTS=-Xmx12g ./morphscout bench --out docs/BENCHMARKS.md. --quick takes ~13 minutes on 2 "
           + "busy cores (plus ~5 minutes to render the photos the first time).",

@@ -15,7 +15,7 @@ import org.morphscout.indexer.silhouette.Silhouette;
  * @param format lower-case format name
  * @param appearance L2-normalised appearance vector of {@code modelId}
  * @param modelId the appearance model's identifier
- * @param silhouette silhouette at analysis resolution
+ * @param silhouette silhouette found at analysis resolution; its mask shrunk to at most {@link #MASK_LONG_SIDE} px
  * @param shape shape descriptors of the silhouette
  * @param colour CIELAB colour statistics
  * @param contentHash hex SHA-256 of the file's bytes ("" when unknown)
@@ -35,6 +35,13 @@ public record ImageAnalysis(
     ColourStats colour,
     String contentHash,
     float[] fingerprint) {
+
+  /**
+   * Long side, in pixels, of the silhouette mask an analysis carries: the analysis-size mask is shrunk to it once the
+   * shape, colour and fingerprint are computed, so an image analysed on the fly scores exactly like one loaded from
+   * the catalog (which stores masks at this size), and warp estimation scans 128-pixel masks, not 768-pixel ones.
+   */
+  public static final int MASK_LONG_SIDE = 128;
 
   /** An analysis without a pixel fingerprint (unknown): near-duplicate checks then use the other evidence only. */
   public ImageAnalysis(long id, String path, int width, int height, String format, float[] appearance, String modelId,

@@ -78,7 +78,8 @@ public final class ImageAnalyzer {
     for (int i = 0; i < batch.size(); i++) {
       PreparedImage p = batch.get(i);
       result.add(new ImageAnalysis(ids.get(i), p.file().toAbsolutePath().normalize().toString(), p.decoded().width(),
-          p.decoded().height(), p.decoded().format(), vectors.get(i), embedder.modelId(), p.silhouette(), p.shape(),
+          p.decoded().height(), p.decoded().format(), vectors.get(i), embedder.modelId(),
+          p.silhouette().shrunk(ImageAnalysis.MASK_LONG_SIDE), p.shape(),
           p.colour(), p.contentHash(), p.fingerprint()));
     }
     return result;

@@ -73,38 +73,4 @@ public final class Blobs {
     }
     return new Mask(width, height, data);
   }
-
-  /**
-   * A smaller copy of a mask for storage, long side at most {@code longSide}; a pixel is on when at least half of the
-   * source pixels it covers are on (area majority), so thin parts survive as well as plain nearest sampling allows.
-   */
-  public static Mask shrink(Mask m, int longSide) {
-    int w = m.width();
-    int h = m.height();
-    double f = Math.max(w, h) / (double) longSide;
-    if (f <= 1) {
-      return m;
-    }
-    int sw = Math.max(1, (int) Math.round(w / f));
-    int sh = Math.max(1, (int) Math.round(h / f));
-    byte[] out = new byte[sw * sh];
-    for (int y = 0; y < sh; y++) {
-      int y0 = y * h / sh;
-      int y1 = Math.max(y0 + 1, (y + 1) * h / sh);
-      for (int x = 0; x < sw; x++) {
-        int x0 = x * w / sw;
-        int x1 = Math.max(x0 + 1, (x + 1) * w / sw);
-        int on = 0;
-        for (int yy = y0; yy < y1; yy++) {
-          for (int xx = x0; xx < x1; xx++) {
-            if (m.get(xx, yy)) {
-              on++;
-            }
-          }
-        }
-        out[y * sw + x] = (byte) (2 * on >= (x1 - x0) * (y1 - y0) ? 1 : 0);
-      }
-    }
-    return new Mask(sw, sh, out);
-  }
 }

@@ -22,8 +22,8 @@ import org.morphscout.indexer.silhouette.Silhouette;
  * which works on a 64-128 px grid), as packed bits.
  */
 public final class FeatureStore {
-  /** Long side of stored masks, in pixels. */
-  public static final int MASK_LONG_SIDE = 128;
+  /** Long side of stored masks, in pixels: {@link ImageAnalysis#MASK_LONG_SIDE}. */
+  public static final int MASK_LONG_SIDE = ImageAnalysis.MASK_LONG_SIDE;
   private static final ObjectMapper JSON = new ObjectMapper();
 
   private final Catalog catalog;
@@ -45,7 +45,7 @@ public final class FeatureStore {
 
   /** Stores (or replaces) the features of one image (in the caller's transaction, if any). */
   public void put(long imageId, ImageAnalysis a) {
-    Mask small = Blobs.shrink(a.silhouette().mask(), MASK_LONG_SIDE);
+    Mask small = a.silhouette().mask().shrunk(MASK_LONG_SIDE);
     String descriptors = json(new Descriptors(a.shape().hu(), a.shape().bboxX(), a.shape().bboxY(), a.shape().bboxW(),
         a.shape().bboxH(), a.shape().aspect(), a.shape().areaFraction(), a.shape().centroidX(), a.shape().centroidY(),
         a.shape().orientation()));

@@ -10,6 +10,8 @@ public final class Mask {
   private final int width;
   private final int height;
   private final byte[] data;
+  /** Counted once: the pair scorer asks for it several times per pair. */
+  private final int area;
 
   public Mask(int width, int height, byte[] data) {
     if (width <= 0 || height <= 0) {
@@ -21,9 +23,12 @@ public final class Mask {
     this.width = width;
     this.height = height;
     this.data = new byte[data.length];
+    int n = 0;
     for (int i = 0; i < data.length; i++) {
       this.data[i] = data[i] != 0 ? (byte) 1 : 0;
+      n += this.data[i];
     }
+    this.area = n;
   }
 
   /** An empty (all background) mask. */
@@ -55,13 +60,43 @@ public final class Mask {
 
   /** Number of object pixels. */
   public int area() {
-    int n = 0;
-    for (byte b : data) {
-      n += b;
-    }
-    return n;
+    return area;
   }
 
+  /**
+   * This mask brought down to at most {@code longSide} pixels on its long side by majority vote over each output
+   * pixel's source block (this mask itself when already small enough). Warp estimation works on 64-pixel grids, so
+   * 128 pixels keep its inputs intact while scanning far fewer pixels.
+   */
+  public Mask shrunk(int longSide) {
+    int w = width;
+    int h = height;
+    double f = Math.max(w, h) / (double) longSide;
+    if (f <= 1) {
+      return this;
+    }
+    int sw = Math.max(1, (int) Math.round(w / f));
+    int sh = Math.max(1, (int) Math.round(h / f));
+    byte[] out = new byte[sw * sh];
+    for (int y = 0; y < sh; y++) {
+      int y0 = y * h / sh;
+      int y1 = Math.max(y0 + 1, (y + 1) * h / sh);
+      for (int x = 0; x < sw; x++) {
+        int x0 = x * w / sw;
+        int x1 = Math.max(x0 + 1, (x + 1) * w / sw);
+        int on = 0;
+        for (int yy = y0; yy < y1; yy++) {
+          for (int xx = x0; xx < x1; xx++) {
+            if (get(xx, yy)) {
+              on++;
+            }
+          }
+        }
+        out[y * sw + x] = (byte) (2 * on >= (x1 - x0) * (y1 - y0) ? 1 : 0);
+      }
+    }
+    return new Mask(sw, sh, out);
+  }
   /** Object pixels over all pixels, in [0, 1]. */
   public double coverage() {
     return area() / (double) data.length;

@@ -23,6 +23,12 @@ public record Silhouette(
     }
   }
 
+  /** This silhouette with its mask shrunk to at most {@code longSide} pixels (see {@link Mask#shrunk}). */
+  public Silhouette shrunk(int longSide) {
+    Mask small = mask.shrunk(longSide);
+    return small == mask ? this : new Silhouette(small, components, touchesFrame, coverage, confidence, source);
+  }
+
   /** Whether a usable object was found at all. */
   public boolean isEmpty() {
     return mask.area() == 0;
