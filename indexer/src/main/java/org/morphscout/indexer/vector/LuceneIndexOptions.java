@@ -42,15 +42,17 @@ public record LuceneIndexOptions(
   public static final int DEFAULT_MAX_CONN = 16;
   public static final int DEFAULT_BEAM_WIDTH = 100;
   /**
-   * Candidate defaults, measured on the data of LuceneVectorIndexRecallTest (10,000 uniform random unit vectors of
-   * 64 dimensions, M 16, beamWidth 100): recall@10 is 0.82 with 50 candidates, 0.94 with 100, 0.99 with 200, at about
-   * 0.7, 0.7 and 1.1 ms of CPU per query. Embedding-like 560-d vectors reach 0.998 already with 50
-   * (LuceneVectorIndexRecallBenchmark); uniform 560-d vectors need about 1000 for 0.99. The extra candidates are
-   * cheap insurance.
+   * Candidate defaults. On embedding-like 560-d vectors (Gaussian clusters in a 32-d latent space; docs/BENCHMARKS.md,
+   * run of 2026-12-02) recall@10 was 1.000 with 50, 100 and 200 candidates at 10k, 100k and 1M vectors, float and
+   * int8, while the query cost grew with the candidates: at 100k float 0.46, 0.56 and 1.29 ms CPU, at 1M float 1.6,
+   * 2.1 and 3.4 ms. On uniform random unit vectors (no structure; the hard case of LuceneVectorIndexRecallTest,
+   * 10,000 x 64-d) recall@10 is 0.82 with 50, 0.94 with 100 and 0.99 with 200 candidates. 100 keeps a margin over
+   * the point where real descriptors saturate and is more than twice as fast as 200; libraries of unusual
+   * descriptors may want more ({@link #withFanOut}).
    */
   public static final int DEFAULT_FAN_OUT_MULTIPLIER = 5;
 
-  public static final int DEFAULT_MIN_CANDIDATES = 200;
+  public static final int DEFAULT_MIN_CANDIDATES = 100;
   public static final int DEFAULT_RAM_BUFFER_MB = 64;
 
   /** Upper bound on candidates per query unless {@code k} itself is larger: keeps a careless fan-out bounded. */

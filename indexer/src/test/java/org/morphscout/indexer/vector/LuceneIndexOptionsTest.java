@@ -15,6 +15,9 @@ class LuceneIndexOptionsTest {
     assertThat(d.maxConn()).isEqualTo(16);
     assertThat(d.beamWidth()).isEqualTo(100);
     assertThat(d.quantization()).isEqualTo(Quantization.NONE);
+    // 100 candidates for a top-10 query: where recall on embedding-like vectors is 1.000 (docs/BENCHMARKS.md)
+    assertThat(d.candidates(10)).isEqualTo(100);
+    assertThat(d.candidates(24)).as("the neighbour graph's k").isEqualTo(120);
   }
 
   @Test

@@ -25,16 +25,21 @@ final class RecallMeter {
 
   private RecallMeter() {}
 
-  /** Loads {@code vectors} (ids = indices) into the index as appearance vectors and commits; returns CPU ms spent. */
   /**
-   * Builds an HNSW index of {@code vectors} in {@code dir} with {@code quantization}, measures recall@10 of
-   * {@code queries} against an exact scan, logs the figures under {@code label} and returns them.
+   * Builds an HNSW index of {@code vectors} in {@code dir} with the default options and {@code quantization},
+   * measures recall@10 of {@code queries} against an exact scan, logs the figures under {@code label} and returns them.
    */
   static Result hnswRecallAt10(Path dir, LuceneIndexOptions.Quantization quantization, float[][] vectors,
       float[][] queries, String label) throws IOException {
+    return hnswRecallAt10(dir, LuceneIndexOptions.defaults().withQuantization(quantization), vectors, queries, label);
+  }
+
+  /** As above with the given options. */
+  static Result hnswRecallAt10(Path dir, LuceneIndexOptions options, float[][] vectors, float[][] queries,
+      String label) throws IOException {
+    LuceneIndexOptions.Quantization quantization = options.quantization();
     BruteForceVectorIndex exact = new BruteForceVectorIndex();
     load(exact, vectors);
-    LuceneIndexOptions options = LuceneIndexOptions.defaults().withQuantization(quantization);
     try (LuceneVectorIndex hnsw = LuceneVectorIndex.open(dir, options)) {
       long buildMs = load(hnsw, vectors);
       Result result = measure(hnsw, exact, vectors, queries, 10);
@@ -45,6 +50,7 @@ final class RecallMeter {
     }
   }
 
+  /** Loads {@code vectors} (ids = indices) into the index as appearance vectors and commits; returns CPU ms spent. */
   static long load(VectorIndex index, float[][] vectors) throws IOException {
     long start = THREADS.getCurrentThreadCpuTime();
     for (int i = 0; i < vectors.length; i++) {
