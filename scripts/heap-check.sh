@@ -16,6 +16,7 @@
 # Measured 2026-12-01 on 2 shared cores, JDK 25, 3000x2000 JPEGs, default 2 threads (peak RSS counts the heap plus
 # ONNX Runtime's native memory, metaspace and code):
 #   N=2000 (1.3 GB): -Xmx256m PASS, peak RSS 512 MB, 540 s
+#   2026-12-02, with the pixel fingerprint, quiet machine: N=2000: -Xmx256m PASS, peak RSS 530 MB, 231 s
 #   N=300  (189 MB): -Xmx256m PASS, peak RSS 503 MB;  -Xmx384m PASS, 625 MB;  -Xmx512m PASS, 749 MB
 # What grows with N is the indexer's analysis cache during the neighbour-graph update, about 15-20 KB per image
 # (a 128 px byte-per-pixel mask plus vectors): some 40 MB at N=2000, but up to ~1 GB at its 50,000-entry cap.
