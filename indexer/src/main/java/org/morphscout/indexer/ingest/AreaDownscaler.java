@@ -1,6 +1,9 @@
 package org.morphscout.indexer.ingest;
 
 import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
+import java.awt.image.SinglePixelPackedSampleModel;
+import java.awt.image.WritableRaster;
 
 /**
  * Shrinks an ARGB image by exact area averaging (a box filter with fractional pixel coverage), the standard
@@ -39,10 +42,10 @@ public final class AreaDownscaler {
       throw new IllegalArgumentException(
           "area downscale needs 1 <= target <= source, got " + w + "x" + h + " -> " + tw + "x" + th);
     }
-    int[] argb = src.getRGB(0, 0, w, h, null, 0, w);
     if (tw == w && th == h && src.getType() == BufferedImage.TYPE_INT_ARGB) {
       return src;
     }
+    int[] argb = packedArgb(src); // read only
     // Pass 1: horizontal, into premultiplied float planes of tw x h (a, r*a, g*a, b*a), alpha in 0..1.
     Span[] xs = spans(w, tw);
     float[] mid = new float[tw * h * 4];
@@ -97,6 +100,25 @@ public final class AreaDownscaler {
     BufferedImage img = new BufferedImage(tw, th, BufferedImage.TYPE_INT_ARGB);
     img.setRGB(0, 0, tw, th, out, 0, tw);
     return img;
+  }
+
+  /**
+   * The pixels as {@code getRGB} returns them. A plain {@code TYPE_INT_ARGB} image (what the decoder hands over) stores
+   * exactly those ints, so its own array is returned, unchanged and not to be written: {@code getRGB} would convert
+   * pixel by pixel through the colour model, about a tenth of an indexing run's CPU time. Anything else (other types,
+   * sub-images sharing a larger buffer) goes through {@code getRGB}.
+   */
+  static int[] packedArgb(BufferedImage src) {
+    int w = src.getWidth();
+    int h = src.getHeight();
+    WritableRaster r = src.getRaster();
+    if (src.getType() == BufferedImage.TYPE_INT_ARGB && r.getDataBuffer() instanceof DataBufferInt db
+        && r.getSampleModel() instanceof SinglePixelPackedSampleModel sm && sm.getScanlineStride() == w
+        && db.getNumBanks() == 1 && db.getOffset() == 0 && r.getSampleModelTranslateX() == 0
+        && r.getSampleModelTranslateY() == 0 && db.getData().length == w * h) {
+      return db.getData();
+    }
+    return src.getRGB(0, 0, w, h, null, 0, w);
   }
 
   /** Source pixels (and their coverage fraction, summing to 1) that make up each of {@code n} output pixels. */

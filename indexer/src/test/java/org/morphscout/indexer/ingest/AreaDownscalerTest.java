@@ -118,4 +118,26 @@ class AreaDownscalerTest {
     assertThat(AreaDownscaler.fitWithin(300, 200, 768)).containsExactly(300, 200);
     assertThat(AreaDownscaler.fitWithin(100_000, 10, 768)).containsExactly(768, 1);
   }
+
+  @Test
+  void aSubImageSharingABiggerBufferGivesTheSameResultAsAPlainCopy() {
+    // The direct pixel-array path applies to plain ARGB images only; a sub-image (offset into a larger buffer) must
+    // take the getRGB path and still see its own pixels.
+    Random rnd = new Random(31);
+    BufferedImage big = new BufferedImage(60, 50, BufferedImage.TYPE_INT_ARGB);
+    for (int y = 0; y < 50; y++) {
+      for (int x = 0; x < 60; x++) {
+        big.setRGB(x, y, rnd.nextInt());
+      }
+    }
+    BufferedImage sub = big.getSubimage(7, 5, 41, 33);
+    BufferedImage copy = new BufferedImage(41, 33, BufferedImage.TYPE_INT_ARGB);
+    copy.setRGB(0, 0, 41, 33, sub.getRGB(0, 0, 41, 33, null, 0, 41), 0, 41);
+    assertThat(AreaDownscaler.packedArgb(copy)).containsExactly(sub.getRGB(0, 0, 41, 33, null, 0, 41));
+    BufferedImage a = AreaDownscaler.resize(sub, 13, 11);
+    BufferedImage b = AreaDownscaler.resize(copy, 13, 11);
+    assertThat(a.getRGB(0, 0, 13, 11, null, 0, 13)).containsExactly(b.getRGB(0, 0, 13, 11, null, 0, 13));
+    assertThat(b.getRGB(0, 0, 13, 11, null, 0, 13))
+        .containsExactly(reference(copy.getRGB(0, 0, 41, 33, null, 0, 41), 41, 33, 13, 11));
+  }
 }
