@@ -48,6 +48,10 @@ final class PairReasons {
     if (w.iouAligned() < cfg.reasonIou()) {
       out.add(fmt("silhouettes overlap poorly after alignment (IoU %.2f)", w.iouAligned()));
     }
+    if (w.turnedIou() - w.iouAligned() > cfg.reasonTurnGain()) { // false when no turned pose was tried (NaN)
+      out.add(fmt("B matches A's outline only when turned by %.0f degrees (IoU %.2f vs %.2f), which a morph of "
+          + "upright objects avoids", Math.abs(Math.toDegrees(w.turnedRotation())), w.turnedIou(), w.iouAligned()));
+    }
     if (w.meanDisplacement() > cfg.reasonEffort()) {
       out.add(fmt("the outline must move a lot to match (on average %.0f%% of the object's size)",
           100 * w.meanDisplacement()));

@@ -37,7 +37,8 @@ import java.util.Map;
  * {@code reasonEffort} [0.15], {@code reasonFold} [0.01], {@code reasonAppearance} [0.5] (1 - cosine),
  * {@code reasonDeltaE} [20], {@code reasonLightness} [40] (L* gap), {@code reasonContrast} [0.4] (std ratio),
  * {@code reasonAspect} [0.1] (|ln ratio|, about 10%), {@code reasonScale} [0.5], {@code reasonOffset} [0.25],
- * {@code reasonResolution} [0.25], {@code reasonBackground} [25] (deltaE00).
+ * {@code reasonResolution} [0.25], {@code reasonBackground} [25] (deltaE00), {@code reasonTurnGain} [0.15] (IoU a
+ * pose beyond the alignment's rotation limit, an object laid on its side, would gain over the upright alignment).
  */
 public record ScoreConfig(
     double overlapWeight,
@@ -81,14 +82,15 @@ public record ScoreConfig(
     double reasonScale,
     double reasonOffset,
     double reasonResolution,
-    double reasonBackground) {
+    double reasonBackground,
+    double reasonTurnGain) {
 
   public static final ScoreConfig DEFAULTS = new ScoreConfig(
       3.0, 1.5, 1.0, 1.5, 1.0, 0.75, 0.5, 0.5, 0.25, 0.5, 0.25, 0.25,
       0.3, 0.95, 0.15, 0.05, 0.6, 40, 50, 0.7, 0.5, 0.8, 0.5, 50,
       0.6, 0.75, 0.7, 320,
       65, 40,
-      0.6, 0.15, 0.01, 0.5, 20, 40, 0.4, 0.1, 0.5, 0.25, 0.25, 25);
+      0.6, 0.15, 0.01, 0.5, 20, 40, 0.4, 0.1, 0.5, 0.25, 0.25, 25, 0.15);
 
   public ScoreConfig {
     double[] weights = {overlapWeight, warpEffortWeight, foldSafetyWeight, appearanceWeight, colourWeight,
@@ -140,6 +142,7 @@ public record ScoreConfig(
     positive("reasonOffset", reasonOffset);
     range("reasonResolution", reasonResolution, 0, 1);
     positive("reasonBackground", reasonBackground);
+    range("reasonTurnGain", reasonTurnGain, 0, 1);
   }
 
   /**

@@ -90,6 +90,7 @@ public final class SimilarityAlignment {
     float[] gridA = Grids.rasterise(a, canvas);
 
     List<Similarity> candidates = new ArrayList<>();
+    List<Similarity> turned = new ArrayList<>(); // beyond the rotation limit: only reported
     boolean isotropic = ma.anisotropy() < ISOTROPY_LIMIT || mb.anisotropy() < ISOTROPY_LIMIT;
     for (boolean mirror : allowMirror ? new boolean[] {false, true} : new boolean[] {false}) {
       // A flip x -> -x turns B's axis angle theta into -theta (and its centroid x into -x).
@@ -98,11 +99,9 @@ public final class SimilarityAlignment {
       double[] rotations = isotropic ? new double[] {base, base + Math.PI, 0, Math.PI}
           : new double[] {base, base + Math.PI, 0};
       for (double rot : rotations) {
-        if (Math.abs(normalised(rot)) > maxRotation + 1e-9) {
-          continue;
-        }
         // through() applies the flip itself, so pass B's unflipped centroid.
-        candidates.add(Similarity.through(scale, rot, mirror, mb.cx(), mb.cy(), ma.cx(), ma.cy()));
+        Similarity sim = Similarity.through(scale, rot, mirror, mb.cx(), mb.cy(), ma.cx(), ma.cy());
+        (Math.abs(normalised(rot)) > maxRotation + 1e-9 ? turned : candidates).add(sim);
       }
     }
     // Prefer upright and unflipped: photographs are mostly taken upright, and symmetric outlines (an egg, a bottle)
@@ -123,7 +122,16 @@ public final class SimilarityAlignment {
         bestIou = iou;
       }
     }
-    return new Alignment(best, canvas, gridA, bestB, bestIou);
+    double turnedIou = Double.NaN;
+    double turnedRotation = Double.NaN;
+    for (Similarity sim : turned) {
+      double iou = Grids.iou(gridA, Grids.rasterise(b, canvas, sim));
+      if (Double.isNaN(turnedIou) || iou > turnedIou) {
+        turnedIou = iou;
+        turnedRotation = sim.rotation();
+      }
+    }
+    return new Alignment(best, canvas, gridA, bestB, bestIou, turnedIou, turnedRotation);
   }
 
   /** An angle in (-pi, pi]. */

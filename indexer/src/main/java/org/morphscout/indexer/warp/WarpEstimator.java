@@ -68,6 +68,7 @@ public final class WarpEstimator {
     double size = Math.sqrt(Math.max(1.0, Grids.sum(a)));
     double mean = count == 0 ? 0 : sum / count / size;
     return new WarpResult(iouBefore, aligned.iou(), Grids.iou(a, warped), mean, max / size,
-        field.foldFraction(union), aligned.similarity(), aligned.canvas(), field);
+        field.foldFraction(union), aligned.similarity(), aligned.canvas(), field, aligned.turnedIou(),
+        aligned.turnedRotation());
   }
 }

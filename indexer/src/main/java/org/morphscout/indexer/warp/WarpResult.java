@@ -15,6 +15,9 @@ package org.morphscout.indexer.warp;
  * @param similarity the transform from B's mask to A's mask coordinates
  * @param canvas where the field's grid sits over A's mask
  * @param field displacements on the canvas: A's point x corresponds to aligned B's point x + u(x), in canvas pixels
+ * @param turnedIou overlap B would reach if turned further than the alignment allows (laid on its side or upside
+ *     down), NaN when no such pose was tried; see {@link Alignment#turnedIou()}
+ * @param turnedRotation the rotation of that pose in radians, NaN with {@code turnedIou}
  */
 public record WarpResult(
     double iouBefore,
@@ -25,4 +28,6 @@ public record WarpResult(
     double foldFraction,
     Similarity similarity,
     Canvas canvas,
-    DisplacementField field) {}
+    DisplacementField field,
+    double turnedIou,
+    double turnedRotation) {}
