@@ -209,7 +209,10 @@ public final class PairsView extends BorderPane {
       case "warpEffort" -> "Warp";
       case "foldSafety" -> "Folds";
       case "aspect" -> "Aspect";
-      default -> component.length() > 10 ? component.substring(0, 10) : component;
+      default -> {
+        String h = component.length() > 10 ? component.substring(0, 10) : component;
+        yield h.isEmpty() ? h : Character.toUpperCase(h.charAt(0)) + h.substring(1);
+      }
     };
   }
 
