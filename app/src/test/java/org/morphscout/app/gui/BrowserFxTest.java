@@ -3,7 +3,6 @@ package org.morphscout.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 import java.util.function.BooleanSupplier;
 import javafx.scene.control.ListView;
 import javafx.scene.control.TabPane;
@@ -68,7 +67,7 @@ class BrowserFxTest {
   }
 
   static void waitUntil(BooleanSupplier condition) throws Exception {
-    WaitForAsyncUtils.waitFor(10, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition::getAsBoolean).get());
+    HeadlessFx.waitUntil(10, condition);
   }
 
   private Tile tile(FxRobot robot, String name) {

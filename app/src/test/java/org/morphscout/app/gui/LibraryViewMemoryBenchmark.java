@@ -10,7 +10,6 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
-import java.util.concurrent.TimeUnit;
 import java.util.function.BooleanSupplier;
 import javafx.scene.Node;
 import javafx.scene.control.ListView;
@@ -233,7 +232,7 @@ class LibraryViewMemoryBenchmark {
   }
 
   private static void waitUntil(BooleanSupplier condition) throws Exception {
-    WaitForAsyncUtils.waitFor(WAIT_S, TimeUnit.SECONDS, () -> onFx(condition::getAsBoolean));
+    HeadlessFx.waitUntil(WAIT_S, condition);
   }
 
   private static <T> T onFx(java.util.concurrent.Callable<T> work) throws Exception {

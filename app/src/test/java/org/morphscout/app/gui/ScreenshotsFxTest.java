@@ -95,7 +95,7 @@ class ScreenshotsFxTest {
   }
 
   static void waitUntil(BooleanSupplier condition) throws Exception {
-    WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(condition::getAsBoolean).get());
+    HeadlessFx.waitUntil(90, condition);
   }
 
   static void fx(Runnable r) throws Exception {

@@ -150,13 +150,23 @@ public final class BadFiles {
 
   /** An animated GIF (GIF89a with a Graphic Control Extension per frame, 0.5 s each) of the given frames. */
   public static Path animatedGif(Path dir, String name, BufferedImage... frames) throws IOException {
-    Path file = dir.resolve(name);
+    BufferedImage[] indexedFrames = new BufferedImage[frames.length];
+    for (int i = 0; i < frames.length; i++) {
+      indexedFrames[i] = indexed(frames[i]);
+    }
+    return writeAnimatedGif(dir.resolve(name), indexedFrames);
+  }
+
+  /**
+   * Writes already palette-indexed frames as an animated GIF (GIF89a, a Graphic Control Extension per frame, 0.5 s
+   * each), for callers that need their own palette.
+   */
+  public static Path writeAnimatedGif(Path file, BufferedImage... indexedFrames) throws IOException {
     ImageWriter writer = ImageIO.getImageWritersByFormatName("gif").next();
     try (ImageOutputStream ios = ImageIO.createImageOutputStream(file.toFile())) {
       writer.setOutput(ios);
       writer.prepareWriteSequence(null);
-      for (BufferedImage f : frames) {
-        BufferedImage frame = indexed(f);
+      for (BufferedImage frame : indexedFrames) {
         IIOMetadata meta = writer.getDefaultImageMetadata(new ImageTypeSpecifier(frame), null);
         IIOMetadataNode root = (IIOMetadataNode) meta.getAsTree("javax_imageio_gif_image_1.0");
         IIOMetadataNode gce = new IIOMetadataNode("GraphicControlExtension");
