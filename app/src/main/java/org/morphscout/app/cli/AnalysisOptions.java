@@ -7,7 +7,9 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.feature.ModelDescription;
 import org.morphscout.indexer.ingest.DecodeOptions;
 import org.morphscout.indexer.library.AnalysisSetup;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
 
 /** Options that choose how images are analysed: shared by index and the commands that analyse files on the fly. */
 final class AnalysisOptions {
@@ -32,9 +34,17 @@ final class AnalysisOptions {
           + "learned (the optional salient-object model; see 'models add-salient'). Default: ${DEFAULT-VALUE}.")
   AnalysisSetup.SilhouetteMode silhouettes;
 
-  @Option(names = "--max-megapixels", paramLabel = "<mp>", defaultValue = "250",
-      description = "Refuse images larger than this before decoding (default: ${DEFAULT-VALUE}).")
+  @Spec(Spec.Target.MIXEE) CommandSpec mixee;
+
   double maxMegapixels;
+
+  @Option(names = "--max-megapixels", paramLabel = "<mp>", defaultValue = "250",
+      description = "Refuse images larger than this before decoding (default: ${DEFAULT-VALUE}; at most 2147).")
+  void maxMegapixels(double mp) {
+    // Checked while parsing: a usage error before any catalog is opened.
+    OptionCheck.of(mixee).positive("--max-megapixels", mp, DecodeOptions.MAX_PIXEL_CAP / 1e6);
+    maxMegapixels = mp;
+  }
 
   AnalysisSetup setup() {
     AnalysisSetup s = AnalysisSetup.defaults()

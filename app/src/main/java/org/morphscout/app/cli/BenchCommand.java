@@ -93,6 +93,10 @@ final class BenchCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    OptionCheck check = OptionCheck.of(spec).between("--photos", photos == null ? 1 : photos, 1, 100_000);
+    if (vectorSizes != null) {
+      vectorSizes.forEach(n -> check.between("--vectors", n, 1, 100_000_000));
+    }
     err = spec.commandLine().getErr();
     int photoCount = photos != null ? photos : quick ? 60 : 300;
     List<Integer> sizes = vectorSizes != null ? vectorSizes : quick ? List.of(10_000, 100_000)

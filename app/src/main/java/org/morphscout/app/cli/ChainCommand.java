@@ -78,6 +78,9 @@ final class ChainCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    OptionCheck.of(spec).between("--alternatives", alternatives, 1, 20)
+        .between("--min-steps", minSteps, 1, ChainQuery.STEP_LIMIT)
+        .between("--max-steps", maxSteps, minSteps, ChainQuery.STEP_LIMIT).between("--shape-weight", shapeWeight, 0, 1);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openExisting(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
@@ -87,21 +90,35 @@ final class ChainCommand implements Callable<Integer> {
       avoid.forEach(p -> avoidIds.add(library.require(p).id()));
       List<Long> viaIds = new ArrayList<>();
       via.forEach(p -> viaIds.add(library.require(p).id()));
-      ChainQuery query;
-      try {
-        query = ChainQuery.between(a.id(), b.id()).withAlternatives(alternatives).withSteps(minSteps, maxSteps)
-            .withShapeWeight(shapeWeight).withAvoid(avoidIds).withVia(viaIds);
-      } catch (IllegalArgumentException e) {
-        throw new picocli.CommandLine.ParameterException(spec.commandLine(), e.getMessage());
-      }
+      checkEnds(a.id(), b.id(), avoidIds, viaIds);
+      ChainQuery query = ChainQuery.between(a.id(), b.id()).withAlternatives(alternatives)
+          .withSteps(minSteps, maxSteps).withShapeWeight(shapeWeight).withAvoid(avoidIds).withVia(viaIds);
       PairService pairs = new PairService(context, scoring.config());
       ChainAnswer answer = new ChainService(context, pairs).chains(a, b, query);
       if (sheet != null) {
         org.morphscout.indexer.library.Sheets.chains(context.library(), answer, sheet);
-        spec.commandLine().getErr().println("contact sheet written to " + sheet.toAbsolutePath().normalize());
+        spec.commandLine().getErr()
+            .println("contact sheet written to " + Terminal.safe(sheet.toAbsolutePath().normalize().toString()));
       }
       print(out, answer, context);
       return ExitCodes.OK;
+    }
+  }
+
+  /** The query's rules on ends, waypoints and avoided images, as usage errors in the user's words (no ids). */
+  private void checkEnds(long a, long b, Set<Long> avoidIds, List<Long> viaIds) {
+    OptionCheck check = OptionCheck.of(spec);
+    if (a == b) {
+      throw check.fail("<from> and <to> are the same image; a chain needs two different images");
+    }
+    if (new LinkedHashSet<>(viaIds).size() != viaIds.size() || viaIds.contains(a) || viaIds.contains(b)) {
+      throw check.fail("--via images must differ from each other and from <from> and <to>");
+    }
+    if (avoidIds.contains(a) || avoidIds.contains(b) || viaIds.stream().anyMatch(avoidIds::contains)) {
+      throw check.fail("--avoid must not name <from>, <to> or a --via image");
+    }
+    if (viaIds.size() + 1 > maxSteps) {
+      throw check.fail("--max-steps " + maxSteps + " is too few to pass through " + viaIds.size() + " --via images");
     }
   }
 
@@ -152,14 +169,14 @@ final class ChainCommand implements Callable<Integer> {
       }
       return;
     }
-    out.printf("from %s%n  to %s%n", answer.from().path(), answer.to().path());
+    out.printf("from %s%n  to %s%n", Terminal.safe(answer.from().path()), Terminal.safe(answer.to().path()));
     out.printf("direct pair: score %s (%s)%s%n", Text.num(answer.direct().score(), 1),
         answer.direct().verdict().label(),
         answer.direct().reasons().isEmpty() ? "" : ": " + PairRows.reasons(answer.direct().reasons()));
     if (answer.chains().isEmpty()) {
       out.println("no chain: " + answer.reason());
       if (answer.closestReachable() >= 0) {
-        out.println("closest reachable image to the end: " + path.apply(answer.closestReachable()));
+        out.println("closest reachable image to the end: " + Terminal.safe(path.apply(answer.closestReachable())));
       }
       return;
     }
@@ -168,12 +185,12 @@ final class ChainCommand implements Callable<Integer> {
       out.printf("%nchain %d: %d steps, largest step %s, evenness %s, overlap with earlier chains %s%n", ++n,
           d.steps().size(), Text.num(d.chain().maxStep(), 3), Text.num(d.chain().evenness(), 2),
           Text.num(d.chain().overlap(), 2));
-      out.printf("  %s%n", path.apply(d.chain().images().get(0)));
+      out.printf("  %s%n", Terminal.safe(path.apply(d.chain().images().get(0))));
       for (StepDetail s : d.steps()) {
         Map<String, Object> st = step(s, path);
         out.printf("    step cost %s | score %s %s | IoU %s, warp effort %s, colour gap %s%n  %s%n",
             Text.num(s.cost(), 3), Text.num(s.score().score(), 0), s.score().verdict().label(), st.get("alignedIou"),
-            st.get("warpEffort"), st.get("colourGap"), path.apply(s.b()));
+            st.get("warpEffort"), st.get("colourGap"), Terminal.safe(path.apply(s.b())));
       }
     }
   }

@@ -1,37 +1,26 @@
 package org.morphscout.app.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
+import org.morphscout.indexer.text.CsvCells;
 
-/** Writes RFC 4180 CSV with a header row to a command's stdout. */
+/** Writes RFC 4180 CSV with a header row to a command's stdout, every cell under {@link CsvCells}' formula rule. */
 final class CsvOut implements AutoCloseable {
-  private final CSVPrinter printer;
+  private final CsvCells.Printer printer;
 
   CsvOut(PrintWriter out, String... header) {
-    try {
-      printer = new CSVPrinter(out, CSVFormat.RFC4180.builder().setHeader(header).get());
-    } catch (IOException e) {
-      throw new UncheckedIOException(e);
-    }
+    printer = CsvCells.printer(out, header);
   }
 
   void row(Object... values) {
-    try {
-      printer.printRecord(values);
-    } catch (IOException e) {
-      throw new UncheckedIOException(e);
-    }
+    printer.row(values);
+  }
+
+  void row(java.util.List<?> values) {
+    printer.row(values);
   }
 
   @Override
   public void close() {
-    try {
-      printer.flush();
-    } catch (IOException e) {
-      throw new UncheckedIOException(e);
-    }
+    printer.close();
   }
 }

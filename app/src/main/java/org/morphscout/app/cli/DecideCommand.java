@@ -39,9 +39,18 @@ final class DecideCommand implements Callable<Integer> {
   @Option(names = "--json", description = "Write JSON to stdout.")
   boolean json;
 
+  /** The verdict word as a usage error (exit 2) when it is neither approve(d) nor reject(ed). */
+  static Verdict verdict(CommandSpec spec, String what, String word) {
+    try {
+      return Verdict.parse(word);
+    } catch (org.morphscout.indexer.MorphscoutException e) {
+      throw OptionCheck.of(spec).fail(what + " must be approve or reject, got '" + Terminal.safe(word) + "'");
+    }
+  }
+
   @Override
   public Integer call() throws Exception {
-    Verdict v = Verdict.parse(verdict);
+    Verdict v = verdict(spec, "approve|reject", verdict);
     try (Library library = Library.openExisting(root.catalogDir())) {
       ImageRow ra = library.require(a);
       ImageRow rb = library.require(b);
@@ -54,8 +63,8 @@ final class DecideCommand implements Callable<Integer> {
         doc.put("note", note);
         JsonOut.write(spec.commandLine().getOut(), doc);
       } else {
-        spec.commandLine().getOut().printf("%s: %s <-> %s%s%n", v.word(), ra.path(), rb.path(),
-            note == null ? "" : "  (" + note + ")");
+        spec.commandLine().getOut().printf("%s: %s <-> %s%s%n", v.word(), Terminal.safe(ra.path()),
+            Terminal.safe(rb.path()), note == null ? "" : "  (" + Terminal.safe(note) + ")");
       }
       return ExitCodes.OK;
     }

@@ -34,9 +34,9 @@ final class DecisionsCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    Verdict wanted = only == null ? null : DecideCommand.verdict(spec, "--only", only);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openExisting(root.catalogDir())) {
-      Verdict wanted = only == null ? null : Verdict.parse(only);
       List<Decision> decisions = new ArrayList<>();
       for (Decision d : library.decisions().all()) {
         if (wanted == null || d.verdict() == wanted) {
@@ -65,8 +65,8 @@ final class DecisionsCommand implements Callable<Integer> {
         out.println("no decisions yet (morphscout decide A B approve|reject)");
       } else {
         for (Decision d : decisions) {
-          out.printf("%-8s %s%n         %s%s%n", d.verdict().word(), d.pathA(), d.pathB(),
-              d.note() == null ? "" : "\n         note: " + d.note());
+          out.printf("%-8s %s%n         %s%s%n", d.verdict().word(), Terminal.safe(d.pathA()),
+              Terminal.safe(d.pathB()), d.note() == null ? "" : "\n         note: " + Terminal.safe(d.note()));
         }
       }
       return ExitCodes.OK;

@@ -67,6 +67,7 @@ final class DemoCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    OptionCheck.of(spec).between("--products", products, 1, 5000);
     out = spec.commandLine().getOut();
     Path base = dir.toAbsolutePath().normalize();
     Path libraryDir = base.resolve("library");

@@ -27,12 +27,12 @@ final class ErrorHandler implements IExecutionExceptionHandler {
       return ExitCodes.CANCELLED;
     }
     if (t instanceof MorphscoutException) {
-      cmd.getErr().println(name + ": " + t.getMessage());
+      cmd.getErr().println(name + ": " + Terminal.safe(t.getMessage()));
       LOG.debug("details", t);
       return ExitCodes.ERROR;
     }
     if (t instanceof NoSuchFileException nsf) {
-      cmd.getErr().println(name + ": file not found: " + nsf.getFile());
+      cmd.getErr().println(name + ": file not found: " + Terminal.safe(nsf.getFile()));
       return ExitCodes.ERROR;
     }
     if (t instanceof IOException) {

@@ -71,6 +71,8 @@ final class IndexCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    OptionCheck.of(spec).between("--threads", threads == null ? 1 : threads, 1, 256)
+        .between("--time-limit", timeLimit, 1, 86_400).between("--neighbours", neighbours, 1, 256);
     PrintWriter out = spec.commandLine().getOut();
     IndexOptions options = IndexOptions.defaults()
         .withFollowLinks(followLinks)
@@ -139,7 +141,7 @@ final class IndexCommand implements Callable<Integer> {
     if (!r.failures().isEmpty()) {
       out.println("failures:");
       for (IndexReport.FileFailure f : r.failures()) {
-        out.printf("  %s%n    %s%n", f.path(), f.reason());
+        out.printf("  %s%n    %s%n", Terminal.safe(f.path()), Terminal.safe(f.reason()));
       }
     }
   }

@@ -88,6 +88,7 @@ public final class MorphscoutCommand implements Callable<Integer> {
     cl.setOut(out);
     cl.setErr(err);
     cl.setExecutionExceptionHandler(new ErrorHandler());
+    cl.setParameterExceptionHandler(new UsageErrorHandler());
     cl.setCaseInsensitiveEnumValuesAllowed(true);
     cl.setUsageHelpLongOptionsMaxWidth(30);
     cl.setUsageHelpAutoWidth(true);

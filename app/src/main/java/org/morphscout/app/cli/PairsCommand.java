@@ -60,6 +60,8 @@ final class PairsCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    OptionCheck.of(spec).between("--top", top, 1, Integer.MAX_VALUE).between("--candidates", candidates, 1, 1000)
+        .between("--min-score", minScore, 0, 100);
     PrintWriter out = spec.commandLine().getOut();
     PairQuery query = new PairQuery(candidates, top, minScore);
     try (Library library = Library.openExisting(root.catalogDir());
@@ -126,7 +128,7 @@ final class PairsCommand implements Callable<Integer> {
     for (ScoredPair p : result.pairs()) {
       String decided = decisions.find(p.a(), p.b()).map(d -> "  [" + d.verdict().word() + "]").orElse("");
       out.printf("%2d. %5s %-4s %s%n             %s%s%n", ++rank, Text.num(p.score().score(), 1),
-          p.score().verdict().label(), paths.of(p.a()), paths.of(p.b()), decided);
+          p.score().verdict().label(), Terminal.safe(paths.of(p.a())), Terminal.safe(paths.of(p.b())), decided);
       if (!p.score().reasons().isEmpty()) {
         out.printf("             %s%n", PairRows.reasons(p.score().reasons()));
       }
@@ -148,7 +150,8 @@ final class PairsCommand implements Callable<Integer> {
       if (result.duplicates().isEmpty()) {
         out.println("no near-duplicates found");
       }
-      result.duplicates().forEach(d -> out.printf("%s%n  = %s%n", paths.of(d.a()), paths.of(d.b())));
+      result.duplicates().forEach(d -> out.printf("%s%n  = %s%n", Terminal.safe(paths.of(d.a())),
+          Terminal.safe(paths.of(d.b()))));
     }
   }
 }

@@ -172,9 +172,10 @@ final class ScreenCommand implements Callable<Integer> {
         case WARN -> warn++;
         case FAIL -> fail++;
       }
-      out.printf("%-4s %5s  %s%n           %s%n", r.verdict().label(), Text.num(r.score(), 1), r.a(), r.b());
+      out.printf("%-4s %5s  %s%n           %s%n", r.verdict().label(), Text.num(r.score(), 1), Terminal.safe(r.a()),
+          Terminal.safe(r.b()));
       if (!r.reasons().isEmpty()) {
-        out.printf("           %s%n", PairRows.reasons(r.reasons()));
+        out.printf("           %s%n", Terminal.safe(PairRows.reasons(r.reasons())));
       }
     }
     out.printf("%d pairs: %d pass, %d warn, %d fail%n", results.size(), pass, warn, fail);

@@ -45,9 +45,7 @@ final class SimilarCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    if (k < 1) {
-      throw new picocli.CommandLine.ParameterException(spec.commandLine(), "-k must be at least 1");
-    }
+    OptionCheck.of(spec).between("-k", k, 1, 10_000);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openExisting(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
@@ -67,9 +65,9 @@ final class SimilarCommand implements Callable<Integer> {
         doc.put("results", results);
         JsonOut.write(out, doc);
       } else {
-        out.printf("nearest to %s by %s:%n", query.path(), by.name().toLowerCase(java.util.Locale.ROOT));
+        out.printf("nearest to %s by %s:%n", Terminal.safe(query.path()), by.name().toLowerCase(java.util.Locale.ROOT));
         for (SimilarityService.Hit h : hits) {
-          out.printf("  %s  %s%n", Text.num(h.distance(), 3), h.path());
+          out.printf("  %s  %s%n", Text.num(h.distance(), 3), Terminal.safe(h.path()));
         }
       }
       return ExitCodes.OK;

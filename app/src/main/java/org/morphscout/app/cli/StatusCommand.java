@@ -59,9 +59,10 @@ final class StatusCommand implements Callable<Integer> {
         JsonOut.write(out, doc);
         return ExitCodes.OK;
       }
-      out.printf("catalog   %s (%s)%n", library.catalog().dir(), Text.bytes(bytes));
+      out.printf("catalog   %s (%s)%n", Terminal.safe(library.catalog().dir().toString()), Text.bytes(bytes));
       out.printf("model     %s%n", model);
-      out.printf("roots     %s%n", roots.isEmpty() ? "none" : String.join("\n          ", roots));
+      out.printf("roots     %s%n",
+          roots.isEmpty() ? "none" : String.join("\n          ", roots.stream().map(Terminal::safe).toList()));
       out.printf("images    %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
           counts.get(ImageStatus.PENDING), counts.get(ImageStatus.FAILED), counts.get(ImageStatus.MISSING));
       out.printf("decisions %d%n", library.decisions().count());
@@ -69,7 +70,7 @@ final class StatusCommand implements Callable<Integer> {
         out.println();
         out.println("failures:");
         for (ImageStore.Failure f : failures) {
-          out.printf("  %s%n    %s%n", f.path(), f.reason());
+          out.printf("  %s%n    %s%n", Terminal.safe(f.path()), Terminal.safe(f.reason()));
         }
       }
       return ExitCodes.OK;

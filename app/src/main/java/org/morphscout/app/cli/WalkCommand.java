@@ -58,6 +58,7 @@ final class WalkCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
+    OptionCheck.of(spec).between("--shape-weight", shapeWeight, 0, 1);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openExisting(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
@@ -71,7 +72,8 @@ final class WalkCommand implements Callable<Integer> {
             String.format(java.util.Locale.ROOT, "total %.3f · largest step %.3f · %.0f%% better than the order given",
                 answer.result().total(), answer.result().largestStep(), 100 * answer.result().improvement()),
             answer.images().stream().map(ImageAnalysis::id).toList(), answer.steps(), sheet);
-        spec.commandLine().getErr().println("contact sheet written to " + sheet.toAbsolutePath().normalize());
+        spec.commandLine().getErr()
+            .println("contact sheet written to " + Terminal.safe(sheet.toAbsolutePath().normalize().toString()));
       }
       print(out, answer);
       return ExitCodes.OK;
@@ -100,7 +102,7 @@ final class WalkCommand implements Callable<Integer> {
     }
     for (int i = 0; i < a.images().size(); i++) {
       out.printf("%3d. %s%s%n", i + 1, i == 0 ? "      " : Text.num(a.steps().get(i - 1), 3) + " ",
-          a.images().get(i).path());
+          Terminal.safe(a.images().get(i).path()));
     }
     out.printf("total %s, largest step %s; the order given totals %s (%s%% better)%n", Text.num(a.result().total(), 3),
         Text.num(a.result().largestStep(), 3), Text.num(a.result().inputTotal(), 3),

@@ -229,7 +229,7 @@ class QueryCommandsTest {
     assertThat(replaced.get("note").asText()).isEqualTo("too far apart");
 
     Cli.Run unknown = cli.run("decide", a, b, "maybe");
-    unknown.failsCleanly(ExitCodes.ERROR);
+    unknown.failsCleanly(ExitCodes.USAGE);
     assertThat(unknown.err()).contains("maybe", "approve", "reject");
     assertThat(decisionOn(a, b).get("verdict").asText()).isEqualTo("rejected");
   }

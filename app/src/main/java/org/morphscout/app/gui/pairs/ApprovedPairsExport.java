@@ -11,9 +11,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.morphscout.indexer.catalog.DecisionStore;
+import org.morphscout.indexer.text.CsvCells;
 
 /**
  * Writes approved pairs as CSV (RFC 4180, header row) or as a JSON array of objects. Columns: a_id, a_path, b_id,
@@ -34,9 +33,9 @@ final class ApprovedPairsExport {
     }
     try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
       if (format == ExportFormat.CSV) {
-        try (CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder().setHeader(COLUMNS).get())) {
+        try (CsvCells.Printer csv = CsvCells.printer(w, COLUMNS)) {
           for (DecisionStore.Decision d : approved) {
-            csv.printRecord(d.imageA(), d.pathA(), d.imageB(), d.pathB(), d.note() == null ? "" : d.note(),
+            csv.row(d.imageA(), d.pathA(), d.imageB(), d.pathB(), d.note() == null ? "" : d.note(),
                 d.decidedAt());
           }
         }

@@ -14,13 +14,12 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 import org.morphscout.app.gui.Messages;
 import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
 import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.text.CsvCells;
 
 /**
  * A walkthrough: a set of images (the grid's selection, or a folder), ordered smoothly, with the size of each step;
@@ -176,11 +175,10 @@ public final class WalkthroughViewModel {
       Files.createDirectories(parent);
     }
     try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
-        CSVPrinter csv = new CSVPrinter(w, CSVFormat.RFC4180.builder()
-            .setHeader("position", "id", "path", "step_to_next").get())) {
+        CsvCells.Printer csv = CsvCells.printer(w, "position", "id", "path", "step_to_next")) {
       for (int i = 0; i < rows.size(); i++) {
         String step = i < steps.size() ? String.format(Locale.ROOT, "%.4f", steps.get(i)) : "";
-        csv.printRecord(i + 1, rows.get(i).id(), rows.get(i).path(), step);
+        csv.row(i + 1, rows.get(i).id(), rows.get(i).path(), step);
       }
     }
   }

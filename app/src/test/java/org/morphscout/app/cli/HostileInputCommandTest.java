@@ -1,0 +1,85 @@
+package org.morphscout.app.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.demo.Archetype;
+import org.morphscout.demo.FamilyItem;
+import org.morphscout.demo.TestFamilies;
+
+/** Hostile values on the command line: options out of range, formulas in notes, control characters in text. */
+class HostileInputCommandTest {
+  private static final long SEED = 1811;
+
+  @TempDir static Path tmp;
+  static Cli cli;
+  static List<String> images = new ArrayList<>();
+
+  @BeforeAll
+  static void indexThreeImages() throws IOException {
+    List<FamilyItem> items = TestFamilies.silhouetteFamily(SEED, 3, Archetype.VASE, Archetype.BOTTLE);
+    for (int i = 0; i < items.size(); i++) {
+      images.add(Cli.abs(Cli.png(tmp.resolve("library/m" + i + ".png"), items.get(i).image())));
+    }
+    cli = new Cli(tmp.resolve("catalog"));
+    cli.run("index", tmp.resolve("library").toString(), "--json", "--threads", "1").succeeds();
+  }
+
+  @Test
+  void everyOptionOutOfRangeIsAUsageErrorNamingTheOption() {
+    String a = images.get(0);
+    String b = images.get(1);
+    String[][] lines = {
+      {"index", "--threads", "0"}, {"index", "--threads", "999"}, {"index", "--neighbours", "-3"},
+      {"index", "--time-limit", "0"}, {"index", "--max-megapixels", "-5"}, {"index", "--max-megapixels", "NaN"},
+      {"index", "--max-megapixels", "Infinity"}, {"pairs", "--top", "0"}, {"pairs", "--candidates", "0"},
+      {"pairs", "--min-score", "NaN"}, {"pairs", "--min-score", "101"}, {"walk", "--shape-weight", "NaN"},
+      {"walk", "--shape-weight", "2"}, {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--delay", "-5"},
+      {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--frames-per-step", "1"},
+      {"chain", a, b, "--alternatives", "0"}, {"chain", a, b, "--min-steps", "5", "--max-steps", "4"},
+      {"chain", a, b, "--shape-weight", "-1"}, {"similar", a, "-k", "0"}, {"demo", "--products", "0"},
+      {"bench", "--photos", "0"},
+    };
+    for (String[] line : lines) {
+      Cli.Run run = cli.run(line).failsCleanly(ExitCodes.USAGE);
+      String option = java.util.Arrays.stream(line).filter(s -> s.startsWith("-")).reduce((x, y) -> y).orElseThrow();
+      assertThat(run.err()).as("%s", String.join(" ", line)).contains(option).doesNotContain("unexpected",
+          "IllegalArgument");
+    }
+  }
+
+  @Test
+  void chainEndsAndWaypointsAreNamedNotNumbered() {
+    Cli.Run same = cli.run("chain", images.get(0), images.get(0)).failsCleanly(ExitCodes.USAGE);
+    assertThat(same.err()).contains("same image").doesNotContainPattern("got \\d+");
+    Cli.Run via = cli.run("chain", images.get(0), images.get(2), "--via", images.get(0)).failsCleanly(ExitCodes.USAGE);
+    assertThat(via.err()).contains("--via").doesNotContainPattern("\\[\\d+");
+  }
+
+  @Test
+  void badVerdictsAreUsageErrors() {
+    cli.run("decide", images.get(0), images.get(1), "perhaps").failsCleanly(ExitCodes.USAGE);
+    assertThat(cli.run("decisions", "--only", "maybe").failsCleanly(ExitCodes.USAGE).err()).contains("--only");
+  }
+
+  @Test
+  void formulasInNotesAreNeutralisedInCsvAndControlCharactersEscapedInText() {
+    String note = "=HYPERLINK(\"http://example.invalid\",\"click\")";
+    cli.run("decide", images.get(0), images.get(1), "approve", "--note", note).succeeds();
+    Cli.Run csv = cli.run("decisions", "--csv").succeeds();
+    assertThat(csv.csv()).anySatisfy(r -> assertThat(r.get("note")).isEqualTo("'" + note));
+
+    String hostile = "\u001b[2J\u0007bell\rhidden";
+    cli.run("decide", images.get(1), images.get(2), "reject", "--note", hostile).succeeds();
+    Cli.Run text = cli.run("decisions").succeeds();
+    assertThat(text.out()).doesNotContain("\u001b", "\u0007", "\r").contains("\\x1B[2J\\x07bell\\rhidden");
+    // JSON keeps the note exactly (JSON escapes control characters itself).
+    assertThat(cli.run("decisions", "--json").succeeds().json().toString()).contains("\\u001B[2J");
+  }
+}
