@@ -16,6 +16,7 @@ import org.morphscout.indexer.library.ChainService.ChainAnswer;
 import org.morphscout.indexer.library.ChainService.ChainDetail;
 import org.morphscout.indexer.library.ChainService.StepDetail;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.OutputFile;
 import org.morphscout.indexer.library.PairService;
 import org.morphscout.indexer.library.QueryContext;
 import picocli.CommandLine.ArgGroup;
@@ -86,6 +87,9 @@ final class ChainCommand implements Callable<Integer> {
         QueryContext context = new QueryContext(library, analysis.setup())) {
       ImageAnalysis a = context.resolve(from);
       ImageAnalysis b = context.resolve(to);
+      if (sheet != null) {
+        OutputFile.check(sheet, List.of(Path.of(a.path()), Path.of(b.path())));
+      }
       Set<Long> avoidIds = new LinkedHashSet<>();
       avoid.forEach(p -> avoidIds.add(library.require(p).id()));
       List<Long> viaIds = new ArrayList<>();

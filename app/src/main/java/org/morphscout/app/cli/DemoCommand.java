@@ -195,7 +195,8 @@ final class DemoCommand implements Callable<Integer> {
 
     if (previewStops.size() >= 2) {
       Path gif = outputs.resolve("preview.gif");
-      PreviewService.write(new PreviewService(context).frames(previewStops, 10), gif, 90);
+      PreviewService.write(new PreviewService(context).frames(previewStops, 10), gif, 90,
+          previewStops.stream().map(s -> Path.of(s.path())).toList());
       heading("A preview morph along the start of the chain");
       out.printf("  animation: %s%n", gif);
     }

@@ -54,8 +54,10 @@ final class PreviewCommand implements Callable<Integer> {
       for (String image : images) {
         stops.add(context.resolve(image));
       }
+      List<Path> inputs = stops.stream().map(s -> Path.of(s.path())).toList();
+      PreviewService.checkOutput(out, inputs);
       List<BufferedImage> frames = new PreviewService(context).frames(stops, framesPerStep);
-      PreviewService.write(frames, out, delay);
+      PreviewService.write(frames, out, delay, inputs);
       spec.commandLine().getOut().printf("preview of %d frames written to %s%n", frames.size(),
           out.toAbsolutePath().normalize());
       return ExitCodes.OK;

@@ -10,6 +10,7 @@ import java.util.concurrent.Callable;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.chain.StepCostModel;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.OutputFile;
 import org.morphscout.indexer.library.QueryContext;
 import org.morphscout.indexer.library.Sheets;
 import org.morphscout.indexer.library.WalkService;
@@ -64,6 +65,9 @@ final class WalkCommand implements Callable<Integer> {
         QueryContext context = new QueryContext(library, analysis.setup())) {
       WalkService service = new WalkService(context);
       List<ImageAnalysis> images = service.select(items);
+      if (sheet != null) {
+        OutputFile.check(sheet, images.stream().map(i -> Path.of(i.path())).toList());
+      }
       ImageAnalysis s = start == null ? null : context.resolve(start);
       ImageAnalysis e = end == null ? null : context.resolve(end);
       WalkAnswer answer = service.plan(images, s, e, StepCostModel.withShapeWeight(shapeWeight));

@@ -3,7 +3,9 @@ package org.morphscout.app.cli;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
@@ -81,5 +83,43 @@ class HostileInputCommandTest {
     assertThat(text.out()).doesNotContain("\u001b", "\u0007", "\r").contains("\\x1B[2J\\x07bell\\rhidden");
     // JSON keeps the note exactly (JSON escapes control characters itself).
     assertThat(cli.run("decisions", "--json").succeeds().json().toString()).contains("\\u001B[2J");
+  }
+
+  @Test
+  void outputsNeverOverwriteAnInputNorReplaceAFolder() throws IOException {
+    Path input = Path.of(images.get(0));
+    byte[] before = Files.readAllBytes(input);
+    Cli.Run preview = cli.run("preview", images.get(0), images.get(1), "--out", images.get(0));
+    preview.failsCleanly(ExitCodes.ERROR);
+    assertThat(preview.err()).contains("input");
+    assertThat(Files.readAllBytes(input)).isEqualTo(before);
+
+    Path empty = Files.createDirectories(tmp.resolve("empty-folder"));
+    cli.run("walk", "--sheet", empty.toString()).failsCleanly(ExitCodes.ERROR);
+    assertThat(empty).isDirectory();
+    Path full = Files.createDirectories(tmp.resolve("full-folder"));
+    Files.writeString(full.resolve("keep.txt"), "mine");
+    assertThat(cli.run("chain", images.get(0), images.get(2), "--sheet", full.toString())
+        .failsCleanly(ExitCodes.ERROR).err()).contains("is a folder");
+    assertThat(full.resolve("keep.txt")).hasContent("mine");
+
+    Path locked = Files.createDirectories(tmp.resolve("locked"));
+    Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("r-xr-xr-x"));
+    try {
+      // Root may write anywhere: then the sheet is simply written.
+      Cli.Run run = cli.run("walk", "--sheet", locked.resolve("sheet.png").toString());
+      if (Files.isWritable(locked)) {
+        run.succeeds();
+      } else {
+        assertThat(run.failsCleanly(ExitCodes.ERROR).err()).contains("not writable");
+      }
+    } finally {
+      Files.setPosixFilePermissions(locked, PosixFilePermissions.fromString("rwxr-xr-x"));
+    }
+    cli.run("walk", "--sheet", tmp.resolve("new/folder/sheet.png").toString()).succeeds();
+    assertThat(tmp.resolve("new/folder/sheet.png")).isRegularFile();
+    try (var listing = Files.list(tmp.resolve("new/folder"))) {
+      assertThat(listing.toList()).as("no temporary file left").hasSize(1);
+    }
   }
 }

@@ -71,7 +71,7 @@ public final class Catalog implements AutoCloseable {
       throw new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
     } catch (SQLException e) {
       closeQuietly(c);
-      throw new MorphscoutException("cannot open catalog database " + db + ": " + describe(e)
+      throw new MorphscoutException("cannot open catalog database " + db + ": " + describe(e, folder)
           + ". The file was left untouched; restore it from a backup or choose another catalog folder.", e);
     }
   }
@@ -91,8 +91,13 @@ public final class Catalog implements AutoCloseable {
     }
   }
 
-  private static String describe(SQLException e) {
+  private static String describe(SQLException e, Path folder) {
     String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+    // After a write fails for lack of space SQLite ends the transaction itself, so the commit that follows reports
+    // "no transaction is active": both mean the disk is full.
+    if (DiskSpace.isFull(e) || (m.contains("no transaction is active") && DiskSpace.nearlyFull(folder))) {
+      return DiskSpace.full(folder);
+    }
     if (m.contains("SQLITE_CORRUPT") || m.contains("SQLITE_NOTADB") || m.contains("malformed")) {
       return "the database file is damaged (" + m + ")";
     }
@@ -155,7 +160,7 @@ public final class Catalog implements AutoCloseable {
     try {
       return work.run(connection);
     } catch (SQLException e) {
-      throw new MorphscoutException("catalog " + dir + ": " + describe(e), e);
+      throw new MorphscoutException("catalog " + dir + ": " + describe(e, dir), e);
     } finally {
       lock.unlock();
     }
@@ -171,13 +176,18 @@ public final class Catalog implements AutoCloseable {
         connection.commit();
         return result;
       } catch (SQLException | RuntimeException e) {
-        connection.rollback();
+        try {
+          connection.rollback();
+        } catch (SQLException rollback) {
+          // SQLite may have ended the transaction itself (a full disk): keep the first error, which says why.
+          e.addSuppressed(rollback);
+        }
         throw e;
       } finally {
         connection.setAutoCommit(true);
       }
     } catch (SQLException e) {
-      throw new MorphscoutException("catalog " + dir + ": " + describe(e), e);
+      throw new MorphscoutException("catalog " + dir + ": " + describe(e, dir), e);
     } finally {
       lock.unlock();
     }

@@ -13,9 +13,11 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
+import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.analysis.ImageAnalyzer;
 import org.morphscout.indexer.analysis.PreparedImage;
+import org.morphscout.indexer.catalog.DiskSpace;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.ingest.ImageReadException;
 import org.morphscout.indexer.ingest.Thumbnails;
@@ -83,6 +85,10 @@ final class AnalysisPipeline {
           fail(s.row, "timed out: reading and analysing took more than " + options.perFileTimeLimit().toSeconds()
               + " s", failures);
         } catch (ExecutionException e) {
+          if (DiskSpace.isFull(e.getCause())) {
+            // Not the file's fault: stop the run with one message instead of failing every file that follows.
+            throw new MorphscoutException(DiskSpace.full(library.catalog().dir()), e.getCause());
+          }
           fail(s.row, reason(e.getCause()), failures);
         } catch (InterruptedException e) {
           Thread.currentThread().interrupt();
@@ -119,6 +125,9 @@ final class AnalysisPipeline {
     try {
       thumbnails.write(p.decoded().analysis(), base.getParent(), base.getFileName().toString());
     } catch (IOException e) {
+      if (DiskSpace.isFull(e)) {
+        throw e;
+      }
       LOG.warn("no thumbnail for {}: {}", file, e.getMessage());
     }
     return p;

@@ -57,15 +57,29 @@ public final class PreviewService {
     return new PreviewMorph(FRAME_LONG_SIDE).chain(decoded, legs, framesPerStep);
   }
 
-  /** Writes frames as an animated GIF ({@code .gif}) or a PNG strip ({@code .png}). */
-  public static void write(List<BufferedImage> frames, Path out, int frameDelayMs) throws IOException {
-    String name = out.getFileName().toString().toLowerCase(Locale.ROOT);
-    if (name.endsWith(".gif")) {
-      AnimatedGifWriter.write(frames, frameDelayMs, out);
-    } else if (name.endsWith(".png")) {
-      FrameStrip.write(frames, out);
-    } else {
+  /**
+   * Checks, before the frames are made, that {@code out} names a .gif or .png file that may be written and is none of
+   * the {@code inputs} (see {@link OutputFile#check}).
+   */
+  public static void checkOutput(Path out, List<Path> inputs) {
+    String name = out.getFileName() == null ? "" : out.getFileName().toString().toLowerCase(Locale.ROOT);
+    if (!name.endsWith(".gif") && !name.endsWith(".png")) {
       throw new MorphscoutException("preview output must end in .gif (animation) or .png (strip): " + out);
     }
+    OutputFile.check(out, inputs);
+  }
+
+  /** Writes frames as an animated GIF ({@code .gif}) or a PNG strip ({@code .png}), never over one of the inputs. */
+  public static void write(List<BufferedImage> frames, Path out, int frameDelayMs, List<Path> inputs)
+      throws IOException {
+    checkOutput(out, inputs);
+    boolean gif = out.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".gif");
+    OutputFile.write(out, inputs, temp -> {
+      if (gif) {
+        AnimatedGifWriter.write(frames, frameDelayMs, temp);
+      } else {
+        FrameStrip.write(frames, temp);
+      }
+    });
   }
 }

@@ -34,7 +34,9 @@ public final class Sheets {
     }
     String title = "Chains from " + name(answer.from().path()) + " to " + name(answer.to().path())
         + String.format(Locale.ROOT, " (direct pair score %.0f)", answer.direct().score());
-    new ContactSheet().writePng(title, rows, file);
+    List<Path> inputs = new ArrayList<>();
+    answer.chains().forEach(d -> d.chain().images().forEach(id -> inputs.add(inputPath(library, id))));
+    OutputFile.write(file, inputs, temp -> new ContactSheet().writePng(title, rows, temp));
   }
 
   /** One sequence (a walkthrough); between thumbnails, each step's cost. */
@@ -44,7 +46,13 @@ public final class Sheets {
     for (long id : ids) {
       tiles.add(tile(library, id));
     }
-    new ContactSheet().writePng(title, List.of(new ContactSheetRow(caption, tiles, steps)), file);
+    List<Path> inputs = ids.stream().map(id -> inputPath(library, id)).toList();
+    OutputFile.write(file, inputs,
+        temp -> new ContactSheet().writePng(title, List.of(new ContactSheetRow(caption, tiles, steps)), temp));
+  }
+
+  private static Path inputPath(Library library, long id) {
+    return library.images().byId(id).map(r -> Path.of(r.path())).orElse(Path.of("/"));
   }
 
   private static ContactSheetRow.Tile tile(Library library, long id) throws IOException {
