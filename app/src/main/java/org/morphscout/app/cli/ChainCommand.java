@@ -83,7 +83,7 @@ final class ChainCommand implements Callable<Integer> {
         .between("--min-steps", minSteps, 1, ChainQuery.STEP_LIMIT)
         .between("--max-steps", maxSteps, minSteps, ChainQuery.STEP_LIMIT).between("--shape-weight", shapeWeight, 0, 1);
     PrintWriter out = spec.commandLine().getOut();
-    try (Library library = Library.openExisting(root.catalogDir());
+    try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       ImageAnalysis a = context.resolve(from);
       ImageAnalysis b = context.resolve(to);

@@ -36,7 +36,7 @@ final class DecisionsCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     Verdict wanted = only == null ? null : DecideCommand.verdict(spec, "--only", only);
     PrintWriter out = spec.commandLine().getOut();
-    try (Library library = Library.openExisting(root.catalogDir())) {
+    try (Library library = Library.openForReading(root.catalogDir())) {
       List<Decision> decisions = new ArrayList<>();
       for (Decision d : library.decisions().all()) {
         if (wanted == null || d.verdict() == wanted) {

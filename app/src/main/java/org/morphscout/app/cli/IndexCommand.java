@@ -53,7 +53,9 @@ final class IndexCommand implements Callable<Integer> {
   @Option(names = "--follow-links", description = "Also follow symbolic links that lead out of the roots.")
   boolean followLinks;
 
-  @Option(names = "--rebuild-vectors", description = "Rebuild the vector index from the vectors in the catalog.")
+  @Option(names = "--rebuild-vectors",
+      description = "Rebuild the vector index from the vectors in the catalog (done by itself when the index files "
+          + "are damaged).")
   boolean rebuildVectors;
 
   @Option(names = "--int8", negatable = true,

@@ -64,7 +64,7 @@ final class PairsCommand implements Callable<Integer> {
         .between("--min-score", minScore, 0, 100);
     PrintWriter out = spec.commandLine().getOut();
     PairQuery query = new PairQuery(candidates, top, minScore);
-    try (Library library = Library.openExisting(root.catalogDir());
+    try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       PairService service = new PairService(context, scoring.config());
       PairSearchResult result;

@@ -48,7 +48,7 @@ final class PreviewCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     // A GIF stores delays in hundredths of a second, in 16 bits (GIF89a specification, Graphic Control Extension).
     OptionCheck.of(spec).between("--frames-per-step", framesPerStep, 2, 120).between("--delay", delay, 0, 655_350);
-    try (Library library = Library.openExisting(root.catalogDir());
+    try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       List<ImageAnalysis> stops = new ArrayList<>();
       for (String image : images) {

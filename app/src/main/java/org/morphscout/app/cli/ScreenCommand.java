@@ -65,7 +65,7 @@ final class ScreenCommand implements Callable<Integer> {
     Table table = read(csv);
     PrintWriter out = spec.commandLine().getOut();
     List<ScreenResult> results;
-    try (Library library = Library.openExisting(root.catalogDir());
+    try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       PairService pairs = new PairService(context, scoring.config());
       PairScreener screener = new PairScreener(pairs.scorer(), context::resolve);

@@ -47,7 +47,7 @@ final class SimilarCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     OptionCheck.of(spec).between("-k", k, 1, 10_000);
     PrintWriter out = spec.commandLine().getOut();
-    try (Library library = Library.openExisting(root.catalogDir());
+    try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       ImageAnalysis query = context.resolve(image);
       List<SimilarityService.Hit> hits = new SimilarityService(context).similar(query, k, by);

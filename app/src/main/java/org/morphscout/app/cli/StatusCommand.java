@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.ImageStore;
+import org.morphscout.indexer.library.CatalogCheck;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.LibrarySettings;
 import picocli.CommandLine.Command;
@@ -21,7 +22,8 @@ import picocli.CommandLine.Spec;
     name = "status",
     mixinStandardHelpOptions = true,
     header = "Show the catalog: roots, counts by status, failures with reasons, size, feature model.",
-    description = "Reads the catalog without changing it.")
+    description = "Reads the catalog without changing it (also on read-only media); damage in the small tables is "
+        + "noticed at every open, --check reads everything.")
 final class StatusCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
@@ -29,16 +31,22 @@ final class StatusCommand implements Callable<Integer> {
   @Option(names = "--json", description = "Write JSON to stdout.")
   boolean json;
 
+  @Option(names = "--check", description = "Also read every page of the database and check the vector index against "
+      + "it (a few seconds for large catalogs; opening only checks the header and the small tables). Exit 3 when "
+      + "something is damaged.")
+  boolean check;
+
   @Override
   public Integer call() throws Exception {
     PrintWriter out = spec.commandLine().getOut();
-    try (Library library = Library.openExisting(root.catalogDir())) {
+    try (Library library = Library.openForReading(root.catalogDir())) {
       ImageStore images = library.images();
       Map<ImageStatus, Integer> counts = images.countsByStatus();
       List<String> roots = images.roots().stream().map(ImageStore.Root::path).toList();
       List<ImageStore.Failure> failures = images.failures();
       String model = LibrarySettings.activeModel(library.features()).orElse("none yet");
       long bytes = library.catalog().databaseBytes();
+      CatalogCheck checked = check ? CatalogCheck.run(library) : null;
       if (json) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("catalog", library.catalog().dir().toString());
@@ -56,8 +64,11 @@ final class StatusCommand implements Callable<Integer> {
         doc.put("databaseBytes", bytes);
         doc.put("featureModel", model);
         doc.put("decisions", library.decisions().count());
+        if (checked != null) {
+          doc.put("check", Map.of("database", checked.database(), "vectors", checked.vectors()));
+        }
         JsonOut.write(out, doc);
-        return ExitCodes.OK;
+        return checked == null || checked.ok() ? ExitCodes.OK : ExitCodes.ERROR;
       }
       out.printf("catalog   %s (%s)%n", Terminal.safe(library.catalog().dir().toString()), Text.bytes(bytes));
       out.printf("model     %s%n", model);
@@ -66,6 +77,10 @@ final class StatusCommand implements Callable<Integer> {
       out.printf("images    %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
           counts.get(ImageStatus.PENDING), counts.get(ImageStatus.FAILED), counts.get(ImageStatus.MISSING));
       out.printf("decisions %d%n", library.decisions().count());
+      if (checked != null) {
+        out.printf("check     database: %s%n          vector index: %s%n", Terminal.safe(checked.database()),
+            Terminal.safe(checked.vectors()));
+      }
       if (!failures.isEmpty()) {
         out.println();
         out.println("failures:");
@@ -73,7 +88,7 @@ final class StatusCommand implements Callable<Integer> {
           out.printf("  %s%n    %s%n", Terminal.safe(f.path()), Terminal.safe(f.reason()));
         }
       }
-      return ExitCodes.OK;
+      return checked == null || checked.ok() ? ExitCodes.OK : ExitCodes.ERROR;
     }
   }
 }

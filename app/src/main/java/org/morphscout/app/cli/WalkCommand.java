@@ -61,7 +61,7 @@ final class WalkCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     OptionCheck.of(spec).between("--shape-weight", shapeWeight, 0, 1);
     PrintWriter out = spec.commandLine().getOut();
-    try (Library library = Library.openExisting(root.catalogDir());
+    try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       WalkService service = new WalkService(context);
       List<ImageAnalysis> images = service.select(items);

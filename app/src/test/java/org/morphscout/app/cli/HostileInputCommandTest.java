@@ -122,4 +122,19 @@ class HostileInputCommandTest {
       assertThat(listing.toList()).as("no temporary file left").hasSize(1);
     }
   }
+
+  @Test
+  void statusCheckReadsEverythingAndAnEmptyCatalogFileIsRefused() throws IOException {
+    var check = cli.run("status", "--check", "--json").succeeds().json().get("check");
+    assertThat(check.get("database").asText()).isEqualTo("ok");
+    assertThat(check.get("vectors").asText()).isEqualTo("ok");
+
+    Path empty = Files.createDirectories(tmp.resolve("empty-catalog"));
+    Files.createFile(empty.resolve("catalog.db"));
+    Cli other = new Cli(empty);
+    for (String[] line : new String[][] {{"status"}, {"decisions"}, {"index", tmp.resolve("library").toString()}}) {
+      assertThat(other.run(line).failsCleanly(ExitCodes.ERROR).err()).contains("empty (0 bytes)");
+    }
+    assertThat(Files.size(empty.resolve("catalog.db"))).isZero();
+  }
 }

@@ -16,6 +16,7 @@ import org.morphscout.schema.SchemaException;
 import org.morphscout.schema.SchemaMigrator;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.sqlite.SQLiteConfig;
 
 /**
  * An open catalog folder: {@code catalog.db} (SQLite, WAL mode), {@code vectors/} (Lucene) and {@code thumbnails/}.
@@ -28,13 +29,25 @@ public final class Catalog implements AutoCloseable {
   private static final byte[] SQLITE_MAGIC = "SQLite format 3\0".getBytes(StandardCharsets.US_ASCII);
   private static final String DB_FILE = "catalog.db";
 
+  /**
+   * Tables checked with {@code PRAGMA quick_check(table)} when a catalog is opened for reading: the small ones whose
+   * rows a user would miss without an error (decisions, images, roots). The large feature and neighbour tables are
+   * left to the full check ({@link #requireIntact}), which writers run and {@code status --check} offers.
+   */
+  private static final String[] CHECKED_AT_OPEN = {"schema_version", "roots", "images", "failures", "decisions",
+    "settings"};
+
   private final Path dir;
   private final Connection connection;
+  private final boolean readOnly;
+  private final boolean readOnlyMedia;
   private final ReentrantLock lock = new ReentrantLock();
 
-  private Catalog(Path dir, Connection connection) {
+  private Catalog(Path dir, Connection connection, boolean readOnly, boolean readOnlyMedia) {
     this.dir = dir;
     this.connection = connection;
+    this.readOnly = readOnly;
+    this.readOnlyMedia = readOnlyMedia;
   }
 
   /**
@@ -65,7 +78,7 @@ public final class Catalog implements AutoCloseable {
         s.execute("PRAGMA foreign_keys = ON");
       }
       migrator.migrate(c);
-      return new Catalog(folder, c);
+      return new Catalog(folder, c, false, false);
     } catch (SchemaException e) {
       closeQuietly(c);
       throw new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
@@ -76,9 +89,77 @@ public final class Catalog implements AutoCloseable {
     }
   }
 
+  /**
+   * Opens an existing catalog for reading only: nothing in the folder is created or changed, so it works on read-only
+   * media (there SQLite is told the file is immutable, as it cannot take locks). A catalog of an older layout is
+   * upgraded first when its folder is writable, else refused. The small tables are checked for damage on the way in.
+   *
+   * @throws MorphscoutException when the database is missing, empty, damaged, not a catalog, or from a newer version
+   */
+  public static Catalog openForReading(Path dir) throws IOException {
+    return openForReading(dir, !Files.isWritable(dir.toAbsolutePath().normalize())
+        || !Files.isWritable(dir.toAbsolutePath().normalize().resolve(DB_FILE)));
+  }
+
+  /** As {@link #openForReading(Path)}, saying whether the catalog's media is read-only (tests force it). */
+  static Catalog openForReading(Path dir, boolean readOnlyMedia) throws IOException {
+    Path folder = dir.toAbsolutePath().normalize();
+    Path db = folder.resolve(DB_FILE);
+    if (!Files.isRegularFile(db)) {
+      throw new MorphscoutException("no catalog in " + folder + ": index a folder first (morphscout index <folder>) "
+          + "or name the catalog with --catalog");
+    }
+    checkHeader(db);
+    SQLiteConfig config = new SQLiteConfig();
+    config.setReadOnly(true);
+    config.setBusyTimeout(15_000);
+    String url = readOnlyMedia ? "jdbc:sqlite:file:" + db.toUri().getRawPath() + "?immutable=1" : "jdbc:sqlite:" + db;
+    Connection c = null;
+    try {
+      c = DriverManager.getConnection(url, config.toProperties());
+      SchemaMigrator migrator = SchemaMigrator.bundled();
+      migrator.checkNotNewer(c);
+      if (SchemaMigrator.currentVersion(c) < migrator.latestVersion()) {
+        closeQuietly(c);
+        if (readOnlyMedia) {
+          throw new MorphscoutException("the catalog " + folder + " was made by an older Morphscout and needs an "
+              + "upgrade, but it cannot be written here (read-only). Copy the folder to a writable place and run "
+              + "morphscout status there once.");
+        }
+        return open(dir);
+      }
+      Catalog catalog = new Catalog(folder, c, true, readOnlyMedia);
+      catalog.checkTables(CHECKED_AT_OPEN);
+      return catalog;
+    } catch (SchemaException e) {
+      closeQuietly(c);
+      throw new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
+    } catch (SQLException e) {
+      closeQuietly(c);
+      throw new MorphscoutException("cannot open catalog database " + db + ": " + describe(e, folder)
+          + ". The file was left untouched; restore it from a backup or choose another catalog folder.", e);
+    } catch (RuntimeException e) {
+      closeQuietly(c);
+      throw e;
+    }
+  }
+
+  /** Whether this catalog was opened for reading only ({@link #openForReading}). */
+  public boolean isReadOnly() {
+    return readOnly;
+  }
+
+  /** Whether the catalog folder cannot be written at all (read-only media): nothing derived can be repaired there. */
+  public boolean onReadOnlyMedia() {
+    return readOnlyMedia;
+  }
+
   private static void checkHeader(Path db) throws IOException {
     if (Files.size(db) == 0) {
-      return; // an empty file is a new SQLite database
+      // SQLite would take an empty file for a new database and write a schema into it; a catalog is never empty once
+      // made, so this is a file that lost its content (or a place-holder): leave it to the user.
+      throw new MorphscoutException("cannot open catalog database " + db + ": the file is empty (0 bytes), so it is "
+          + "not a catalog. It was left untouched; restore it from a backup, or delete it to start a new catalog.");
     }
     byte[] head = new byte[SQLITE_MAGIC.length];
     int n;
@@ -201,20 +282,50 @@ public final class Catalog implements AutoCloseable {
    * @throws MorphscoutException when SQLite's {@code PRAGMA quick_check} finds a problem; nothing was written
    */
   public void requireIntact() {
-    String verdict;
+    String verdict = quickCheck("PRAGMA quick_check(1)");
+    if (!"ok".equals(verdict)) {
+      throw damaged(verdict);
+    }
+  }
+
+  /** Runs {@code PRAGMA quick_check} on each named table and its indexes (SQLite 3.33 or newer). */
+  private void checkTables(String... tables) {
+    java.util.Set<String> present = read(c -> {
+      java.util.Set<String> names = new java.util.HashSet<>();
+      try (Statement s = c.createStatement();
+          java.sql.ResultSet rs = s.executeQuery("SELECT name FROM sqlite_master WHERE type = 'table'")) {
+        while (rs.next()) {
+          names.add(rs.getString(1));
+        }
+      }
+      return names;
+    });
+    for (String table : tables) {
+      if (!present.contains(table)) {
+        continue;
+      }
+      String verdict = quickCheck("PRAGMA quick_check(" + table + ")");
+      if (!"ok".equals(verdict)) {
+        throw damaged(verdict);
+      }
+    }
+  }
+
+  private String quickCheck(String pragma) {
     lock.lock();
-    try (Statement s = connection.createStatement(); java.sql.ResultSet rs = s.executeQuery("PRAGMA quick_check(1)")) {
-      verdict = rs.next() ? rs.getString(1) : "no answer";
+    try (Statement s = connection.createStatement(); java.sql.ResultSet rs = s.executeQuery(pragma)) {
+      return rs.next() ? rs.getString(1) : "no answer";
     } catch (SQLException e) {
-      verdict = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+      return e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
     } finally {
       lock.unlock();
     }
-    if (!"ok".equals(verdict)) {
-      throw new MorphscoutException("cannot use catalog database " + dir.resolve(DB_FILE) + ": the database file is "
-          + "damaged (" + verdict + "). It was left untouched; restore it from a backup or choose another catalog "
-          + "folder.");
-    }
+  }
+
+  private MorphscoutException damaged(String verdict) {
+    return new MorphscoutException("cannot use catalog database " + dir.resolve(DB_FILE) + ": the database file is "
+        + "damaged (" + verdict + "). It was left untouched; restore it from a backup or choose another catalog "
+        + "folder.");
   }
 
   /** Size of the database files on disk, in bytes. */

@@ -38,6 +38,14 @@ public final class Library implements AutoCloseable {
     return new Library(Catalog.open(dir));
   }
 
+  /**
+   * Opens an existing catalog for reading only (commands that only look): nothing in the folder changes, it works on
+   * read-only media, and the small tables are checked for damage first. See {@link Catalog#openForReading}.
+   */
+  public static Library openForReading(Path dir) throws IOException {
+    return new Library(Catalog.openForReading(dir));
+  }
+
   /** Opens an existing catalog; fails clearly when {@code dir} holds none. */
   public static Library openExisting(Path dir) throws IOException {
     if (!Files.exists(dir.resolve("catalog.db"))) {

@@ -23,7 +23,6 @@ import org.morphscout.indexer.ingest.ScanResult;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
-import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -58,12 +57,13 @@ public final class LibraryIndexer {
       ImageAnalyzer analyzer = AnalyzerFactory.create(library, setup);
       LuceneIndexOptions.Quantization quantization = options.int8() ? LuceneIndexOptions.Quantization.INT8
           : LuceneIndexOptions.Quantization.NONE;
-      try (VectorIndex index = LuceneVectorIndex.open(library.catalog().vectorDir(),
-              LuceneIndexOptions.defaults().withQuantization(quantization))) {
+      VectorIndexRepair.Opened opened = VectorIndexRepair.open(library.catalog().vectorDir(),
+          LuceneIndexOptions.defaults().withQuantization(quantization));
+      try (VectorIndex index = opened.index()) {
         String modelId = analyzer.embedder().modelId();
         // The vector format is fixed per segment: a change of quantisation rebuilds the index from the catalog.
         String stored = library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE");
-        boolean rebuild = options.rebuildVectors() || !stored.equals(quantization.name());
+        boolean rebuild = options.rebuildVectors() || opened.fresh() || !stored.equals(quantization.name());
         library.features().putSetting(LibrarySettings.VECTOR_QUANTIZATION, quantization.name());
         List<Long> reembed = switchModelIfNeeded(modelId, analyzer.embedder().dimension(), index);
 

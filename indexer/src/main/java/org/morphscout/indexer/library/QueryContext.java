@@ -14,6 +14,7 @@ import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.ingest.ImageReadException;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
+import org.morphscout.indexer.vector.UnusableIndexException;
 import org.morphscout.indexer.vector.VectorIndex;
 
 /**
@@ -66,25 +67,44 @@ public final class QueryContext implements AutoCloseable {
    */
   private void repairIfNeeded() throws IOException {
     java.util.Set<Long> ready = new java.util.HashSet<>(library.features().readyIds(modelId()));
+    UnusableIndexException unusable = null;
     try (LuceneVectorIndex probe = LuceneVectorIndex.openReadOnly(library.catalog().vectorDir(),
         LuceneIndexOptions.defaults())) {
       if (probe.ids().equals(ready)) {
         return;
       }
+    } catch (UnusableIndexException e) {
+      unusable = e;
+    }
+    if (library.catalog().onReadOnlyMedia()) {
+      if (unusable != null) {
+        throw unusable;
+      }
+      LOG.info("vector index differs from the catalog, which is read-only here: answers use the index as it is");
+      return;
     }
     WriterLock lock;
     try {
       lock = WriterLock.acquire(library.catalog().dir());
     } catch (MorphscoutException inUse) {
+      if (unusable != null) {
+        throw unusable;
+      }
       LOG.info("vector index differs from the catalog; the running indexer will bring it in line");
       return;
     }
     LuceneIndexOptions.Quantization q = "INT8".equals(
         library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE"))
         ? LuceneIndexOptions.Quantization.INT8 : LuceneIndexOptions.Quantization.NONE;
-    try (lock; LuceneVectorIndex writer = LuceneVectorIndex.open(library.catalog().vectorDir(),
-        LuceneIndexOptions.defaults().withQuantization(q))) {
-      int added = VectorSync.sync(library.features(), writer, modelId(), false, new java.util.ArrayList<>());
+    VectorIndexRepair.Opened opened;
+    try {
+      opened = VectorIndexRepair.open(library.catalog().vectorDir(), LuceneIndexOptions.defaults().withQuantization(q));
+    } catch (IOException | RuntimeException e) {
+      lock.close();
+      throw e;
+    }
+    try (lock; LuceneVectorIndex writer = opened.index()) {
+      int added = VectorSync.sync(library.features(), writer, modelId(), opened.fresh(), new java.util.ArrayList<>());
       LOG.warn("vector index differed from the catalog; brought in line ({} images added)", added);
     }
   }

@@ -1,0 +1,55 @@
+package org.morphscout.indexer.catalog;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.ResultSet;
+import java.sql.Statement;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.stream.Stream;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * A catalog on read-only media is read without writing anything. The test runs as any user (root can write through
+ * permissions), so it forces the read-only-media path and checks that no file of the folder changes or appears.
+ */
+class ReadOnlyCatalogTest {
+  @TempDir Path tmp;
+
+  @Test
+  void readingOnReadOnlyMediaChangesNothing() throws IOException {
+    Path dir = tmp.resolve("catalog");
+    try (Catalog c = Catalog.open(dir)) {
+      new ImageStore(c).ensureRoot(tmp.resolve("photos"));
+    }
+    Map<String, byte[]> before = snapshot(dir);
+    try (Catalog c = Catalog.openForReading(dir, true)) {
+      assertThat(c.isReadOnly()).isTrue();
+      assertThat(c.onReadOnlyMedia()).isTrue();
+      int roots = c.read(conn -> {
+        try (Statement s = conn.createStatement(); ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM roots")) {
+          rs.next();
+          return rs.getInt(1);
+        }
+      });
+      assertThat(roots).isEqualTo(1);
+    }
+    Map<String, byte[]> after = snapshot(dir);
+    assertThat(after.keySet()).isEqualTo(before.keySet());
+    before.forEach((name, bytes) -> assertThat(after.get(name)).as(name).isEqualTo(bytes));
+  }
+
+  private static Map<String, byte[]> snapshot(Path dir) throws IOException {
+    Map<String, byte[]> files = new TreeMap<>();
+    try (Stream<Path> all = Files.walk(dir)) {
+      for (Path p : all.filter(Files::isRegularFile).toList()) {
+        files.put(dir.relativize(p).toString(), Files.readAllBytes(p));
+      }
+    }
+    return files;
+  }
+}
