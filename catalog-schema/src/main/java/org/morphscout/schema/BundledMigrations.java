@@ -18,7 +18,7 @@ public final class BundledMigrations {
 
   private BundledMigrations() {}
 
-  /** All bundled migrations, version 1 first; checks the numbering has no gaps. */
+  /** All bundled migrations, lowest version first; checks the numbers rise (gaps are allowed). */
   public static List<Migration> all() {
     List<Migration> result = new ArrayList<>();
     for (String name : readLines(FOLDER + "index.txt")) {
@@ -27,9 +27,11 @@ public final class BundledMigrations {
         throw new IllegalStateException("badly named migration " + name);
       }
       int version = Integer.parseInt(m.group(1));
-      if (version != result.size() + 1) {
-        throw new IllegalStateException("migration " + name + " breaks the numbering (expected "
-            + (result.size() + 1) + ")");
+      // Numbers are reserved for work in progress, so a build may skip one (say 5 before it exists while 7 is
+      // shipped); the migrator applies a missing lower one later, in order. Numbers must still rise.
+      int last = result.isEmpty() ? 0 : result.get(result.size() - 1).version();
+      if (version <= last) {
+        throw new IllegalStateException("migration " + name + " breaks the numbering (must be above " + last + ")");
       }
       result.add(new Migration(version, name, String.join("\n", readLines(FOLDER + name))));
     }
@@ -38,7 +40,8 @@ public final class BundledMigrations {
 
   /** The newest schema version this build knows. */
   public static int latestVersion() {
-    return all().size();
+    List<Migration> all = all();
+    return all.isEmpty() ? 0 : all.get(all.size() - 1).version();
   }
 
   private static List<String> readLines(String resource) {

@@ -30,8 +30,29 @@ public final class SchemaMigrator {
     return new SchemaMigrator(BundledMigrations.all());
   }
 
+  /** The highest version this build knows (numbers may have gaps, see {@link BundledMigrations#all}). */
   public int latestVersion() {
-    return migrations.size();
+    return migrations.isEmpty() ? 0 : migrations.get(migrations.size() - 1).version();
+  }
+
+  /** Whether some known migration is not applied yet (also one below the database's highest version). */
+  public boolean hasPending(Connection connection) throws SQLException, SchemaException {
+    if (currentVersion(connection) == 0) {
+      return !migrations.isEmpty();
+    }
+    java.util.Set<Integer> applied = appliedVersions(connection);
+    return migrations.stream().anyMatch(m -> !applied.contains(m.version()));
+  }
+
+  private static java.util.Set<Integer> appliedVersions(Connection connection) throws SQLException {
+    java.util.Set<Integer> applied = new java.util.HashSet<>();
+    try (Statement s = connection.createStatement();
+        ResultSet rs = s.executeQuery("SELECT version FROM schema_version")) {
+      while (rs.next()) {
+        applied.add(rs.getInt(1));
+      }
+    }
+    return applied;
   }
 
   /**
@@ -91,9 +112,12 @@ public final class SchemaMigrator {
             + "applied_at TEXT NOT NULL)");
       }
       connection.commit();
-      for (int v = currentVersion(connection) + 1; v <= target; v++) {
-        apply(connection, migrations.get(v - 1));
-        applied++;
+      java.util.Set<Integer> done = appliedVersions(connection);
+      for (Migration m : migrations) {
+        if (m.version() <= target && !done.contains(m.version())) {
+          apply(connection, m);
+          applied++;
+        }
       }
     } finally {
       connection.setAutoCommit(autoCommit);

@@ -18,8 +18,8 @@ import picocli.CommandLine.Spec;
     name = "decide",
     mixinStandardHelpOptions = true,
     header = "Record your verdict on a pair of catalog images (approve or reject, with a note).",
-    description = {"The verdict is kept in the catalog with both images' identities, so it survives renames and",
-        "moves inside the library roots. Deciding again on the same pair replaces the earlier verdict."})
+    description = {"The verdict is kept with both pictures' content hashes: it survives renames and moves, and a",
+        "different picture put at an old path does not inherit it. Deciding again replaces the earlier verdict."})
 final class DecideCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;

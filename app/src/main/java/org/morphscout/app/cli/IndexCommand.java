@@ -30,7 +30,8 @@ import picocli.CommandLine.Spec;
     header = "Add folders to the catalog and analyse new and changed images (incremental).",
     description = {
       "Registers each folder as a library root and scans it recursively. Unchanged files are skipped; changed files "
-          + "are analysed again; a file moved or renamed inside the roots keeps its identity and your decisions; "
+          + "are analysed again; a file moved or renamed inside the roots keeps its identity and your decisions, while a different picture at an "
+          + "old path starts with none (reported as replaced); "
           + "deleted files are marked missing, never dropped. Reads JPEG, PNG, TIFF, BMP, GIF (first frame) and WebP; "
           + "applies EXIF orientation and converts colour profiles to sRGB. Files that cannot be read are listed "
           + "with the reason and the run goes on. Ctrl-C stops cleanly; the next run resumes.",
@@ -126,6 +127,7 @@ final class IndexCommand implements Callable<Integer> {
       r.failures().forEach(f -> failures.add(Map.of("path", f.path(), "reason", f.reason())));
       doc.put("failures", failures);
       doc.put("moved", r.moved());
+      doc.put("replaced", r.replaced());
       doc.put("missing", r.missing());
       doc.put("vectorsRestored", r.vectorsRestored());
       doc.put("cancelled", r.cancelled());
@@ -137,6 +139,10 @@ final class IndexCommand implements Callable<Integer> {
     out.printf("%s %d indexed, %d unchanged, %d moved, %d missing, %d failed in %s s%n",
         r.cancelled() ? "cancelled after" : "done:", r.indexed(), r.unchanged(), r.moved(), r.missing(), r.failed(),
         Text.num(r.elapsed().toMillis() / 1000.0, 1));
+    if (r.replaced() > 0) {
+      out.printf("%d paths now hold a different picture; decisions stay with the pictures judged, not the paths%n",
+          r.replaced());
+    }
     if (r.vectorsRestored() > 0) {
       out.printf("vector index: %d images restored from the catalog%n", r.vectorsRestored());
     }

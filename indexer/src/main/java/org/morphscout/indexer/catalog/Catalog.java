@@ -119,7 +119,7 @@ public final class Catalog implements AutoCloseable {
       c = DriverManager.getConnection(url, config.toProperties());
       SchemaMigrator migrator = SchemaMigrator.bundled();
       migrator.checkNotNewer(c);
-      if (SchemaMigrator.currentVersion(c) < migrator.latestVersion()) {
+      if (migrator.hasPending(c)) {
         closeQuietly(c);
         if (readOnlyMedia) {
           throw new MorphscoutException("the catalog " + folder + " was made by an older Morphscout and needs an "

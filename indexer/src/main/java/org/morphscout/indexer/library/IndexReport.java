@@ -9,6 +9,8 @@ import java.util.List;
  * @param indexed images analysed in this run (new or changed)
  * @param unchanged images skipped because they had not changed
  * @param moved images found at a new path (matched by content hash); they keep their identity and decisions
+ * @param replaced paths that now hold a different picture than before (edited or swapped files); decisions stay with
+ *     the old picture, so the new one starts with none
  * @param missing images no longer found (kept, marked missing)
  * @param failures files that could not be read or analysed, and problems met while scanning
  * @param vectorsRestored images whose vectors were restored into the vector index from the catalog
@@ -19,6 +21,7 @@ public record IndexReport(
     int indexed,
     int unchanged,
     int moved,
+    int replaced,
     int missing,
     List<FileFailure> failures,
     int vectorsRestored,

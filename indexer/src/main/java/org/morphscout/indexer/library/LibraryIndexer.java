@@ -123,7 +123,8 @@ public final class LibraryIndexer {
         }
         listKnownFailures(roots, failures);
         progress.finished();
-        return new IndexReport(analysed.size(), plan.unchanged(), plan.moved(), plan.nowMissing().size(), failures,
+        return new IndexReport(analysed.size(), plan.unchanged(), plan.moved(), plan.replaced(),
+            plan.nowMissing().size(), failures,
             restored, cancelled, modelId, Duration.ofNanos(System.nanoTime() - start));
       } finally {
         analyzer.embedder().close();

@@ -17,7 +17,8 @@ import org.morphscout.indexer.ingest.FoundFile;
 
 /**
  * Compares what a scan found with what the catalog holds and updates the catalog in one transaction: new files are
- * added as pending, changed files set back to pending, moved files (same content hash, old path gone) keep their
+ * added as pending, changed files set back to pending (counted as replaced: a path that now holds another picture),
+ * moved files (same content hash, old path gone) keep their
  * identity, and files no longer found are marked missing. Unchanged files (same size and mtime, or same hash) are left
  * alone.
  */
@@ -29,7 +30,8 @@ final class ScanReconciler {
   }
 
   /** The outcome: images to analyse, and counts. */
-  record Plan(List<ImageRow> toAnalyse, int unchanged, int moved, List<Long> nowMissing, List<Long> changedReady) {}
+  record Plan(List<ImageRow> toAnalyse, int unchanged, int moved, int replaced, List<Long> nowMissing,
+      List<Long> changedReady) {}
 
   /**
    * @param found per root id, the files found under it
@@ -73,6 +75,7 @@ final class ScanReconciler {
     Set<Long> reused = new HashSet<>();
     int unchanged = 0;
     int moved = 0;
+    int replaced = 0;
     Map<String, Object[]> inserts = new LinkedHashMap<>();
     for (Map.Entry<Long, List<FoundFile>> e : found.entrySet()) {
       long rootId = e.getKey();
@@ -101,6 +104,11 @@ final class ScanReconciler {
           continue;
         }
         if (row != null) {
+          if (row.contentHash() != null && !hash.equals(row.contentHash())) {
+            // The path now holds another picture (edited, or another file put in its place): the decisions made on
+            // the old picture stay with that picture's content hash and do not pass to this one.
+            replaced++;
+          }
           boolean same = hash.equals(row.contentHash()) && row.status() != ImageStatus.PENDING;
           ImageStatus status = same && row.status() != ImageStatus.MISSING ? row.status()
               : same ? ImageStatus.READY : ImageStatus.PENDING;
@@ -159,7 +167,7 @@ final class ScanReconciler {
         toAnalyse.add(row);
       }
     }
-    return new Plan(toAnalyse, unchanged, moved, nowMissing, changedReady);
+    return new Plan(toAnalyse, unchanged, moved, replaced, nowMissing, changedReady);
   }
 
   private boolean transientFailure(long id) {
