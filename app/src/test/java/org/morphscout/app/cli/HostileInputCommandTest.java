@@ -137,4 +137,26 @@ class HostileInputCommandTest {
     }
     assertThat(Files.size(empty.resolve("catalog.db"))).isZero();
   }
+
+  @Test
+  void screenReadsABomReportsBadRowsByLineAndSaysWhenThereAreNone() throws IOException {
+    Path list = tmp.resolve("plans/list.csv");
+    Files.createDirectories(list.getParent());
+    byte[] good = ("\uFEFF" + images.get(0) + "," + images.get(1) + ",=cmd|' /C calc'!A0\n")
+        .getBytes(java.nio.charset.StandardCharsets.UTF_8);
+    byte[] bad = (images.get(0) + ",caf\u00e9.png\n").getBytes(java.nio.charset.StandardCharsets.ISO_8859_1);
+    Files.write(list, good);
+    Files.write(list, bad, java.nio.file.StandardOpenOption.APPEND);
+    Cli.Run run = cli.run("screen", list.toString(), "--csv").succeeds();
+    assertThat(run.csv()).hasSize(2);
+    assertThat(run.csv().get(0).get("a")).isEqualTo(images.get(0));
+    assertThat(run.csv().get(0).get("extra1")).as("a passed-through formula").isEqualTo("'=cmd|' /C calc'!A0");
+    assertThat(run.csv().get(1).get("verdict")).isEqualTo("fail");
+    assertThat(run.csv().get(1).get("reasons")).contains("line 2", "UTF-8");
+
+    Path empty = Files.writeString(tmp.resolve("plans/empty.csv"), "");
+    assertThat(cli.run("screen", empty.toString()).succeeds().err()).contains("holds no pairs");
+    Path binary = Files.write(tmp.resolve("plans/binary.csv"), new byte[] {1, 0, 2, 0});
+    assertThat(cli.run("screen", binary.toString()).failsCleanly(ExitCodes.ERROR).err()).contains("binary");
+  }
 }

@@ -69,7 +69,12 @@ public final class LibraryIndexer {
 
         Map<Long, List<FoundFile>> found = scan(roots, failures, progress, cancel);
         Map<Path, String> hashFailures = new LinkedHashMap<>();
-        ScanReconciler.Plan plan = new ScanReconciler(library).reconcile(found, hashFailures);
+        ScanReconciler.Plan plan = new ScanReconciler(library).reconcile(found, hashFailures, ids -> {
+          for (long id : ids) {
+            index.delete(id);
+          }
+          index.commit();
+        });
         hashFailures.forEach((p, r) -> failures.add(new IndexReport.FileFailure(ScanReconciler.key(p), r)));
         List<ImageRow> todo = new ArrayList<>(plan.toAnalyse());
         Set<Long> queued = new java.util.HashSet<>(todo.stream().map(ImageRow::id).toList());

@@ -37,7 +37,23 @@ final class ScanReconciler {
    * @param found per root id, the files found under it
    * @param hashFailures receives files whose hash could not be computed (path, reason)
    */
+  /** Removes images from the vector index and commits it (before the catalog stops counting them as ready). */
+  @FunctionalInterface
+  interface Eviction {
+    void evict(List<Long> ids) throws IOException;
+  }
+
   Plan reconcile(Map<Long, List<FoundFile>> found, Map<Path, String> hashFailures) throws IOException {
+    return reconcile(found, hashFailures, ids -> { });
+  }
+
+  /**
+   * @param evict called with the ready images this plan takes out of "ready" (changed or gone), before the catalog
+   *     transaction: the vector index lets go of them first, so at no moment (a kill between the two commits) does it
+   *     hold an image the catalog does not hold as ready
+   */
+  Plan reconcile(Map<Long, List<FoundFile>> found, Map<Path, String> hashFailures, Eviction evict)
+      throws IOException {
     ImageStore images = library.images();
     Set<String> foundPaths = new HashSet<>();
     found.values().forEach(list -> list.forEach(f -> foundPaths.add(key(f.path()))));
@@ -148,6 +164,15 @@ final class ScanReconciler {
       if (!reused.contains(row.id()) && row.status() != ImageStatus.MISSING) {
         nowMissing.add(row.id());
       }
+    }
+    List<Long> leaving = new ArrayList<>(changedReady);
+    for (ImageRow row : vanished) {
+      if (!reused.contains(row.id()) && row.status() == ImageStatus.READY) {
+        leaving.add(row.id());
+      }
+    }
+    if (!leaving.isEmpty()) {
+      evict.evict(leaving);
     }
     library.catalog().inTransaction(c -> {
       writes.forEach(Runnable::run);

@@ -56,6 +56,34 @@ public final class PairScreener {
     }
   }
 
+  /**
+   * Screens rows one at a time for a list of any length: images used by several rows are resolved once while they
+   * stay among the {@code cacheSize} most recently used (about 20 KB each), so memory stays bounded.
+   */
+  public final class Stream {
+    private final Map<String, Resolved> cache;
+
+    private Stream(int cacheSize) {
+      cache = new java.util.LinkedHashMap<>(16, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<String, Resolved> eldest) {
+          return size() > cacheSize;
+        }
+      };
+    }
+
+    public ScreenResult screen(ScreenRow row) {
+      return PairScreener.this.screen(row, cache);
+    }
+  }
+
+  /** A streaming screener keeping at most {@code cacheSize} resolved images. */
+  public Stream stream(int cacheSize) {
+    return new Stream(cacheSize);
+  }
+
   /** An analysis, or the reason there is none. */
   private record Resolved(ImageAnalysis analysis, String problem) {}
 
