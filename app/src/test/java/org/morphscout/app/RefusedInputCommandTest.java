@@ -50,7 +50,8 @@ class RefusedInputCommandTest {
     try (Library library = Library.open(catalog)) {
       library.catalog().read(c -> {
         try (PreparedStatement s = c.prepareStatement(
-            "INSERT INTO schema_version(version, name, applied_at) VALUES (999, 'V999__future.sql', 'later')")) {
+            "INSERT INTO catalog_layout(step, name, sha256, applied_at) "
+                + "VALUES (999, 'step-999-future.sql', '0', 'later')")) {
           return s.executeUpdate();
         }
       });

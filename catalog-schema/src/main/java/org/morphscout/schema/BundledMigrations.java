@@ -11,40 +11,38 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-/** Loads the migrations shipped in this module's resources, in order. */
+/** Loads the layout steps shipped in this module's resources, in order. */
 public final class BundledMigrations {
-  private static final String FOLDER = "/org/morphscout/schema/migrations/";
-  private static final Pattern NAME = Pattern.compile("V(\\d{3})__[a-z0-9_]+\\.sql");
+  private static final String FOLDER = "/org/morphscout/schema/layout/";
+  private static final String LIST = "steps.txt";
+  private static final Pattern NAME = Pattern.compile("step-(\\d{2,})-[a-z0-9-]+\\.sql");
 
   private BundledMigrations() {}
 
-  /** All bundled migrations, lowest version first; checks the numbers rise (gaps are allowed). */
+  /** All bundled steps, lowest number first; checks that the numbers grow strictly. */
   public static List<Migration> all() {
     List<Migration> result = new ArrayList<>();
-    for (String name : readLines(FOLDER + "index.txt")) {
+    for (String name : readLines(FOLDER + LIST, true)) {
       Matcher m = NAME.matcher(name);
       if (!m.matches()) {
-        throw new IllegalStateException("badly named migration " + name);
+        throw new IllegalStateException("badly named layout step " + name + " (expected step-NN-name.sql)");
       }
-      int version = Integer.parseInt(m.group(1));
-      // Numbers are reserved for work in progress, so a build may skip one (say 5 before it exists while 7 is
-      // shipped); the migrator applies a missing lower one later, in order. Numbers must still rise.
-      int last = result.isEmpty() ? 0 : result.get(result.size() - 1).version();
-      if (version <= last) {
-        throw new IllegalStateException("migration " + name + " breaks the numbering (must be above " + last + ")");
+      int number = Integer.parseInt(m.group(1));
+      if (!result.isEmpty() && number <= result.getLast().version()) {
+        throw new IllegalStateException("layout step " + name + " is out of order in " + LIST);
       }
-      result.add(new Migration(version, name, String.join("\n", readLines(FOLDER + name))));
+      result.add(new Migration(number, name, String.join("\n", readLines(FOLDER + name, false))));
     }
     return List.copyOf(result);
   }
 
-  /** The newest schema version this build knows. */
+  /** The highest step number this build knows. */
   public static int latestVersion() {
     List<Migration> all = all();
-    return all.isEmpty() ? 0 : all.get(all.size() - 1).version();
+    return all.isEmpty() ? 0 : all.getLast().version();
   }
 
-  private static List<String> readLines(String resource) {
+  private static List<String> readLines(String resource, boolean skipBlank) {
     try (InputStream in = BundledMigrations.class.getResourceAsStream(resource)) {
       if (in == null) {
         throw new IllegalStateException("missing resource " + resource);
@@ -52,8 +50,8 @@ public final class BundledMigrations {
       List<String> lines = new ArrayList<>();
       try (BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
         for (String line; (line = r.readLine()) != null; ) {
-          if (!line.isBlank() || !resource.endsWith("index.txt")) {
-            lines.add(line);
+          if (!skipBlank || !line.isBlank()) {
+            lines.add(skipBlank ? line.strip() : line);
           }
         }
       }

@@ -1,7 +1,8 @@
 /**
- * The catalog's SQL schema: numbered, append-only migrations bundled as resources
- * ({@code org/morphscout/schema/migrations/V###__name.sql}, listed in {@code index.txt}) and the code that applies
- * them. Each migration runs in its own transaction and records a row in {@code schema_version}; a database whose
- * version is newer than the newest bundled migration is refused before anything is written.
+ * The catalog's SQL layout: numbered, append-only layout steps bundled as resources
+ * ({@code org/morphscout/schema/layout/step-NN-name.sql}, listed in {@code steps.txt}) and the code that applies them.
+ * Each step runs in its own transaction and records a row (number, file name, SHA-256 of its text, time) in the
+ * {@code catalog_layout} table; a database holding a step this build does not know is refused before anything is
+ * written. Catalogs written before this bookkeeping existed (a {@code schema_version} table) are converted in place.
  */
 package org.morphscout.schema;

@@ -14,7 +14,7 @@ import org.morphscout.indexer.MorphscoutException;
 /**
  * Measured per-image data volumes of an indexed catalog, for sizing larger deployments: the mean stored size of
  * each feature column, of the neighbour lists, of the thumbnails, of the vector index, and of the whole catalog
- * folder. Reads the catalog's SQLite file with plain SQL (column names of migration V001); changes nothing.
+ * folder. Reads the catalog's SQLite file with plain SQL (column names of layout step 1); changes nothing.
  *
  * @param images images with features
  * @param appearanceBytes mean appearance vector blob (float32 x dimension)

@@ -34,7 +34,7 @@ public final class Catalog implements AutoCloseable {
    * rows a user would miss without an error (decisions, images, roots). The large feature and neighbour tables are
    * left to the full check ({@link #requireIntact}), which writers run and {@code status --check} offers.
    */
-  private static final String[] CHECKED_AT_OPEN = {"schema_version", "roots", "images", "failures", "decisions",
+  private static final String[] CHECKED_AT_OPEN = {"catalog_layout", "roots", "images", "failures", "decisions",
     "settings"};
 
   private final Path dir;
@@ -119,7 +119,7 @@ public final class Catalog implements AutoCloseable {
       c = DriverManager.getConnection(url, config.toProperties());
       SchemaMigrator migrator = SchemaMigrator.bundled();
       migrator.checkNotNewer(c);
-      if (migrator.hasPending(c)) {
+      if (migrator.needsUpgrade(c)) {
         closeQuietly(c);
         if (readOnlyMedia) {
           throw new MorphscoutException("the catalog " + folder + " was made by an older Morphscout and needs an "

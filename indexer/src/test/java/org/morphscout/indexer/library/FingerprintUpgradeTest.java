@@ -57,11 +57,11 @@ class FingerprintUpgradeTest {
     }
     assertThat(idsBefore).as("seed %d", SEED).hasSize(4);
 
-    // Turn it into a catalog without migration 4: no fingerprint column, no record of it (later ones stay).
+    // Turn it into a catalog without layout step 4: no fingerprint column, no record of it (later ones stay).
     try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + catalogDir.resolve("catalog.db"));
         Statement s = c.createStatement()) {
       s.execute("ALTER TABLE features DROP COLUMN fingerprint");
-      s.execute("DELETE FROM schema_version WHERE version = 4");
+      s.execute("DELETE FROM catalog_layout WHERE step = 4");
       assertThat(columns(c)).doesNotContain("fingerprint");
     }
 

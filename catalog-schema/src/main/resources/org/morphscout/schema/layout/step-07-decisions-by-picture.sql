@@ -2,7 +2,7 @@
 -- (hex SHA-256), or 'id:<n>' for an image never hashed (and for both sides when they are byte-identical). A different
 -- picture later found at an old path therefore starts with no decisions. The paths at decision time are kept to show
 -- a decision whose pictures are no longer in the catalog.
--- Append-only: never edit a migration that has shipped.
+-- Append-only: never edit a layout step that has shipped.
 
 CREATE TABLE decisions_by_picture (
   picture_a   TEXT NOT NULL,
