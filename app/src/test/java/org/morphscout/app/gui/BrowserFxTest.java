@@ -112,6 +112,7 @@ class BrowserFxTest {
     assertThat(vm.session().paneProperty().get()).isEqualTo(Pane.PAIRS);
     @SuppressWarnings("unchecked")
     TableView<PairRow> table = robot.lookup("#pairs-table").queryAs(TableView.class);
+    waitUntil(() -> robot.lookup("#pairs-table .table-row-cell").tryQuery().isPresent());
     robot.clickOn(robot.lookup("#pairs-table .table-row-cell").nth(0).queryAs(javafx.scene.Node.class));
     PairRow chosen = table.getSelectionModel().getSelectedItem();
     assertThat(chosen).isNotNull();

@@ -7,21 +7,21 @@ import org.morphscout.app.gui.service.ChainCandidate;
 import org.morphscout.app.gui.service.ChainRequest;
 import org.morphscout.app.gui.service.ChainStep;
 import org.morphscout.app.gui.service.IndexSummary;
-import org.morphscout.app.gui.service.InterimBackends;
+import org.morphscout.app.gui.service.LibraryBackends;
 import org.morphscout.app.gui.service.WalkBackend;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.progress.CancellationToken;
 
-/** Backends for view-model tests: real interim ones where a catalog is at hand, with recording fakes mixed in. */
+/** Backends for view-model tests: the library's production services, with recording fakes mixed in. */
 public final class FakeBackends {
   /** Every chain request the fake chains backend received. */
   public final List<ChainRequest> chainRequests = new ArrayList<>();
   public final List<String> indexed = new ArrayList<>();
 
-  /** Interim backends, except chains (records requests, returns a direct two-step chain) and indexing (fake). */
+  /** Production backends, except chains (records requests, returns a direct two-step chain) and indexing (fake). */
   public Backends.Factory factory() {
     return lib -> {
-      Backends real = InterimBackends.create(lib);
+      Backends real = LibraryBackends.create(lib);
       return new Backends(real.similarity(), real.pairs(), (start, end, req, token) -> {
         chainRequests.add(req);
         return List.of(ChainCandidate.of(List.of(start, end),
@@ -33,7 +33,7 @@ public final class FakeBackends {
         }
         indexed.add(folder.toString());
         return new IndexSummary(4, 3, 1);
-      });
+      }, real);
     };
   }
 
@@ -57,7 +57,7 @@ public final class FakeBackends {
   }
 
   public static Backends withWalk(Library lib, WalkBackend walk) {
-    Backends real = InterimBackends.create(lib);
-    return new Backends(real.similarity(), real.pairs(), real.chains(), walk, real.preview(), real.indexing());
+    Backends real = LibraryBackends.create(lib);
+    return new Backends(real.similarity(), real.pairs(), real.chains(), walk, real.preview(), real.indexing(), real);
   }
 }

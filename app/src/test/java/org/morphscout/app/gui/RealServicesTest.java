@@ -81,6 +81,17 @@ class RealServicesTest {
       double stars = vm.pairs().rows().stream().filter(r -> r.nameB().startsWith("star-"))
           .mapToDouble(r -> r.suggestion().components().get("overlap")).max().orElseThrow();
       assertThat(discs).isGreaterThan(stars);
+      // the same numbers as the command line prints for the same catalog (pairs --for, CSV scores to one decimal)
+      java.io.StringWriter cli = new java.io.StringWriter();
+      int code = org.morphscout.app.Main.execute(new String[] {"--catalog", tmp.resolve("catalog").toString(),
+          "pairs", "--for", round.path(), "--csv"}, new java.io.PrintWriter(cli),
+          new java.io.PrintWriter(new java.io.StringWriter()));
+      assertThat(code).isZero();
+      java.util.Map<String, String> cliScores = new java.util.HashMap<>();
+      cli.toString().lines().skip(1).map(l -> l.split(",")).forEach(c -> cliScores.put(c[1], c[2]));
+      assertThat(vm.pairs().rows()).allSatisfy(r -> assertThat(String.format(java.util.Locale.ROOT, "%.1f",
+          r.suggestion().score())).isEqualTo(cliScores.get(vm.session().row(r.suggestion().b()).orElseThrow()
+          .path())));
       vm.pairs().approve(vm.pairs().rows().get(0));
       assertThat(vm.pairs().rows().get(0).decisionProperty().get()).isEqualTo("approved");
 

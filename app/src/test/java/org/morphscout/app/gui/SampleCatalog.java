@@ -22,6 +22,7 @@ import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.LibrarySettings;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ShapeDescriptor;
 import org.morphscout.indexer.silhouette.Silhouette;
@@ -82,6 +83,7 @@ public final class SampleCatalog {
     List<Picture> pictures = pictures(seed);
     try (Library lib = Library.open(catalogDir)) {
       lib.features().registerModel(MODEL, 8, "invented test vectors");
+      lib.features().putSetting(LibrarySettings.ACTIVE_MODEL, MODEL);
       long rootId = lib.images().ensureRoot(photos);
       for (Picture p : pictures) {
         Path file = photos.resolve(p.folder()).resolve(p.name());

@@ -147,6 +147,7 @@ class ViewModelsTest {
     assertThat(fakes.chainRequests.get(2).avoid()).isEmpty();
     assertThat(fakes.chainRequests.get(2).require()).containsExactly(star.id());
     chains.preview(chains.chains().get(0));
+    assertThat(chains.messageProperty().get()).isEmpty();
     assertThat(chains.previewProperty().get()).hasSize(12);
   }
 

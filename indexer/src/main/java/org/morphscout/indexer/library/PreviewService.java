@@ -44,7 +44,7 @@ public final class PreviewService {
         throw new MorphscoutException("no object found in " + a.path() + ": a warp needs a silhouette");
       }
       try {
-        BufferedImage image = context.analyzer().decoder().decode(Path.of(a.path())).analysis();
+        BufferedImage image = context.decoder().decode(Path.of(a.path())).analysis();
         decoded.add(new PreviewMorph.Stop(image, a.silhouette()));
       } catch (ImageReadException e) {
         throw new MorphscoutException(a.path() + ": " + e.reason(), e);

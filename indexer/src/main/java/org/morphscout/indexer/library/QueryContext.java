@@ -11,7 +11,10 @@ import org.morphscout.indexer.analysis.ImageAnalyzer;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.WriterLock;
+import org.morphscout.indexer.ingest.ImageDecoder;
+import org.morphscout.indexer.ingest.ImageIoDecoder;
 import org.morphscout.indexer.ingest.ImageReadException;
+import org.morphscout.indexer.vector.BruteForceVectorIndex;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.morphscout.indexer.vector.UnusableIndexException;
@@ -29,6 +32,10 @@ public final class QueryContext implements AutoCloseable {
   private final AnalysisSetup setup;
   private final AnalysisCache cache;
   private LuceneVectorIndex index;
+  /** The exact index built from the stored vectors while the catalog has no vector folder; null otherwise. */
+  private BruteForceVectorIndex exact;
+  private int exactSize = -1;
+  private String notice = "";
   private ImageAnalyzer analyzer;
 
   public QueryContext(Library library, AnalysisSetup setup) {
@@ -45,19 +52,44 @@ public final class QueryContext implements AutoCloseable {
     return cache;
   }
 
-  /** The vector index as last committed; reopened to see newer commits. */
+  /**
+   * The vector index as last committed; reopened to see newer commits. A catalog with no vector folder (written
+   * before the folder existed, or copied without it) gets an exact index built in memory from its stored vectors,
+   * rebuilt when the number of ready images changes, and {@link #notice()} says so in one line.
+   */
   public synchronized VectorIndex index() throws IOException {
+    if (index == null && !Files.isDirectory(library.catalog().vectorDir())) {
+      return exactIndex();
+    }
     if (index == null) {
-      if (!Files.isDirectory(library.catalog().vectorDir())) {
-        throw new MorphscoutException("the catalog " + library.catalog().dir() + " has no vector index yet: run "
-            + "morphscout index <folder> first");
-      }
+      exact = null;
+      notice = "";
       repairIfNeeded();
       index = LuceneVectorIndex.openReadOnly(library.catalog().vectorDir(), LuceneIndexOptions.defaults());
     } else {
       index.refresh();
     }
     return index;
+  }
+
+  private VectorIndex exactIndex() throws IOException {
+    String model = modelId();
+    int ready = library.features().readyIds(model).size();
+    if (exact == null || exactSize != ready) {
+      BruteForceVectorIndex built = new BruteForceVectorIndex();
+      VectorSync.sync(library.features(), built, model, false, new java.util.ArrayList<>());
+      exact = built;
+      exactSize = ready;
+      notice = "The catalog has no vector folder: searching its " + ready + " stored vectors exactly (slower on "
+          + "large catalogs; morphscout index --rebuild-vectors writes the folder).";
+      LOG.info(notice);
+    }
+    return exact;
+  }
+
+  /** A one-line notice about how queries are served (empty when the catalog's own vector index serves them). */
+  public synchronized String notice() {
+    return notice;
   }
 
   /**
@@ -157,6 +189,11 @@ public final class QueryContext implements AutoCloseable {
       return Optional.empty();
     }
     return library.images().byHash(a.contentHash()).stream().map(ImageRow::id).findFirst();
+  }
+
+  /** A decoder with the setup's options, for showing images (needs no appearance model). */
+  public ImageDecoder decoder() {
+    return new ImageIoDecoder(setup.decode());
   }
 
   /** An analyser with the catalog's model, for images outside it. */
