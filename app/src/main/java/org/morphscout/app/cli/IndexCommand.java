@@ -77,6 +77,11 @@ final class IndexCommand implements Callable<Integer> {
     OptionCheck.of(spec).between("--threads", threads == null ? 1 : threads, 1, 256)
         .between("--time-limit", timeLimit, 1, 86_400).between("--neighbours", neighbours, 1, 256);
     PrintWriter out = spec.commandLine().getOut();
+    if (folders.isEmpty() && !java.nio.file.Files.exists(root.catalogDir().resolve("catalog.db"))) {
+      // Checked before opening, which would create an empty catalog.
+      throw OptionCheck.of(spec).fail("name at least one folder to index (there is no catalog in "
+          + root.catalogDir().toAbsolutePath().normalize() + " yet)");
+    }
     IndexOptions options = IndexOptions.defaults()
         .withFollowLinks(followLinks)
         .withRebuildVectors(rebuildVectors)

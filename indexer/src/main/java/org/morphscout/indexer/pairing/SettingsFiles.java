@@ -44,6 +44,12 @@ final class SettingsFiles {
       Properties p = new Properties();
       try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
         p.load(r);
+      } catch (java.nio.charset.CharacterCodingException e) {
+        throw new MorphscoutException("settings file " + file + " is not UTF-8 text: save it as UTF-8", e);
+      } catch (IllegalArgumentException e) {
+        // Properties.load refuses a malformed unicode escape this way.
+        throw new MorphscoutException("settings file " + file + " is not a valid .properties file: "
+            + e.getMessage(), e);
       }
       for (String key : p.stringPropertyNames()) {
         out.put(key, p.getProperty(key));
