@@ -68,7 +68,9 @@ public final class Catalog implements AutoCloseable {
     Files.createDirectories(folder.resolve("thumbnails"));
     Connection c = null;
     try {
+      requireTempFolder();
       c = DriverManager.getConnection("jdbc:sqlite:" + db);
+      nativeLoaded = true;
       SchemaMigrator migrator = SchemaMigrator.bundled();
       migrator.checkNotNewer(c);
       try (Statement s = c.createStatement()) {
@@ -116,7 +118,9 @@ public final class Catalog implements AutoCloseable {
     String url = readOnlyMedia ? "jdbc:sqlite:file:" + db.toUri().getRawPath() + "?immutable=1" : "jdbc:sqlite:" + db;
     Connection c = null;
     try {
+      requireTempFolder();
       c = DriverManager.getConnection(url, config.toProperties());
+      nativeLoaded = true;
       SchemaMigrator migrator = SchemaMigrator.bundled();
       migrator.checkNotNewer(c);
       if (migrator.needsUpgrade(c)) {
@@ -152,6 +156,26 @@ public final class Catalog implements AutoCloseable {
   /** Whether the catalog folder cannot be written at all (read-only media): nothing derived can be repaired there. */
   public boolean onReadOnlyMedia() {
     return readOnlyMedia;
+  }
+
+  /** Set once SQLite's native library is loaded: from then on the temporary folder no longer matters to it. */
+  private static volatile boolean nativeLoaded;
+
+  /**
+   * SQLite's driver unpacks its native library into the temporary folder on first use; when that folder is missing or
+   * not writable it fails deep inside its loader. Say so in one line first.
+   */
+  private static void requireTempFolder() {
+    if (!nativeLoaded) {
+      requireTempFolder(Path.of(System.getProperty("org.sqlite.tmpdir", System.getProperty("java.io.tmpdir"))));
+    }
+  }
+
+  static void requireTempFolder(Path folder) {
+    if (!Files.isDirectory(folder) || !Files.isWritable(folder)) {
+      throw new MorphscoutException("the temporary folder " + folder + " is missing or not writable (the database "
+          + "library unpacks itself there): set TMPDIR to a writable folder");
+    }
   }
 
   private static void checkHeader(Path db) throws IOException {

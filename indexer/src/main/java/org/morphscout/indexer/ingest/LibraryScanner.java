@@ -187,8 +187,32 @@ public final class LibraryScanner {
       if (Files.isSymbolicLink(file) && !linkAllowed(file)) {
         return FileVisitResult.CONTINUE;
       }
+      if (!nameRoundTrips(file)) {
+        problems.add(new ScanProblem(file, "the file name is not valid text in the system's character set (UTF-8 "
+            + "expected), so it cannot be stored faithfully; rename the file (for example with convmv) and index "
+            + "again"));
+        return FileVisitResult.CONTINUE;
+      }
       found.add(new FoundFile(file, attrs.size(), attrs.lastModifiedTime().toInstant()));
       return FileVisitResult.CONTINUE;
+    }
+
+    /**
+     * Whether the path's text names the same file again. A name whose bytes the platform cannot decode (not UTF-8,
+     * or any non-ASCII name under a non-UTF-8 locale) turns into replacement characters in its text form, which would
+     * be stored and later name no file.
+     */
+    private boolean nameRoundTrips(Path file) {
+      String text = file.toString();
+      if (text.indexOf('\uFFFD') < 0) {
+        return true;
+      }
+      try {
+        return Files.exists(Path.of(text), java.nio.file.LinkOption.NOFOLLOW_LINKS)
+            && Files.isSameFile(Path.of(text), file);
+      } catch (IOException | java.nio.file.InvalidPathException e) {
+        return false;
+      }
     }
 
     @Override

@@ -69,7 +69,8 @@ public final class LibraryIndexer {
 
         Map<Long, List<FoundFile>> found = scan(roots, failures, progress, cancel);
         Map<Path, String> hashFailures = new LinkedHashMap<>();
-        ScanReconciler.Plan plan = new ScanReconciler(library).reconcile(found, hashFailures, ids -> {
+        ScanReconciler reconciler = new ScanReconciler(library, setup.decode().maxPixels());
+        ScanReconciler.Plan plan = reconciler.reconcile(found, hashFailures, ids -> {
           for (long id : ids) {
             index.delete(id);
           }

@@ -23,10 +23,21 @@ import org.morphscout.indexer.ingest.FoundFile;
  * alone.
  */
 final class ScanReconciler {
+  /** The reason {@code ImageIoDecoder} gives for an image over the pixel cap, with its size. */
+  private static final java.util.regex.Pattern TOO_LARGE =
+      java.util.regex.Pattern.compile("^image too large: (\\d+)x(\\d+) ");
+
   private final Library library;
+  private final long maxPixels;
 
   ScanReconciler(Library library) {
+    this(library, Long.MAX_VALUE);
+  }
+
+  /** @param maxPixels this run's pixel cap: images refused by a lower cap earlier are tried again */
+  ScanReconciler(Library library, long maxPixels) {
     this.library = library;
+    this.maxPixels = maxPixels;
   }
 
   /** The outcome: images to analyse, and counts. */
@@ -103,7 +114,7 @@ final class ScanReconciler {
         if (row != null && row.status() != ImageStatus.MISSING && row.size() == f.size() && row.mtimeMs() == mtime
             && row.status() != ImageStatus.PENDING) {
           if (row.status() == ImageStatus.FAILED && transientFailure(row.id())) {
-            // A time-out or a lack of memory says more about the machine than the file: try again.
+            // A time-out, a lack of memory or a lower pixel cap says more about the run than the file: try again.
             long id = row.id();
             writes.add(() -> images.setStatus(id, ImageStatus.PENDING));
             pendingIds.add(id);
@@ -197,7 +208,13 @@ final class ScanReconciler {
 
   private boolean transientFailure(long id) {
     String reason = library.images().failureReason(id).orElse("");
-    return reason.startsWith("timed out") || reason.contains("took longer than") || reason.contains("not enough memory");
+    java.util.regex.Matcher large = TOO_LARGE.matcher(reason);
+    if (large.find()) {
+      // Refused by the pixel cap of an earlier run: worth another try once the cap admits it.
+      return Long.parseLong(large.group(1)) * Long.parseLong(large.group(2)) <= maxPixels;
+    }
+    return reason.startsWith("timed out") || reason.contains("took longer than")
+        || reason.contains("not enough memory");
   }
 
   static String key(Path p) {

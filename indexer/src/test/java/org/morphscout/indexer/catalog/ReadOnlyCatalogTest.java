@@ -52,4 +52,12 @@ class ReadOnlyCatalogTest {
     }
     return files;
   }
+
+  @Test
+  void aMissingTemporaryFolderIsSaidInOneLine() {
+    org.assertj.core.api.Assertions.assertThatThrownBy(() -> Catalog.requireTempFolder(tmp.resolve("no-such-tmp")))
+        .isInstanceOf(org.morphscout.indexer.MorphscoutException.class).hasMessageContaining("TMPDIR")
+        .hasMessageContaining("no-such-tmp");
+    Catalog.requireTempFolder(tmp);
+  }
 }
