@@ -40,6 +40,12 @@ final class ErrorHandler implements IExecutionExceptionHandler {
       LOG.debug("details", t);
       return ExitCodes.ERROR;
     }
+    if (t instanceof java.nio.file.InvalidPathException bad) {
+      // A NUL in the name, or (under a non-UTF-8 locale) a character the system's file-name encoding cannot hold.
+      cmd.getErr().println(name + ": not a usable path: " + Terminal.safe(bad.getInput()) + " (" + bad.getReason()
+          + "; non-ASCII names need a UTF-8 locale, e.g. LC_ALL=C.UTF-8, which the morphscout launcher sets)");
+      return ExitCodes.ERROR;
+    }
     if (t instanceof NoSuchFileException nsf) {
       cmd.getErr().println(name + ": file not found: " + Terminal.safe(nsf.getFile()));
       return ExitCodes.ERROR;

@@ -159,4 +159,10 @@ class HostileInputCommandTest {
     Path binary = Files.write(tmp.resolve("plans/binary.csv"), new byte[] {1, 0, 2, 0});
     assertThat(cli.run("screen", binary.toString()).failsCleanly(ExitCodes.ERROR).err()).contains("binary");
   }
+
+  @Test
+  void aPathTheSystemCannotHoldIsOneLineNotAStackTrace() {
+    Cli.Run run = cli.run("similar", "bad\u0000name.png").failsCleanly(ExitCodes.ERROR);
+    assertThat(run.err()).contains("not a usable path", "bad\\x00name.png").doesNotContain("unexpected");
+  }
 }
