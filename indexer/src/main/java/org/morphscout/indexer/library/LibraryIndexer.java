@@ -115,8 +115,9 @@ public final class LibraryIndexer {
           // Also images that are ready but have no neighbour list (returned files, an interrupted earlier run).
           Set<Long> linked = library.neighbours().idsWithLinks();
           List<Long> changed = new ArrayList<>(analysed);
+          Set<Long> analysedIds = new java.util.HashSet<>(analysed); // a set: this loop runs over the whole library
           for (long id : library.features().readyIds(modelId)) {
-            if (!linked.contains(id) && !analysed.contains(id)) {
+            if (!linked.contains(id) && !analysedIds.contains(id)) {
               changed.add(id);
             }
           }

@@ -18,6 +18,8 @@ import org.morphscout.indexer.warp.WarpResult;
  * @param scaleRatio sqrt(smaller object area fraction / larger), in [0, 1]
  * @param offset distance between the object centroids in image fractions, in [0, sqrt 2]
  * @param backgroundDeltaE colour difference of the background means
+ * @param exposureA mean L* of the whole picture A (object and background weighted by their areas), in [0, 100]
+ * @param exposureB mean L* of the whole picture B
  */
 record PairMeasures(
     WarpResult warp,
@@ -32,7 +34,9 @@ record PairMeasures(
     double resolutionRatio,
     double scaleRatio,
     double offset,
-    double backgroundDeltaE) {
+    double backgroundDeltaE,
+    double exposureA,
+    double exposureB) {
 
   static PairMeasures of(ImageAnalysis a, ImageAnalysis b, WarpResult warp, ColourDifference colour) {
     double appearance = Double.NaN;
@@ -75,7 +79,25 @@ record PairMeasures(
     double offset = Math.hypot(a.shape().centroidX() - b.shape().centroidX(),
         a.shape().centroidY() - b.shape().centroidY());
     return new PairMeasures(warp, appearance, deltaE, la, lb, sa, sb, stdRatio, aspectGap, resolution, scale, offset,
-        bgDeltaE);
+        bgDeltaE, exposure(a), exposure(b));
+  }
+
+  /**
+   * Mean L* of the whole picture: the object's and the background's means weighted by the object's area fraction;
+   * NaN when the colour statistics are missing.
+   */
+  static double exposure(ImageAnalysis x) {
+    ColourStats c = x.colour();
+    if (c == null) {
+      return Double.NaN;
+    }
+    boolean fg = finite(c.foregroundMean());
+    boolean bg = finite(c.backgroundMean());
+    double f = Math.max(0, Math.min(1, x.shape().areaFraction()));
+    if (fg && bg) {
+      return f * c.foregroundMean()[0] + (1 - f) * c.backgroundMean()[0];
+    }
+    return fg ? c.foregroundMean()[0] : bg ? c.backgroundMean()[0] : Double.NaN;
   }
 
   static double cosine(float[] p, float[] q) {

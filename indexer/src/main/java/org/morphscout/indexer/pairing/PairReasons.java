@@ -70,6 +70,10 @@ final class PairReasons {
       String words = m.lightnessA() < m.lightnessB() ? "dark vs bright" : "bright vs dark";
       out.add(fmt(words + " (L* %.0f vs %.0f)", m.lightnessA(), m.lightnessB()));
     }
+    if (Math.abs(m.exposureA() - m.exposureB()) > cfg.reasonExposure()) {
+      String words = m.exposureA() < m.exposureB() ? "A is exposed much darker than B" : "A is exposed much brighter than B";
+      out.add(fmt(words + " (whole-picture mean L* %.0f vs %.0f)", m.exposureA(), m.exposureB()));
+    }
     if (m.stdRatio() < cfg.reasonContrast()) {
       out.add(fmt("contrast differs (L* spread %.0f vs %.0f)", m.stdA(), m.stdB()));
     }

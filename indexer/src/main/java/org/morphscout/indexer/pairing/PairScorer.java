@@ -17,7 +17,8 @@ import org.morphscout.indexer.warp.WarpResult;
  * overlap, a huge colour gap) drags the whole score down instead of being averaged away; the floor of 0.01 keeps a
  * single zero from erasing every other difference. The mean is multiplied by a penalty factor for each framing
  * fault (object cut off by the frame, several objects, a tiny image; per image), then by 100. The verdict comes from
- * {@link ScoreConfig#passScore()} and {@link ScoreConfig#warnScore()}; a framing fault caps it at WARN. A pair where
+ * {@link ScoreConfig#passScore()} and {@link ScoreConfig#warnScore()}; a framing fault, or frames of clearly different
+ * aspect ratios ({@link ScoreConfig#passMaxAspectGap()}), cap it at WARN. A pair where
  * either image has no silhouette scores 0 with verdict FAIL.
  *
  * <p>Immutable and thread-safe.
@@ -85,7 +86,7 @@ public final class PairScorer {
     double score = Math.max(0, Math.min(100, 100 * mean * penalty));
     Verdict verdict = score >= config.passScore() ? Verdict.PASS
         : score >= config.warnScore() ? Verdict.WARN : Verdict.FAIL;
-    if (verdict == Verdict.PASS && !faults.isEmpty()) {
+    if (verdict == Verdict.PASS && (!faults.isEmpty() || m.aspectRatioGap() > config.passMaxAspectGap())) {
       verdict = Verdict.WARN;
     }
     List<String> reasons = new ArrayList<>();
@@ -129,6 +130,7 @@ public final class PairScorer {
     putIfKnown(r, "appearanceDistance", m.appearanceDistance(), false);
     putIfKnown(r, "deltaE00", m.deltaE00(), false);
     putIfKnown(r, "lightnessGap", Math.abs(m.lightnessA() - m.lightnessB()), false);
+    putIfKnown(r, "exposureGap", Math.abs(m.exposureA() - m.exposureB()), false);
     putIfKnown(r, "stdRatio", m.stdRatio(), false);
     r.put("aspectRatioGap", m.aspectRatioGap());
     r.put("resolutionRatio", m.resolutionRatio());

@@ -31,14 +31,18 @@ import java.util.Map;
  * <p>Penalty factors multiply the score for framing faults: object touching the frame {@code cutOffPenalty} [0.6],
  * several objects {@code severalObjectsPenalty} [0.75], an image whose long side is below {@code tinyLongSide}
  * [320 px] {@code tinyPenalty} [0.7]. Verdict: PASS at or above {@code passScore} [65], WARN at or above
- * {@code warnScore} [40], FAIL below; a framing fault caps the verdict at WARN.
+ * {@code warnScore} [40], FAIL below; a framing fault caps the verdict at WARN, and so do frames whose aspect ratios
+ * differ by more than {@code passMaxAspectGap} [0.2] (|ln ratio|, about 22%: 3:2 against 4:3 passes, 4:3 against
+ * 16:9 does not), because the morph must crop or pad one of them.
  *
  * <p>Reason thresholds (a reason is written when a measure crosses them): {@code reasonIou} [0.6],
  * {@code reasonEffort} [0.15], {@code reasonFold} [0.01], {@code reasonAppearance} [0.5] (1 - cosine),
  * {@code reasonDeltaE} [20], {@code reasonLightness} [40] (L* gap), {@code reasonContrast} [0.4] (std ratio),
  * {@code reasonAspect} [0.1] (|ln ratio|, about 10%), {@code reasonScale} [0.5], {@code reasonOffset} [0.25],
  * {@code reasonResolution} [0.25], {@code reasonBackground} [25] (deltaE00), {@code reasonTurnGain} [0.15] (IoU a
- * pose beyond the alignment's rotation limit, an object laid on its side, would gain over the upright alignment).
+ * pose beyond the alignment's rotation limit, an object laid on its side, would gain over the upright alignment),
+ * {@code reasonExposure} [30] (gap of the whole pictures' mean L*, object and background together: an overall
+ * exposure difference, which a morph shows as a fade through a brightness change).
  */
 public record ScoreConfig(
     double overlapWeight,
@@ -83,14 +87,17 @@ public record ScoreConfig(
     double reasonOffset,
     double reasonResolution,
     double reasonBackground,
-    double reasonTurnGain) {
+    double reasonTurnGain,
+    double reasonExposure,
+    double passMaxAspectGap) {
 
   public static final ScoreConfig DEFAULTS = new ScoreConfig(
       3.0, 1.5, 1.0, 1.5, 1.0, 0.75, 0.5, 0.5, 0.25, 0.5, 0.25, 0.25,
       0.3, 0.95, 0.15, 0.05, 0.6, 40, 50, 0.7, 0.5, 0.8, 0.5, 50,
       0.6, 0.75, 0.7, 320,
       65, 40,
-      0.6, 0.15, 0.01, 0.5, 20, 40, 0.4, 0.1, 0.5, 0.25, 0.25, 25, 0.15);
+      0.6, 0.15, 0.01, 0.5, 20, 40, 0.4, 0.1, 0.5, 0.25, 0.25, 25, 0.15,
+      30, 0.2);
 
   public ScoreConfig {
     double[] weights = {overlapWeight, warpEffortWeight, foldSafetyWeight, appearanceWeight, colourWeight,
@@ -143,6 +150,8 @@ public record ScoreConfig(
     range("reasonResolution", reasonResolution, 0, 1);
     positive("reasonBackground", reasonBackground);
     range("reasonTurnGain", reasonTurnGain, 0, 1);
+    positive("reasonExposure", reasonExposure);
+    positive("passMaxAspectGap", passMaxAspectGap);
   }
 
   /**

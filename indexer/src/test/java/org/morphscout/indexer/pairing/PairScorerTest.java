@@ -114,6 +114,49 @@ class PairScorerTest {
     assertThat(Verdict.FAIL.toString()).isEqualTo("fail");
   }
 
+  @Test
+  void aWholePictureExposureGapIsNamedEvenWhenTheObjectsMatch() {
+    // Same object colour; the background (most of the frame) is dark in A and bright in B, as in an under- and an
+    // over-exposed shot of one scene. L* 21 and 84 are the CIELAB lightness of sRGB greys 50 and 210 (CIE 15 / IEC
+    // 61966-2-1 formulas; values worked out by hand from them).
+    ImageAnalysis a = Analyses.builder(1).foreground(50, 10, 20).background(21, 0, 0).build();
+    ImageAnalysis b = Analyses.builder(2).foreground(50, 10, 20).background(84, 0, 0).build();
+    PairScore s = scorer.score(a, b);
+    double ea = PairMeasures.exposure(a);
+    double eb = PairMeasures.exposure(b);
+    double f = a.shape().areaFraction();
+    assertThat(ea).isCloseTo(f * 50 + (1 - f) * 21, org.assertj.core.data.Offset.offset(1e-9));
+    assertThat(s.reasons()).anySatisfy(r -> assertThat(r).startsWith("A is exposed much darker than B")
+        .contains(String.format(java.util.Locale.ROOT, "%.0f vs %.0f", ea, eb)));
+    assertThat(s.reasons()).noneMatch(r -> r.startsWith("dark vs bright"));
+    assertThat(s.measures().get("exposureGap")).isCloseTo(Math.abs(ea - eb), org.assertj.core.data.Offset.offset(1e-9));
+    // The reverse order names the other side.
+    assertThat(scorer.score(b, a).reasons()).anyMatch(r -> r.startsWith("A is exposed much brighter than B"));
+    // A small exposure difference says nothing.
+    ImageAnalysis c = Analyses.builder(3).foreground(50, 10, 20).background(30, 0, 0).build();
+    assertThat(scorer.score(a, c).reasons()).noneMatch(r -> r.contains("exposed"));
+  }
+
+  @Test
+  void framesOfClearlyDifferentAspectRatiosNeverPass() {
+    // 4:3 against 2.5:1: |ln(1.333 / 2.5)| = 0.63, far beyond the default 0.2.
+    ImageAnalysis a = Analyses.builder(1).size(1600, 1200).build();
+    ImageAnalysis wide = Analyses.builder(2).size(2500, 1000).build();
+    PairScore s = scorer.score(a, wide);
+    assertThat(s.score()).as("otherwise a good pair").isGreaterThanOrEqualTo(ScoreConfig.DEFAULTS.warnScore());
+    assertThat(s.verdict()).isEqualTo(Verdict.WARN);
+    // 3:2 against 4:3 (|ln 1.125| = 0.118) is within the limit: a clean pair still passes.
+    PairScore close = scorer.score(Analyses.builder(1).size(1500, 1000).build(), Analyses.builder(2).size(1600, 1200)
+        .build());
+    assertThat(close.verdict()).isEqualTo(Verdict.PASS);
+    // The limit is a setting.
+    PairScorer lenient = new PairScorer(ScoreConfig.DEFAULTS.withOverrides(java.util.Map.of("passMaxAspectGap", "1")),
+        ColourDifference.cie76(), new WarpEstimator());
+    PairScore lenientScore = lenient.score(a, wide);
+    assertThat(lenientScore.verdict()).isEqualTo(lenientScore.score() >= ScoreConfig.DEFAULTS.passScore()
+        ? Verdict.PASS : Verdict.WARN);
+  }
+
   private void expectReason(UnaryOperator<Analyses.Builder> change, String reason) {
     ImageAnalysis a = clean(1);
     assertThat(scorer.score(a, clean(2)).reasons()).as("clean pair").noneMatch(r -> r.startsWith(reason));
