@@ -90,10 +90,12 @@ class RefusedInputCommandTest {
     byte[] junk = new byte[100_000];
     new SplittableRandom(SEED).nextBytes(junk);
     Path bad = Files.write(tmp.resolve("u2netp.onnx"), junk);
-    Run r = run("--catalog", catalog.toString(), "models", "add-salient", "--from", bad.toString());
+    Path folder = tmp.resolve("models");
+    Run r = run("--catalog", catalog.toString(), "models", "add-salient", "--from", bad.toString(), "--models",
+        folder.toString());
     assertThat(r.code()).as("seed %d; %s", SEED, r.err()).isEqualTo(3);
     assertThat(r.err()).contains("checksum").doesNotContain("\tat ");
-    try (Stream<Path> models = Files.exists(catalog.resolve("models")) ? Files.list(catalog.resolve("models"))
+    try (Stream<Path> models = Files.exists(folder) ? Files.list(folder)
         : Stream.empty()) {
       assertThat(models.map(p -> p.getFileName().toString())).as("installed model files")
           .noneMatch(n -> n.startsWith("u2netp"));

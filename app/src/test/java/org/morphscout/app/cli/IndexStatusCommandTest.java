@@ -115,10 +115,11 @@ class IndexStatusCommandTest {
   @Test
   void salientModelWithWrongBytesIsRefused(@TempDir Path other) throws IOException {
     Path fake = Files.writeString(other.resolve("u2netp.onnx"), "these are not the model's bytes");
-    Cli.Run run = new Cli(other.resolve("catalog")).run("models", "add-salient", "--from", fake.toString());
+    Cli.Run run = new Cli(other.resolve("catalog")).run("models", "add-salient", "--from", fake.toString(),
+        "--models", other.resolve("models").toString());
     run.failsCleanly(ExitCodes.ERROR);
     assertThat(run.err()).contains("checksum mismatch");
-    assertThat(Files.exists(other.resolve("catalog/models/u2netp.onnx"))).isFalse();
+    assertThat(Files.exists(other.resolve("models/u2netp.onnx"))).isFalse();
   }
 
   @ParameterizedTest

@@ -168,8 +168,10 @@ public final class LibraryIndexer {
     library.features().registerModel(modelId, dimension,
         setup.model().isPresent() ? "user model " + setup.model().get().modelFile() : "built-in GIST + CIELAB layout");
     String active = LibrarySettings.activeModel(library.features()).orElse(null);
-    String silhouettes = setup.silhouettes().name().toLowerCase(java.util.Locale.ROOT);
-    String activeSilhouettes = library.features().setting(LibrarySettings.ACTIVE_SILHOUETTES).orElse(silhouettes);
+    String silhouettes = AnalyzerFactory.effectiveSilhouettes(library, setup);
+    String activeSilhouettes = library.features().setting(LibrarySettings.ACTIVE_SILHOUETTES)
+        .map(s -> s.equals("default") ? "classical" : s) // the classical extractor's earlier name
+        .orElse(silhouettes);
     List<Long> reembed = new ArrayList<>();
     boolean modelChanged = active != null && !active.equals(modelId);
     if (modelChanged || !activeSilhouettes.equals(silhouettes)) {

@@ -41,6 +41,22 @@ final class PairReasons {
     return out;
   }
 
+  /**
+   * Silhouettes too doubtful to judge a shape by: the overlap, warp and framing figures of such a pair may describe
+   * the background or a part of the object rather than the object.
+   */
+  static List<String> uncertainSilhouettes(ImageAnalysis a, ImageAnalysis b) {
+    List<String> out = new ArrayList<>();
+    for (String label : new String[] {"A", "B"}) {
+      Silhouette s = (label.equals("A") ? a : b).silhouette();
+      if (s.uncertain()) {
+        out.add(fmt("the silhouette of %s is uncertain (confidence %.2f), so its shape figures may be wrong", label,
+            s.confidence()));
+      }
+    }
+    return out;
+  }
+
   /** All other findings, from the measures. */
   static List<String> measured(ImageAnalysis a, ImageAnalysis b, PairMeasures m, ScoreConfig cfg) {
     List<String> out = new ArrayList<>();

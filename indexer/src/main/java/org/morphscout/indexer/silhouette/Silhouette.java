@@ -29,6 +29,14 @@ public record Silhouette(
     return small == mask ? this : new Silhouette(small, components, touchesFrame, coverage, confidence, source);
   }
 
+  /** Confidence under which a silhouette counts as uncertain: scores and verdicts that use it say so. */
+  public static final double UNCERTAIN_BELOW = 0.45;
+
+  /** Whether this silhouette is too doubtful to score a shape by (an empty one is not uncertain: it is absent). */
+  public boolean uncertain() {
+    return !isEmpty() && confidence < UNCERTAIN_BELOW;
+  }
+
   /** Whether a usable object was found at all. */
   public boolean isEmpty() {
     return mask.area() == 0;

@@ -68,6 +68,7 @@ public final class Analyses {
     private double shiftY;
     private int components = 1;
     private boolean touchesFrame;
+    private double confidence = 0.9;
     private double[] fgMean = {50, 10, 20};
     private double[] fgStd = {15, 5, 5};
     private double[] bgMean = {92, 0, 2};
@@ -102,6 +103,11 @@ public final class Analyses {
 
     public Builder components(int n) {
       components = n;
+      return this;
+    }
+
+    public Builder confidence(double c) {
+      confidence = c;
       return this;
     }
 
@@ -157,7 +163,7 @@ public final class Analyses {
       t.scale(unit, unit);
       Mask mask = empty ? Mask.empty(mw, mh) : TestMasks.draw(mw, mh, t.createTransformedShape(object));
       Silhouette sil = new Silhouette(mask, empty ? 0 : components, touchesFrame, mask.coverage(),
-          empty ? 0 : 0.9, "test");
+          empty ? 0 : confidence, "test");
       ColourStats colour = new ColourStats(fgMean.clone(), fgStd.clone(), bgMean.clone(), bgStd.clone(), List.of());
       return new ImageAnalysis(id, "/photos/img" + id + ".jpg", width, height, "jpeg", appearance.clone(), "test-model",
           sil, describe(mask), colour, hash, fingerprint);

@@ -157,6 +157,21 @@ class PairScorerTest {
         ? Verdict.PASS : Verdict.WARN);
   }
 
+  @Test
+  void anUncertainSilhouetteIsNamedFirstAndThePairNeverPasses() {
+    PairScore sure = scorer.score(clean(1), clean(2));
+    assertThat(sure.verdict()).isEqualTo(Verdict.PASS);
+    ImageAnalysis doubtful = Analyses.builder(2).confidence(0.3).build();
+    PairScore s = scorer.score(clean(1), doubtful);
+    assertThat(s.reasons().get(0)).isEqualTo("the silhouette of B is uncertain (confidence 0.30), so its shape "
+        + "figures may be wrong");
+    assertThat(s.verdict()).isEqualTo(Verdict.WARN);
+    // At the threshold it is no longer uncertain.
+    ImageAnalysis atLimit = Analyses.builder(2).confidence(org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW)
+        .build();
+    assertThat(scorer.score(clean(1), atLimit).verdict()).isEqualTo(Verdict.PASS);
+  }
+
   private void expectReason(UnaryOperator<Analyses.Builder> change, String reason) {
     ImageAnalysis a = clean(1);
     assertThat(scorer.score(a, clean(2)).reasons()).as("clean pair").noneMatch(r -> r.startsWith(reason));

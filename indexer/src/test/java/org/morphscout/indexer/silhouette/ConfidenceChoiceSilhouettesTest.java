@@ -1,0 +1,116 @@
+package org.morphscout.indexer.silhouette;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.junit.jupiter.api.Test;
+
+class ConfidenceChoiceSilhouettesTest {
+  private static final BufferedImage IMAGE = new BufferedImage(64, 48, BufferedImage.TYPE_INT_ARGB);
+
+  /** A fixed answer, counting how often it was asked. */
+  private static final class Fixed implements SilhouetteExtractor {
+    final Silhouette answer;
+    final AtomicInteger calls = new AtomicInteger();
+
+    Fixed(Silhouette answer) {
+      this.answer = answer;
+    }
+
+    @Override
+    public Silhouette extract(BufferedImage image) {
+      calls.incrementAndGet();
+      return answer;
+    }
+
+    @Override
+    public String name() {
+      return answer.source();
+    }
+  }
+
+  private static Silhouette box(int x0, int y0, int x1, int y1, double confidence, boolean touches, String source) {
+    byte[] data = new byte[64 * 48];
+    for (int y = y0; y < y1; y++) {
+      for (int x = x0; x < x1; x++) {
+        data[y * 64 + x] = 1;
+      }
+    }
+    Mask m = new Mask(64, 48, data);
+    return new Silhouette(m, 1, touches, m.coverage(), confidence, source);
+  }
+
+  private static ConfidenceChoiceSilhouettes choice(Fixed classical, Fixed learned) {
+    return new ConfidenceChoiceSilhouettes(classical, () -> learned, ConfidenceChoiceSilhouettes.Options.DEFAULTS);
+  }
+
+  @Test
+  void aConfidentClassicalSilhouetteIsKeptWithoutRunningTheModel() {
+    Fixed classical = new Fixed(box(20, 10, 44, 40, 0.9, false, "border-model"));
+    Fixed learned = new Fixed(box(0, 0, 64, 48, 0.99, false, "learned"));
+    Silhouette s = choice(classical, learned).extract(IMAGE);
+    assertThat(s.source()).isEqualTo("border-model");
+    assertThat(s.confidence()).isEqualTo(0.9);
+    assertThat(learned.calls).hasValue(0);
+  }
+
+  @Test
+  void aDoubtfulClassicalSilhouetteLosesToAConfidentLearnedOne() {
+    // The classical mask found the frame's lower half (touches the border, low separation); the learned one an object.
+    Fixed classical = new Fixed(box(0, 24, 64, 48, 0.4, true, "border-model"));
+    Fixed learned = new Fixed(box(20, 8, 44, 40, 0.92, false, "learned"));
+    Silhouette s = choice(classical, learned).extract(IMAGE);
+    assertThat(learned.calls).hasValue(1);
+    assertThat(s.source()).isEqualTo("learned");
+    assertThat(s.uncertain()).isFalse();
+  }
+
+  @Test
+  void whenNeitherIsTrustworthyTheSilhouetteIsUncertain() {
+    Fixed classical = new Fixed(box(0, 0, 64, 30, 0.35, true, "border-model"));
+    Fixed learned = new Fixed(box(40, 30, 64, 48, 0.3, true, "learned"));
+    Silhouette s = choice(classical, learned).extract(IMAGE);
+    assertThat(s.uncertain()).isTrue();
+    assertThat(s.confidence()).isLessThan(Silhouette.UNCERTAIN_BELOW);
+  }
+
+  @Test
+  void agreementRaisesTrustAndDisagreementLowersIt() {
+    Silhouette classicalMask = box(20, 10, 44, 40, 0.45, false, "border-model");
+    Fixed agreeing = new Fixed(box(20, 10, 44, 40, 0.45, false, "learned"));
+    Fixed disagreeing = new Fixed(box(0, 0, 10, 10, 0.45, false, "learned"));
+    double agreed = choice(new Fixed(classicalMask), agreeing).extract(IMAGE).confidence();
+    double disagreed = choice(new Fixed(classicalMask), disagreeing).extract(IMAGE).confidence();
+    assertThat(agreed).isGreaterThan(0.45).isGreaterThan(disagreed);
+    assertThat(disagreed).isLessThan(0.45);
+  }
+
+  @Test
+  void optionsAreValidated() {
+    assertThatThrownBy(() -> new ConfidenceChoiceSilhouettes.Options(1.5, 0.75, 0.85, 0.02))
+        .isInstanceOf(IllegalArgumentException.class);
+    assertThatThrownBy(() -> new ConfidenceChoiceSilhouettes.Options(0.5, 0.75, 0.85, 0.6))
+        .isInstanceOf(IllegalArgumentException.class);
+  }
+
+  @Test
+  void theModelFolderIsTheOptionElseTheEnvironmentElseTheUsersDataFolder() {
+    Path home = Path.of("/home/someone");
+    assertThat(ModelFolder.resolve(Optional.of(Path.of("/opt/m")), Map.of(ModelFolder.ENV, "/env/m"), home).dir())
+        .isEqualTo(Path.of("/opt/m"));
+    assertThat(ModelFolder.resolve(Optional.empty(), Map.of(ModelFolder.ENV, "/env/m"), home).dir())
+        .isEqualTo(Path.of("/env/m"));
+    assertThat(ModelFolder.resolve(Optional.empty(), Map.of("XDG_DATA_HOME", "/data"), home).dir())
+        .isEqualTo(Path.of("/data/morphscout/models"));
+    // The XDG base-directory specification ignores a relative XDG_DATA_HOME.
+    assertThat(ModelFolder.resolve(Optional.empty(), Map.of("XDG_DATA_HOME", "rel"), home).dir())
+        .isEqualTo(Path.of("/home/someone/.local/share/morphscout/models"));
+    assertThat(ModelFolder.resolve(Optional.empty(), Map.of(), home).salientModel())
+        .isEqualTo(Path.of("/home/someone/.local/share/morphscout/models/u2netp.onnx"));
+  }
+}
