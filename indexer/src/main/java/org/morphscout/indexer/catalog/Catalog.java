@@ -81,13 +81,9 @@ public final class Catalog implements AutoCloseable {
       }
       migrator.migrate(c);
       return new Catalog(folder, c, false, false);
-    } catch (SchemaException e) {
+    } catch (SchemaException | SQLException e) {
       closeQuietly(c);
-      throw new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
-    } catch (SQLException e) {
-      closeQuietly(c);
-      throw new MorphscoutException("cannot open catalog database " + db + ": " + describe(e, folder)
-          + ". The file was left untouched; restore it from a backup or choose another catalog folder.", e);
+      throw refused(e, folder, db);
     }
   }
 
@@ -135,13 +131,9 @@ public final class Catalog implements AutoCloseable {
       Catalog catalog = new Catalog(folder, c, true, readOnlyMedia);
       catalog.checkTables(CHECKED_AT_OPEN);
       return catalog;
-    } catch (SchemaException e) {
+    } catch (SchemaException | SQLException e) {
       closeQuietly(c);
-      throw new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
-    } catch (SQLException e) {
-      closeQuietly(c);
-      throw new MorphscoutException("cannot open catalog database " + db + ": " + describe(e, folder)
-          + ". The file was left untouched; restore it from a backup or choose another catalog folder.", e);
+      throw refused(e, folder, db);
     } catch (RuntimeException e) {
       closeQuietly(c);
       throw e;
@@ -207,6 +199,15 @@ public final class Catalog implements AutoCloseable {
       return "the database file is damaged (" + m + ")";
     }
     return m;
+  }
+
+  /** The user-facing refusal of a catalog that could not be opened: not a catalog, newer, or damaged. */
+  private static MorphscoutException refused(Exception e, Path folder, Path db) {
+    if (e instanceof SchemaException) {
+      return new MorphscoutException("cannot open catalog " + folder + ": " + e.getMessage(), e);
+    }
+    return new MorphscoutException("cannot open catalog database " + db + ": " + describe((SQLException) e, folder)
+        + ". The file was left untouched; restore it from a backup or choose another catalog folder.", e);
   }
 
   private static void closeQuietly(Connection c) {

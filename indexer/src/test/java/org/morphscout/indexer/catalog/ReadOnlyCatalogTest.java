@@ -3,13 +3,10 @@ package org.morphscout.indexer.catalog;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.ResultSet;
 import java.sql.Statement;
 import java.util.Map;
-import java.util.TreeMap;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -44,13 +41,7 @@ class ReadOnlyCatalogTest {
   }
 
   private static Map<String, byte[]> snapshot(Path dir) throws IOException {
-    Map<String, byte[]> files = new TreeMap<>();
-    try (Stream<Path> all = Files.walk(dir)) {
-      for (Path p : all.filter(Files::isRegularFile).toList()) {
-        files.put(dir.relativize(p).toString(), Files.readAllBytes(p));
-      }
-    }
-    return files;
+    return FolderSnapshot.of(dir);
   }
 
   @Test

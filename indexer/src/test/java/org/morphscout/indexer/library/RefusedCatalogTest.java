@@ -10,12 +10,11 @@ import java.nio.file.Path;
 import java.sql.PreparedStatement;
 import java.util.Map;
 import java.util.Random;
-import java.util.TreeMap;
-import java.util.stream.Stream;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.catalog.FolderSnapshot;
 
 /**
  * A catalog written by a newer Morphscout, or a damaged database file, is refused with a message that says so, and
@@ -135,12 +134,6 @@ class RefusedCatalogTest {
 
   /** Every file under the folder (relative path to bytes); folders are not listed. */
   private static Map<String, byte[]> snapshot(Path dir) throws IOException {
-    Map<String, byte[]> files = new TreeMap<>();
-    try (Stream<Path> all = Files.walk(dir)) {
-      for (Path p : all.filter(Files::isRegularFile).toList()) {
-        files.put(dir.relativize(p).toString(), Files.readAllBytes(p));
-      }
-    }
-    return files;
+    return FolderSnapshot.of(dir);
   }
 }
