@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.morphscout.indexer.catalog.FeatureStore;
 import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.library.CatalogCheck;
@@ -47,6 +48,7 @@ final class StatusCommand implements Callable<Integer> {
       String model = LibrarySettings.activeModel(library.features()).orElse("none yet");
       long bytes = library.catalog().databaseBytes();
       CatalogCheck checked = check ? CatalogCheck.run(library) : null;
+      FeatureStore.SilhouetteCounts silhouettes = library.features().silhouetteCounts();
       if (json) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("catalog", library.catalog().dir().toString());
@@ -64,6 +66,7 @@ final class StatusCommand implements Callable<Integer> {
         doc.put("databaseBytes", bytes);
         doc.put("featureModel", model);
         doc.put("decisions", library.decisions().count());
+        doc.put("silhouettes", Map.of("bySource", silhouettes.bySource(), "uncertain", silhouettes.uncertain()));
         if (checked != null) {
           doc.put("check", Map.of("database", checked.database(), "vectors", checked.vectors()));
         }
@@ -77,6 +80,9 @@ final class StatusCommand implements Callable<Integer> {
       out.printf("images    %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
           counts.get(ImageStatus.PENDING), counts.get(ImageStatus.FAILED), counts.get(ImageStatus.MISSING));
       out.printf("decisions %d%n", library.decisions().count());
+      out.printf("silhouettes %s; %d uncertain%n", silhouettes.bySource().isEmpty() ? "none yet"
+          : String.join(", ", silhouettes.bySource().entrySet().stream().map(e -> e.getValue() + " " + e.getKey())
+              .toList()), silhouettes.uncertain());
       if (checked != null) {
         out.printf("check     database: %s%n          vector index: %s%n", Terminal.safe(checked.database()),
             Terminal.safe(checked.vectors()));

@@ -103,6 +103,25 @@ class IndexStatusCommandTest {
     assertThat(doc.get("images").asInt()).isEqualTo(lib.all().size() + 1);
     assertThat(doc.get("failed").asInt()).isEqualTo(1);
     assertThat(Cli.texts(doc.get("roots"))).containsExactly(Cli.abs(tmp.resolve("library")));
+    // Every ready image's silhouette is counted once, by what made it; the uncertain ones are counted from the
+    // stored confidences, read here independently of the command.
+    JsonNode silhouettes = doc.get("silhouettes");
+    int counted = 0;
+    for (JsonNode n : silhouettes.get("bySource")) {
+      counted += n.asInt();
+    }
+    assertThat(counted).isEqualTo(doc.get("ready").asInt());
+    int uncertain = 0;
+    try (var c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + tmp.resolve("catalog/catalog.db"));
+        var rs = c.createStatement().executeQuery("SELECT coverage, confidence FROM features")) {
+      while (rs.next()) {
+        uncertain += rs.getDouble(1) > 0 && rs.getDouble(2) < 0.45 ? 1 : 0;
+      }
+    } catch (java.sql.SQLException e) {
+      throw new AssertionError(e);
+    }
+    assertThat(silhouettes.get("uncertain").asInt()).isEqualTo(uncertain);
+    assertThat(cli.run("status").succeeds().out()).containsPattern("silhouettes .*; " + uncertain + " uncertain");
   }
 
   @Test

@@ -170,6 +170,36 @@ public final class FeatureStore {
     });
   }
 
+  /**
+   * Silhouettes of the ready images, counted by what made them ("alpha", "border-model", "learned"), and how many of
+   * them are uncertain (an object was found, with a confidence below
+   * {@link org.morphscout.indexer.silhouette.Silhouette#UNCERTAIN_BELOW}).
+   *
+   * @param bySource counts by extractor, sorted by name
+   * @param uncertain how many are uncertain
+   */
+  public record SilhouetteCounts(java.util.SortedMap<String, Integer> bySource, int uncertain) {}
+
+  public SilhouetteCounts silhouetteCounts() {
+    return catalog.read(c -> {
+      java.util.SortedMap<String, Integer> bySource = new java.util.TreeMap<>();
+      int uncertain = 0;
+      try (PreparedStatement s = c.prepareStatement("SELECT f.silhouette_source, COUNT(*), "
+          + "SUM(CASE WHEN f.coverage > 0 AND f.confidence < ? THEN 1 ELSE 0 END) "
+          + "FROM features f JOIN images i ON i.id = f.image_id WHERE i.status = 'ready' "
+          + "GROUP BY f.silhouette_source")) {
+        s.setDouble(1, org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW);
+        try (ResultSet rs = s.executeQuery()) {
+          while (rs.next()) {
+            bySource.put(rs.getString(1), rs.getInt(2));
+            uncertain += rs.getInt(3);
+          }
+        }
+      }
+      return new SilhouetteCounts(bySource, uncertain);
+    });
+  }
+
   public Optional<String> setting(String key) {
     return catalog.read(c -> {
       try (PreparedStatement s = c.prepareStatement("SELECT value FROM settings WHERE key = ?")) {
