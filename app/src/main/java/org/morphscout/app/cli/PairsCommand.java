@@ -96,7 +96,23 @@ final class PairsCommand implements Callable<Integer> {
     }
   }
 
+  /** Why a search gave no pairs, in one line; empty when pairs were found (no silent nothing). */
+  private List<String> notes(PairSearchResult result) {
+    if (!result.pairs().isEmpty()) {
+      return List.of();
+    }
+    if (result.scored() == 0) {
+      return List.of("no pairs found: no candidate pairs were scored (the catalog needs at least two ready images;"
+          + " see status)");
+    }
+    return List.of("no pairs found" + (minScore > 0 ? " scoring at least " + minScore : "") + ": "
+        + result.scored() + " pairs scored, " + result.duplicates().size() + " near-duplicate pairs left out"
+        + (minScore > 0 ? "; try a lower --min-score" : ""));
+  }
+
   private void printPairs(PrintWriter out, PairSearchResult result, Paths paths, DecisionStore decisions) {
+    List<String> notes = notes(result);
+    notes.forEach(n -> spec.commandLine().getErr().println(n));
     if (format.json) {
       List<Map<String, Object>> rows = new ArrayList<>();
       for (ScoredPair p : result.pairs()) {
@@ -108,6 +124,7 @@ final class PairsCommand implements Callable<Integer> {
       doc.put("pairs", rows);
       doc.put("duplicatesExcluded", result.duplicates().size());
       doc.put("scored", result.scored());
+      doc.put("notes", notes);
       JsonOut.write(out, doc);
       return;
     }
@@ -120,9 +137,6 @@ final class PairsCommand implements Callable<Integer> {
         }
       }
       return;
-    }
-    if (result.pairs().isEmpty()) {
-      out.println("no pairs found" + (minScore > 0 ? " scoring at least " + minScore : ""));
     }
     int rank = 0;
     for (ScoredPair p : result.pairs()) {
