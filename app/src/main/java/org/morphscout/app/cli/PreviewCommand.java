@@ -40,14 +40,20 @@ final class PreviewCommand implements Callable<Integer> {
       description = "Frames per step, both ends included (default: ${DEFAULT-VALUE}).")
   int framesPerStep;
 
-  @Option(names = "--delay", paramLabel = "<ms>", defaultValue = "80",
-      description = "GIF frame delay in milliseconds (default: ${DEFAULT-VALUE}).")
+  @Option(names = "--frame-ms", paramLabel = "<ms>", defaultValue = "80",
+      description = "How long each GIF frame shows, in milliseconds (default: ${DEFAULT-VALUE}).")
   int delay;
+
+  /** The earlier spelling, kept hidden so existing scripts still run; its unit is milliseconds, as before. */
+  @Option(names = "--delay", hidden = true, paramLabel = "<ms>")
+  void oldDelay(int ms) {
+    delay = ms;
+  }
 
   @Override
   public Integer call() throws Exception {
     // A GIF stores delays in hundredths of a second, in 16 bits (GIF89a specification, Graphic Control Extension).
-    OptionCheck.of(spec).between("--frames-per-step", framesPerStep, 2, 120).between("--delay", delay, 0, 655_350);
+    OptionCheck.of(spec).between("--frames-per-step", framesPerStep, 2, 120).between("--frame-ms", delay, 0, 655_350);
     try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {
       List<ImageAnalysis> stops = new ArrayList<>();

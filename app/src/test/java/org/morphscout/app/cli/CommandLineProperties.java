@@ -37,7 +37,7 @@ class CommandLineProperties {
         List.of("index", "--max-megapixels"), List.of("pairs", "--top"), List.of("pairs", "--candidates"),
         List.of("pairs", "--min-score"), List.of("walk", "--shape-weight"), List.of("chain", "a.png", "b.png",
             "--alternatives"), List.of("chain", "a.png", "b.png", "--max-steps"), List.of("similar", "a.png", "-k"),
-        List.of("preview", "a.png", "b.png", "--out", "x.gif", "--delay"), List.of("decisions", "--only"),
+        List.of("preview", "a.png", "b.png", "--out", "x.gif", "--frame-ms"), List.of("decisions", "--only"),
         List.of("similar", "a.png", "--by"), List.of("index", "--silhouettes"));
     return lines;
   }

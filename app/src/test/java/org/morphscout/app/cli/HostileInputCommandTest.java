@@ -42,7 +42,7 @@ class HostileInputCommandTest {
       {"index", "--time-limit", "0"}, {"index", "--max-megapixels", "-5"}, {"index", "--max-megapixels", "NaN"},
       {"index", "--max-megapixels", "Infinity"}, {"pairs", "--top", "0"}, {"pairs", "--candidates", "0"},
       {"pairs", "--min-score", "NaN"}, {"pairs", "--min-score", "101"}, {"walk", "--shape-weight", "NaN"},
-      {"walk", "--shape-weight", "2"}, {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--delay", "-5"},
+      {"walk", "--shape-weight", "2"}, {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--frame-ms", "-5"},
       {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--frames-per-step", "1"},
       {"chain", a, b, "--alternatives", "0"}, {"chain", a, b, "--min-steps", "5", "--max-steps", "4"},
       {"chain", a, b, "--shape-weight", "-1"}, {"similar", a, "-k", "0"}, {"demo", "--products", "0"},
