@@ -43,6 +43,10 @@ final class DecisionsCommand implements Callable<Integer> {
           decisions.add(d);
         }
       }
+      String none = "no decisions yet (morphscout decide A B approve|reject)";
+      if (decisions.isEmpty() && (format.json || format.csv)) {
+        spec.commandLine().getErr().println(none); // no silent nothing, also for scripts
+      }
       if (format.json) {
         List<Map<String, Object>> rows = new ArrayList<>();
         for (Decision d : decisions) {
@@ -54,7 +58,7 @@ final class DecisionsCommand implements Callable<Integer> {
           row.put("decidedAt", d.decidedAt());
           rows.add(row);
         }
-        JsonOut.write(out, Map.of("decisions", rows));
+        JsonOut.write(out, Map.of("decisions", rows, "notes", decisions.isEmpty() ? List.of(none) : List.of()));
       } else if (format.csv) {
         try (CsvOut csv = new CsvOut(out, "a", "b", "verdict", "note", "decided_at")) {
           for (Decision d : decisions) {
@@ -62,7 +66,7 @@ final class DecisionsCommand implements Callable<Integer> {
           }
         }
       } else if (decisions.isEmpty()) {
-        out.println("no decisions yet (morphscout decide A B approve|reject)");
+        out.println(none);
       } else {
         for (Decision d : decisions) {
           out.printf("%-8s %s%n         %s%s%n", d.verdict().word(), Terminal.safe(d.pathA()),
