@@ -187,9 +187,7 @@ class BadInputIndexingTest {
     // A limit far below what reading and analysing a 320 px picture takes (tens of ms): every file hits it.
     Path root = Files.createDirectories(tmp.resolve("library"));
     List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 3, Archetype.CUP, Archetype.BOWL);
-    for (int i = 0; i < family.size(); i++) {
-      ImageIO.write(family.get(i).image(), "png", root.resolve("slow-" + i + ".png").toFile());
-    }
+    FamilyFolders.writePngs(family, root, "slow-");
     IndexOptions options = IndexOptions.defaults().withThreads(1).withNeighbours(2)
         .withPerFileTimeLimit(Duration.ofMillis(1));
     try (Library library = Library.open(tmp.resolve("catalog"))) {

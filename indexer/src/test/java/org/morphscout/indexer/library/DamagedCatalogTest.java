@@ -11,7 +11,6 @@ import java.util.List;
 import java.util.Random;
 import java.util.Set;
 import java.util.stream.Stream;
-import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
@@ -86,9 +85,7 @@ class DamagedCatalogTest {
   void garbageVectorSegmentsAreRebuiltFromTheDatabase() throws IOException {
     Path root = Files.createDirectories(tmp.resolve("library"));
     List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 4, Archetype.VASE, Archetype.BOTTLE);
-    for (int i = 0; i < family.size(); i++) {
-      ImageIO.write(family.get(i).image(), "png", root.resolve("v" + i + ".png").toFile());
-    }
+    FamilyFolders.writePngs(family, root, "v");
     Path catalog = tmp.resolve("catalog");
     try (Library library = Library.open(catalog)) {
       index(library, false);

@@ -13,7 +13,6 @@ import java.sql.Statement;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
@@ -44,9 +43,7 @@ class FingerprintUpgradeTest {
   void oldCatalogGetsFingerprintsOnTheNextIndexRunAndKeepsIdsAndDecisions() throws Exception {
     Path root = Files.createDirectories(tmp.resolve("library"));
     List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 4, Archetype.VASE, Archetype.BOTTLE);
-    for (int i = 0; i < family.size(); i++) {
-      ImageIO.write(family.get(i).image(), "png", root.resolve("member-" + i + ".png").toFile());
-    }
+    FamilyFolders.writePngs(family, root, "member-");
     Path catalogDir = tmp.resolve("catalog");
     Map<String, Long> idsBefore = new TreeMap<>();
     try (Library library = Library.open(catalogDir)) {

@@ -39,9 +39,7 @@ class LibraryIndexerTest {
     root = Files.createDirectories(tmp.resolve("library/vessels"));
     catalogDir = tmp.resolve("catalog");
     List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 6, Archetype.VASE, Archetype.BOTTLE);
-    for (int i = 0; i < family.size(); i++) {
-      ImageIO.write(family.get(i).image(), "png", root.resolve("vessel-" + i + ".png").toFile());
-    }
+    FamilyFolders.writePngs(family, root, "vessel-");
     byte[] jpeg = jpegBytes(family.get(0));
     Files.write(root.resolve("cut-short.jpg"), Arrays.copyOf(jpeg, jpeg.length / 2));
     Files.writeString(root.resolve("notes.jpg"), "not a picture at all");

@@ -34,9 +34,7 @@ class RetriesAndNamesTest {
   void raisingTheMegapixelCapRetriesWhatItRefused() throws IOException {
     Path root = Files.createDirectories(tmp.resolve("library"));
     List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 2, Archetype.VASE, Archetype.JUG);
-    for (int i = 0; i < family.size(); i++) {
-      ImageIO.write(family.get(i).image(), "png", root.resolve("v" + i + ".png").toFile());
-    }
+    FamilyFolders.writePngs(family, root, "v");
     try (Library library = Library.open(tmp.resolve("catalog"))) {
       IndexReport low = index(library, 1000);
       assertThat(low.failures()).hasSize(2).allSatisfy(f -> assertThat(f.reason()).startsWith("image too large"));
