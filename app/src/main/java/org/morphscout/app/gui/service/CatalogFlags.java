@@ -16,8 +16,8 @@ import org.morphscout.indexer.silhouette.Silhouette;
  * slow). Reads the {@code features} columns directly because the feature store has no bulk flag query yet.
  */
 public final class CatalogFlags {
-  /** Mask confidence below this counts as low (confidence is in [0, 1]; our choice, matching the screening default). */
-  public static final double LOW_CONFIDENCE = 0.5;
+  /** Below this mask confidence a silhouette is uncertain: the library's threshold, as in the pair reasons. */
+  public static final double LOW_CONFIDENCE = org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW;
 
   private CatalogFlags() {}
 

@@ -6,8 +6,8 @@ public enum ImageFlag {
   CUT_OFF("cut off"),
   /** More than one sizeable object was found. */
   SEVERAL_OBJECTS("several objects"),
-  /** Object and background separate poorly (confidence below {@link CatalogFlags#LOW_CONFIDENCE}). */
-  LOW_CONFIDENCE("low-confidence mask"),
+  /** The silhouette is uncertain: the same threshold as the pair reasons and {@code status} use. */
+  LOW_CONFIDENCE("uncertain silhouette"),
   /** The file could not be read or analysed. */
   FAILED("failed");
 
