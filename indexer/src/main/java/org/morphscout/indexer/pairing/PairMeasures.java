@@ -2,11 +2,11 @@ package org.morphscout.indexer.pairing;
 
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.feature.ColourStats;
-import org.morphscout.indexer.warp.WarpResult;
 
 /**
- * The raw measures of a pair, before they are turned into sub-scores. NaN marks a measure whose inputs are missing
- * (no appearance vectors of the same model, no colour statistics).
+ * The cheap measures of a pair (everything but the warp), before they are turned into sub-scores. NaN marks a measure
+ * whose inputs are missing (no appearance vectors of the same model, no colour statistics). Kept at single precision,
+ * the precision they are stored at.
  *
  * @param appearanceDistance 1 - cosine of the appearance vectors, in [0, 2]
  * @param deltaE00 colour difference of the foreground means (the configured formula, CIEDE2000 in production)
@@ -21,8 +21,7 @@ import org.morphscout.indexer.warp.WarpResult;
  * @param exposureA mean L* of the whole picture A (object and background weighted by their areas), in [0, 100]
  * @param exposureB mean L* of the whole picture B
  */
-record PairMeasures(
-    WarpResult warp,
+public record PairMeasures(
     double appearanceDistance,
     double deltaE00,
     double lightnessA,
@@ -38,7 +37,24 @@ record PairMeasures(
     double exposureA,
     double exposureB) {
 
-  static PairMeasures of(ImageAnalysis a, ImageAnalysis b, WarpResult warp, ColourDifference colour) {
+  public PairMeasures {
+    appearanceDistance = PairFacts.single(appearanceDistance);
+    deltaE00 = PairFacts.single(deltaE00);
+    lightnessA = PairFacts.single(lightnessA);
+    lightnessB = PairFacts.single(lightnessB);
+    stdA = PairFacts.single(stdA);
+    stdB = PairFacts.single(stdB);
+    stdRatio = PairFacts.single(stdRatio);
+    aspectRatioGap = PairFacts.single(aspectRatioGap);
+    resolutionRatio = PairFacts.single(resolutionRatio);
+    scaleRatio = PairFacts.single(scaleRatio);
+    offset = PairFacts.single(offset);
+    backgroundDeltaE = PairFacts.single(backgroundDeltaE);
+    exposureA = PairFacts.single(exposureA);
+    exposureB = PairFacts.single(exposureB);
+  }
+
+  static PairMeasures of(ImageAnalysis a, ImageAnalysis b, ColourDifference colour) {
     double appearance = Double.NaN;
     if (a.appearance() != null && b.appearance() != null && a.appearance().length == b.appearance().length
         && a.appearance().length > 0 && java.util.Objects.equals(a.modelId(), b.modelId())) {
@@ -78,7 +94,7 @@ record PairMeasures(
     double scale = Math.max(fa, fb) <= 0 ? 0 : Math.sqrt(Math.min(fa, fb) / Math.max(fa, fb));
     double offset = Math.hypot(a.shape().centroidX() - b.shape().centroidX(),
         a.shape().centroidY() - b.shape().centroidY());
-    return new PairMeasures(warp, appearance, deltaE, la, lb, sa, sb, stdRatio, aspectGap, resolution, scale, offset,
+    return new PairMeasures(appearance, deltaE, la, lb, sa, sb, stdRatio, aspectGap, resolution, scale, offset,
         bgDeltaE, exposure(a), exposure(b));
   }
 

@@ -3,9 +3,6 @@ package org.morphscout.indexer.pairing;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.silhouette.Silhouette;
-import org.morphscout.indexer.warp.WarpResult;
 
 /**
  * Writes the plain-language findings of a pair, for a photographer rather than an engineer: each names the measure
@@ -17,23 +14,23 @@ final class PairReasons {
   private PairReasons() {}
 
   /** Framing faults that also trigger penalties: object cut off, several objects, tiny image. */
-  static List<String> framingFaults(ImageAnalysis a, ImageAnalysis b, ScoreConfig cfg) {
+  static List<String> framingFaults(ImageFacts a, ImageFacts b, ScoreConfig cfg) {
     List<String> out = new ArrayList<>();
     for (String label : new String[] {"A", "B"}) {
-      Silhouette s = (label.equals("A") ? a : b).silhouette();
+      ImageFacts s = label.equals("A") ? a : b;
       if (s.touchesFrame()) {
         out.add("object cut off by the frame in " + label);
       }
     }
     for (String label : new String[] {"A", "B"}) {
-      Silhouette s = (label.equals("A") ? a : b).silhouette();
+      ImageFacts s = label.equals("A") ? a : b;
       if (s.components() > 1) {
         String n = s.components() < COUNT_WORDS.length ? COUNT_WORDS[s.components()] : "" + s.components();
         out.add(n + " objects in " + label);
       }
     }
     for (String label : new String[] {"A", "B"}) {
-      ImageAnalysis x = label.equals("A") ? a : b;
+      ImageFacts x = label.equals("A") ? a : b;
       if (Math.max(x.width(), x.height()) < cfg.tinyLongSide()) {
         out.add(label + " is tiny (" + x.width() + "x" + x.height() + " px)");
       }
@@ -45,10 +42,10 @@ final class PairReasons {
    * Silhouettes too doubtful to judge a shape by: the overlap, warp and framing figures of such a pair may describe
    * the background or a part of the object rather than the object.
    */
-  static List<String> uncertainSilhouettes(ImageAnalysis a, ImageAnalysis b) {
+  static List<String> uncertainSilhouettes(ImageFacts a, ImageFacts b) {
     List<String> out = new ArrayList<>();
     for (String label : new String[] {"A", "B"}) {
-      Silhouette s = (label.equals("A") ? a : b).silhouette();
+      ImageFacts s = label.equals("A") ? a : b;
       if (s.uncertain()) {
         out.add(fmt("the silhouette of %s is uncertain (confidence %.2f), so its shape figures may be wrong", label,
             s.confidence()));
@@ -58,9 +55,12 @@ final class PairReasons {
   }
 
   /** All other findings, from the measures. */
-  static List<String> measured(ImageAnalysis a, ImageAnalysis b, PairMeasures m, ScoreConfig cfg) {
+  static List<String> measured(PairFacts f, ScoreConfig cfg) {
     List<String> out = new ArrayList<>();
-    WarpResult w = m.warp();
+    ImageFacts a = f.first();
+    ImageFacts b = f.second();
+    PairMeasures m = f.measures();
+    WarpMeasures w = f.warp();
     if (w.iouAligned() < cfg.reasonIou()) {
       out.add(fmt("silhouettes overlap poorly after alignment (IoU %.2f)", w.iouAligned()));
     }
@@ -98,7 +98,7 @@ final class PairReasons {
     }
     if (m.scaleRatio() < cfg.reasonScale()) {
       out.add(fmt("object sizes differ (the object fills %.0f%% vs %.0f%% of the picture)",
-          100 * a.shape().areaFraction(), 100 * b.shape().areaFraction()));
+          100 * a.areaFraction(), 100 * b.areaFraction()));
     }
     if (m.offset() > cfg.reasonOffset()) {
       out.add("objects sit in different places of the frame");

@@ -12,29 +12,32 @@ import org.morphscout.indexer.warp.WarpResult;
 /**
  * Scores how well image A morphs into image B (0..100) and says why.
  *
- * <p>Combination: each available sub-score {@code c_i} in [0, 1] (see {@link ScoreConfig} for how each is derived)
- * enters a weighted geometric mean, {@code exp(sum w_i ln max(c_i, 0.01) / sum w_i)}, so one very poor aspect (no
- * overlap, a huge colour gap) drags the whole score down instead of being averaged away; the floor of 0.01 keeps a
- * single zero from erasing every other difference. The mean is multiplied by a penalty factor for each framing
- * fault (object cut off by the frame, several objects, a tiny image; per image), then by 100. The verdict comes from
- * {@link ScoreConfig#passScore()} and {@link ScoreConfig#warnScore()}; a framing fault, or frames of clearly different
- * aspect ratios ({@link ScoreConfig#passMaxAspectGap()}), or an uncertain silhouette
- * ({@link org.morphscout.indexer.silhouette.Silhouette#uncertain()}, named first among the reasons) cap it at WARN. A pair where
- * either image has no silhouette scores 0 with verdict FAIL.
+ * <p>Combination: each available sub-score {@code c_i} in [0, 1] (the {@link PairComponent}s; see
+ * {@link ScoreConfig} for how each is derived) enters a weighted geometric mean,
+ * {@code exp(sum w_i ln max(c_i, 0.01) / sum w_i)}, so one very poor aspect (no overlap, a huge colour gap) drags the
+ * whole score down instead of being averaged away; the floor of 0.01 keeps a single zero from erasing every other
+ * difference. The mean is multiplied by a penalty factor for each framing fault (object cut off by the frame, several
+ * objects, a tiny image; per image), then by 100. The verdict comes from {@link ScoreConfig#passScore()} and
+ * {@link ScoreConfig#warnScore()}; a framing fault, or frames of clearly different aspect ratios
+ * ({@link ScoreConfig#passMaxAspectGap()}), or an uncertain silhouette ({@link ImageFacts#uncertain()}, named first
+ * among the reasons) cap it at WARN. A pair where either image has no silhouette scores 0 with verdict FAIL.
  *
- * <p>Immutable and thread-safe.
+ * <p>The score is a pure function of the pair's {@link PairFacts} and the configuration: {@link #score(PairFacts)}
+ * gives the number alone (cheap enough to rank millions of stored pairs), {@link #explain} the whole
+ * {@link PairScore}, and {@link #upperBound} the best score a pair could reach whatever its warp, from the cheap
+ * measures alone. Immutable and thread-safe.
  */
 public final class PairScorer {
   private static final double FLOOR = 0.01;
 
   private final ScoreConfig config;
   private final ColourDifference colour;
-  private final WarpEstimator warps;
+  private final PairMeasurer measurer;
 
   public PairScorer(ScoreConfig config, ColourDifference colour, WarpEstimator warps) {
     this.config = config;
     this.colour = colour;
-    this.warps = warps;
+    this.measurer = new PairMeasurer(colour, warps);
   }
 
   public ScoreConfig config() {
@@ -45,84 +48,115 @@ public final class PairScorer {
     return colour;
   }
 
+  public PairMeasurer measurer() {
+    return measurer;
+  }
+
+  /** Measures and scores one pair of analysed pictures, the warp included. */
   public PairScore score(ImageAnalysis a, ImageAnalysis b) {
-    List<String> empty = new ArrayList<>();
-    if (a.silhouette().isEmpty()) {
-      empty.add("no object found in A");
+    PairFacts cheap = measurer.cheap(a, b);
+    if (!cheap.measurable()) {
+      return explain(cheap, Optional.empty());
     }
-    if (b.silhouette().isEmpty()) {
-      empty.add("no object found in B");
+    WarpResult warp = measurer.warp(a, b);
+    return explain(cheap.withWarp(WarpMeasures.of(warp)), Optional.of(warp));
+  }
+
+  /** The score alone, 0..100, of facts with their warp (or of a pair without an object, which scores 0). */
+  public double score(PairFacts f) {
+    if (f.measurable() && !f.warped()) {
+      throw new IllegalArgumentException("the pair's warp is not measured yet: only an upper bound is known");
     }
-    if (!empty.isEmpty()) {
+    return combine(f, false);
+  }
+
+  /**
+   * The highest score the pair could reach whatever its warp turns out to be (every warp sub-score taken as 1): a
+   * pair whose bound is below what could be shown need not be warped at all. Exact for warped facts' cheap part.
+   */
+  public double upperBound(PairFacts f) {
+    return combine(f, true);
+  }
+
+  /** The whole score of facts with their warp: sub-scores, measures, verdict and reasons. */
+  public PairScore explain(PairFacts f) {
+    return explain(f, Optional.empty());
+  }
+
+  private PairScore explain(PairFacts f, Optional<WarpResult> warp) {
+    if (!f.measurable()) {
+      List<String> empty = new ArrayList<>();
+      if (f.first().empty()) {
+        empty.add("no object found in A");
+      }
+      if (f.second().empty()) {
+        empty.add("no object found in B");
+      }
       return new PairScore(0, Verdict.FAIL, Map.of(), Map.of(), empty, Optional.empty());
     }
-    WarpResult warp = warps.estimate(a.silhouette().mask(), b.silhouette().mask());
-    PairMeasures m = PairMeasures.of(a, b, warp, colour);
-    Map<String, Double> components = components(m);
-    Map<String, Double> measures = measures(m);
-
-    double logSum = 0;
-    double weightSum = 0;
-    for (Map.Entry<String, Double> e : components.entrySet()) {
-      double w = weight(e.getKey());
-      logSum += w * Math.log(Math.max(FLOOR, e.getValue()));
-      weightSum += w;
-    }
-    double mean = weightSum > 0 ? Math.exp(logSum / weightSum) : 0;
-
-    List<String> faults = PairReasons.framingFaults(a, b, config);
-    double penalty = 1;
-    for (String label : new String[] {"A", "B"}) {
-      var x = label.equals("A") ? a : b;
-      if (x.silhouette().touchesFrame()) {
-        penalty *= config.cutOffPenalty();
-      }
-      if (x.silhouette().components() > 1) {
-        penalty *= config.severalObjectsPenalty();
-      }
-      if (Math.max(x.width(), x.height()) < config.tinyLongSide()) {
-        penalty *= config.tinyPenalty();
+    double score = score(f);
+    Map<String, Double> components = new LinkedHashMap<>();
+    for (PairComponent c : PairComponent.all()) {
+      double v = c.subScore(f, config);
+      if (!Double.isNaN(v)) {
+        components.put(c.key(), v);
       }
     }
-    double score = Math.max(0, Math.min(100, 100 * mean * penalty));
     Verdict verdict = score >= config.passScore() ? Verdict.PASS
         : score >= config.warnScore() ? Verdict.WARN : Verdict.FAIL;
-    List<String> doubts = PairReasons.uncertainSilhouettes(a, b);
+    List<String> faults = PairReasons.framingFaults(f.first(), f.second(), config);
+    List<String> doubts = PairReasons.uncertainSilhouettes(f.first(), f.second());
     if (verdict == Verdict.PASS
-        && (!faults.isEmpty() || !doubts.isEmpty() || m.aspectRatioGap() > config.passMaxAspectGap())) {
+        && (!faults.isEmpty() || !doubts.isEmpty() || f.measures().aspectRatioGap() > config.passMaxAspectGap())) {
       verdict = Verdict.WARN;
     }
     List<String> reasons = new ArrayList<>(doubts);
-    List<String> measured = PairReasons.measured(a, b, m, config);
+    List<String> measured = PairReasons.measured(f, config);
     // Overlap first: it is the main reason a morph fails; then framing faults, then the rest.
     if (!measured.isEmpty() && measured.get(0).startsWith("silhouettes overlap")) {
       reasons.add(measured.remove(0));
     }
     reasons.addAll(faults);
     reasons.addAll(measured);
-    return new PairScore(score, verdict, components, measures, reasons, Optional.of(warp));
+    return new PairScore(score, verdict, components, measures(f), reasons, warp);
   }
 
-  private Map<String, Double> components(PairMeasures m) {
-    WarpResult w = m.warp();
-    Map<String, Double> c = new LinkedHashMap<>();
-    c.put("overlap", clamp((w.iouAligned() - config.iouZero()) / (config.iouFull() - config.iouZero())));
-    c.put("warpEffort", Math.exp(-w.meanDisplacement() / config.effortScale()));
-    c.put("foldSafety", clamp(1 - w.foldFraction() / config.foldTolerance()));
-    putIfKnown(c, "appearance", 1 - m.appearanceDistance() / config.appearanceScale());
-    putIfKnown(c, "colour", 1 - m.deltaE00() / config.deltaEScale());
-    putIfKnown(c, "lightness", 1 - Math.abs(m.lightnessA() - m.lightnessB()) / config.lightnessScale());
-    putIfKnown(c, "contrast", m.stdRatio());
-    c.put("aspect", clamp(1 - m.aspectRatioGap() / config.aspectScale()));
-    c.put("resolution", clamp(m.resolutionRatio() / config.resolutionFull()));
-    c.put("objectScale", clamp(m.scaleRatio() / config.scaleFull()));
-    c.put("placement", clamp(1 - m.offset() / config.offsetScale()));
-    putIfKnown(c, "background", 1 - m.backgroundDeltaE() / config.backgroundScale());
-    return c;
+  private double combine(PairFacts f, boolean bound) {
+    if (!f.measurable()) {
+      return 0;
+    }
+    double logSum = 0;
+    double weightSum = 0;
+    for (PairComponent c : PairComponent.all()) {
+      double v = bound && c.fromWarp() ? 1 : c.subScore(f, config);
+      if (!Double.isNaN(v)) {
+        double w = c.weight(config);
+        logSum += w * Math.log(Math.max(FLOOR, v));
+        weightSum += w;
+      }
+    }
+    double mean = weightSum > 0 ? Math.exp(logSum / weightSum) : 0;
+    double penalty = penalty(f.first()) * penalty(f.second());
+    return Math.max(0, Math.min(100, 100 * mean * penalty));
   }
 
-  private static Map<String, Double> measures(PairMeasures m) {
-    WarpResult w = m.warp();
+  private double penalty(ImageFacts x) {
+    double p = 1;
+    if (x.touchesFrame()) {
+      p *= config.cutOffPenalty();
+    }
+    if (x.components() > 1) {
+      p *= config.severalObjectsPenalty();
+    }
+    if (Math.max(x.width(), x.height()) < config.tinyLongSide()) {
+      p *= config.tinyPenalty();
+    }
+    return p;
+  }
+
+  private static Map<String, Double> measures(PairFacts f) {
+    WarpMeasures w = f.warp();
+    PairMeasures m = f.measures();
     Map<String, Double> r = new LinkedHashMap<>();
     r.put("iouBefore", w.iouBefore());
     r.put("alignedIou", w.iouAligned());
@@ -130,48 +164,22 @@ public final class PairScorer {
     r.put("meanDisplacement", w.meanDisplacement());
     r.put("maxDisplacement", w.maxDisplacement());
     r.put("foldFraction", w.foldFraction());
-    putIfKnown(r, "appearanceDistance", m.appearanceDistance(), false);
-    putIfKnown(r, "deltaE00", m.deltaE00(), false);
-    putIfKnown(r, "lightnessGap", Math.abs(m.lightnessA() - m.lightnessB()), false);
-    putIfKnown(r, "exposureGap", Math.abs(m.exposureA() - m.exposureB()), false);
-    putIfKnown(r, "stdRatio", m.stdRatio(), false);
+    putIfKnown(r, "appearanceDistance", m.appearanceDistance());
+    putIfKnown(r, "deltaE00", m.deltaE00());
+    putIfKnown(r, "lightnessGap", Math.abs(m.lightnessA() - m.lightnessB()));
+    putIfKnown(r, "exposureGap", Math.abs(m.exposureA() - m.exposureB()));
+    putIfKnown(r, "stdRatio", m.stdRatio());
     r.put("aspectRatioGap", m.aspectRatioGap());
     r.put("resolutionRatio", m.resolutionRatio());
     r.put("scaleRatio", m.scaleRatio());
     r.put("offset", m.offset());
-    putIfKnown(r, "backgroundDeltaE00", m.backgroundDeltaE(), false);
+    putIfKnown(r, "backgroundDeltaE00", m.backgroundDeltaE());
     return r;
   }
 
-  private double weight(String component) {
-    return switch (component) {
-      case "overlap" -> config.overlapWeight();
-      case "warpEffort" -> config.warpEffortWeight();
-      case "foldSafety" -> config.foldSafetyWeight();
-      case "appearance" -> config.appearanceWeight();
-      case "colour" -> config.colourWeight();
-      case "lightness" -> config.lightnessWeight();
-      case "contrast" -> config.contrastWeight();
-      case "aspect" -> config.aspectWeight();
-      case "resolution" -> config.resolutionWeight();
-      case "objectScale" -> config.objectScaleWeight();
-      case "placement" -> config.placementWeight();
-      case "background" -> config.backgroundWeight();
-      default -> throw new IllegalStateException("no weight for " + component);
-    };
-  }
-
   private static void putIfKnown(Map<String, Double> map, String key, double value) {
-    putIfKnown(map, key, value, true);
-  }
-
-  private static void putIfKnown(Map<String, Double> map, String key, double value, boolean clamp) {
     if (!Double.isNaN(value)) {
-      map.put(key, clamp ? clamp(value) : value);
+      map.put(key, value);
     }
-  }
-
-  private static double clamp(double v) {
-    return v < 0 ? 0 : (v > 1 ? 1 : v);
   }
 }
