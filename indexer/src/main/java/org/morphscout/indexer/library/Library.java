@@ -11,6 +11,7 @@ import org.morphscout.indexer.catalog.FeatureStore;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.catalog.NeighbourStore;
+import org.morphscout.indexer.catalog.PairStore;
 
 /**
  * An open catalog and its stores. Thread-safe. Close it when done.
@@ -24,6 +25,7 @@ public final class Library implements AutoCloseable {
   private final FeatureStore features;
   private final DecisionStore decisions;
   private final NeighbourStore neighbours;
+  private final PairStore pairs;
 
   private Library(Catalog catalog) {
     this.catalog = catalog;
@@ -31,6 +33,7 @@ public final class Library implements AutoCloseable {
     this.features = new FeatureStore(catalog);
     this.decisions = new DecisionStore(catalog);
     this.neighbours = new NeighbourStore(catalog);
+    this.pairs = new PairStore(catalog);
   }
 
   /** Opens (or creates) the catalog in {@code dir}. */
@@ -73,6 +76,11 @@ public final class Library implements AutoCloseable {
 
   public NeighbourStore neighbours() {
     return neighbours;
+  }
+
+  /** The stored pairs: candidates chosen by each ready image and the measures of every chosen pair. */
+  public PairStore pairs() {
+    return pairs;
   }
 
   /** The catalog row of an image given by path (relative to the working directory or absolute). */

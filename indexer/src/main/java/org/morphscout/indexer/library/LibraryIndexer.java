@@ -124,6 +124,7 @@ public final class LibraryIndexer {
           try {
             new NeighbourGraphUpdater(library, index, cache, options.neighbours())
                 .update(changed, removed, progress, cancel);
+            new PairStoreUpdater(library, index, cache, options.threads()).update(modelId, progress, cancel);
           } catch (CancellationToken.CancelledException e) {
             cancelled = true;
           }
@@ -185,6 +186,7 @@ public final class LibraryIndexer {
         index.commit();
       }
       library.neighbours().clear();
+      library.pairs().clear();
     }
     library.features().putSetting(LibrarySettings.ACTIVE_MODEL, modelId);
     library.features().putSetting(LibrarySettings.ACTIVE_SILHOUETTES, silhouettes);

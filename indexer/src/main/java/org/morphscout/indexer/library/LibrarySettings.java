@@ -11,6 +11,11 @@ public final class LibrarySettings {
   public static final String ACTIVE_SILHOUETTES = "active_silhouettes";
   /** How the vector index stores vectors ("NONE" for float32, "INT8"). */
   public static final String VECTOR_QUANTIZATION = "vector_quantization";
+  /**
+   * Written when every ready image's pairs are stored and measured: {@code <measuring version>:<candidates>:<model>}.
+   * The catalog's own triggers delete it whenever stored pairs are voided (layout step 06).
+   */
+  public static final String STORED_PAIRS_COMPLETE = "stored_pairs_complete";
 
   private LibrarySettings() {}
 

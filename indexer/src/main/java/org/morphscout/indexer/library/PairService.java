@@ -23,7 +23,6 @@ import org.morphscout.indexer.pairing.ScoreConfig;
 import org.morphscout.indexer.pairing.ScoredPair;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
-import org.morphscout.indexer.vector.VectorIndex;
 import org.morphscout.indexer.warp.WarpEstimator;
 
 /**
@@ -35,6 +34,8 @@ public final class PairService {
   private final QueryContext context;
   private final PairScorer scorer;
   private final NearDuplicates duplicates;
+  private final StoredPairs stored;
+  private final boolean storeApplies;
 
   public PairService(QueryContext context, ScoreConfig config) {
     this(context, config, NearDuplicateConfig.DEFAULTS);
@@ -44,6 +45,9 @@ public final class PairService {
     this.context = context;
     this.scorer = new PairScorer(config, Ciede2000::difference, new WarpEstimator());
     this.duplicates = new NearDuplicates(duplicateConfig, Ciede2000::difference);
+    this.stored = new StoredPairs(context.library(), context.cache(), scorer);
+    // Stored near-duplicate flags were decided with the default rule.
+    this.storeApplies = duplicateConfig.equals(NearDuplicateConfig.DEFAULTS);
   }
 
   public PairScorer scorer() {
@@ -60,17 +64,48 @@ public final class PairService {
     return duplicates.areDuplicates(a, b);
   }
 
-  /** The best pairs over every ready image of the catalog, near-duplicates listed apart. */
+  /**
+   * The best pairs over every ready image of the catalog, near-duplicates listed apart. Answered from the catalog's
+   * stored pairs when they are up to date for this query (scores computed from stored measures under the current
+   * settings, in about a second per million stored pairs); otherwise every candidate pair is measured live, and the
+   * result says why in its notes.
+   */
   public PairSearchResult bestPairs(PairQuery query, ProgressListener progress, CancellationToken cancel) {
+    Optional<String> why = storeUnusable(query);
+    if (why.isEmpty()) {
+      return stored.best(query, cancel);
+    }
+    return bestPairsLive(query, progress, cancel).withNote("scored live: " + why.get());
+  }
+
+  /** The best pairs with every candidate pair measured now, the stored pairs left aside. */
+  PairSearchResult bestPairsLive(PairQuery query, ProgressListener progress, CancellationToken cancel) {
     List<Long> ids = context.library().features().readyIds(context.modelId());
     return finder().findPairs(ids, query, progress, cancel);
+  }
+
+  /** The best partners of a catalog image with every candidate pair measured now. */
+  PairSearchResult partnersLive(ImageAnalysis image, PairQuery query, ProgressListener progress,
+      CancellationToken cancel) {
+    return finder().findPartners(image.id(), query, progress, cancel);
+  }
+
+  private Optional<String> storeUnusable(PairQuery query) {
+    if (!storeApplies) {
+      return Optional.of("the near-duplicate rule differs from the one the stored pairs were made with");
+    }
+    return stored.unusable(context.modelId(), query.candidatesPerImage());
   }
 
   /** The best partners of one image; an image outside the catalog is scored against its nearest catalog images. */
   public PairSearchResult partners(ImageAnalysis image, PairQuery query, ProgressListener progress,
       CancellationToken cancel) {
     if (image.id() >= 0) {
-      return finder().findPartners(image.id(), query, progress, cancel);
+      Optional<String> why = storeUnusable(query);
+      if (why.isEmpty()) {
+        return stored.partners(image.id(), query, cancel);
+      }
+      return partnersLive(image, query, progress, cancel).withNote("scored live: " + why.get());
     }
     Set<Long> exclude = new LinkedHashSet<>();
     context.sameContent(image).ifPresent(exclude::add);
@@ -112,15 +147,10 @@ public final class PairService {
   /** Nearest catalog images by shape first (what morphs well), then by appearance, without duplicates. */
   List<Long> candidates(ImageAnalysis a, int k, Set<Long> exclude) {
     try {
-      VectorIndex index = context.index();
-      Set<Long> ids = new LinkedHashSet<>();
-      if (VectorSync.nonZeroOrNull(a.shape().shapeVector()) != null) {
-        index.search(VectorIndex.Field.SHAPE, a.shape().shapeVector(), k, exclude).forEach(h -> ids.add(h.id()));
-      }
-      index.search(VectorIndex.Field.APPEARANCE, a.appearance(), k, exclude).forEach(h -> ids.add(h.id()));
-      return new ArrayList<>(ids);
+      return PairCandidates.of(context.index(), a, k, exclude);
     } catch (IOException e) {
       throw new UncheckedIOException(e);
     }
   }
+
 }
