@@ -23,6 +23,7 @@ import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.IndexReport;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.PairService;
+import org.morphscout.indexer.library.PairStoreUpdater;
 import org.morphscout.indexer.library.PreviewService;
 import org.morphscout.indexer.library.QueryContext;
 import org.morphscout.indexer.library.Sheets;
@@ -148,7 +149,8 @@ final class DemoCommand implements Callable<Integer> {
     }
 
     heading("The most morph-friendly pairs of the library (score 0-100)");
-    PairSearchResult best = pairs.bestPairs(new PairQuery(10, 5, 0), TerminalProgress.forTerminal(false),
+    PairQuery query = new PairQuery(PairStoreUpdater.CANDIDATES, 5, 0);
+    PairSearchResult best = pairs.bestPairs(query, TerminalProgress.forTerminal(false),
         CancellationToken.none());
     for (ScoredPair p : best.pairs()) {
       out.printf("  %5s %-4s %s  <->  %s%n", Text.num(p.score().score(), 1), p.score().verdict().label(),

@@ -30,6 +30,9 @@ import picocli.CommandLine.Spec;
     header = "List the most morph-friendly pairs in the library, or the best partners of one image.",
     description = "Candidates come from the vector index (similar outline or appearance) and are scored exactly: "
         + "silhouette overlap after alignment, warp effort and fold risk, appearance and colour gaps, framing. "
+        + "index stores every candidate pair's measures, so the answer is read from the catalog and scored under the "
+        + "current settings (--set, --score-config) in seconds; when the stored pairs are not up to date, or "
+        + "--candidates differs from the stored 20, pairs are measured live and a note says so. "
         + "Score 0-100 with a verdict (pass >= passScore, warn >= warnScore, else fail) and reasons. Near-duplicates "
         + "(the same picture resized, recompressed or lightly edited) are never proposed; --duplicates lists them.")
 final class PairsCommand implements Callable<Integer> {
@@ -78,6 +81,7 @@ final class PairsCommand implements Callable<Integer> {
       }
       Paths paths = new Paths(context, image == null ? null : image.path());
       if (duplicates) {
+        result.notes().forEach(n -> spec.commandLine().getErr().println(n));
         printDuplicates(out, result, paths);
       } else {
         printPairs(out, result, paths, library.decisions());
@@ -98,6 +102,12 @@ final class PairsCommand implements Callable<Integer> {
 
   /** Why a search gave no pairs, in one line; empty when pairs were found (no silent nothing). */
   private List<String> notes(PairSearchResult result) {
+    List<String> notes = new ArrayList<>(result.notes());
+    notes.addAll(emptyNotes(result));
+    return notes;
+  }
+
+  private List<String> emptyNotes(PairSearchResult result) {
     if (!result.pairs().isEmpty()) {
       return List.of();
     }

@@ -12,6 +12,7 @@ import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.library.CatalogCheck;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.LibrarySettings;
+import org.morphscout.indexer.library.StoredPairCounts;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -49,6 +50,7 @@ final class StatusCommand implements Callable<Integer> {
       long bytes = library.catalog().databaseBytes();
       CatalogCheck checked = check ? CatalogCheck.run(library) : null;
       FeatureStore.SilhouetteCounts silhouettes = library.features().silhouetteCounts();
+      StoredPairCounts pairs = StoredPairCounts.of(library);
       if (json) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("catalog", library.catalog().dir().toString());
@@ -67,6 +69,15 @@ final class StatusCommand implements Callable<Integer> {
         doc.put("featureModel", model);
         doc.put("decisions", library.decisions().count());
         doc.put("silhouettes", Map.of("bySource", silhouettes.bySource(), "uncertain", silhouettes.uncertain()));
+        Map<String, Object> stored = new LinkedHashMap<>();
+        stored.put("pairs", pairs.pairs());
+        stored.put("bounded", pairs.bounded());
+        stored.put("duplicates", pairs.duplicates());
+        stored.put("stale", pairs.stale());
+        stored.put("unmeasured", pairs.unmeasured());
+        stored.put("imagesWaiting", pairs.waiting());
+        stored.put("complete", pairs.complete());
+        doc.put("storedPairs", stored);
         if (checked != null) {
           doc.put("check", Map.of("database", checked.database(), "vectors", checked.vectors()));
         }
@@ -83,6 +94,10 @@ final class StatusCommand implements Callable<Integer> {
       out.printf("silhouettes %s; %d uncertain%n", silhouettes.bySource().isEmpty() ? "none yet"
           : String.join(", ", silhouettes.bySource().entrySet().stream().map(e -> e.getValue() + " " + e.getKey())
               .toList()), silhouettes.uncertain());
+      out.printf("pairs     %d stored (%d not warped: too poor to show, %d near-duplicates)%s%n", pairs.pairs(),
+          pairs.bounded(), pairs.duplicates(), pairs.complete() ? "; pair queries read them"
+              : "; not up to date (" + pairs.waiting() + " images waiting, " + pairs.stale() + " stale, "
+                  + pairs.unmeasured() + " unmeasured): pair queries score live until index runs");
       if (checked != null) {
         out.printf("check     database: %s%n          vector index: %s%n", Terminal.safe(checked.database()),
             Terminal.safe(checked.vectors()));
