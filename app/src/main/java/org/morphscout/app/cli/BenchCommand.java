@@ -28,12 +28,16 @@ import org.morphscout.demo.Placement;
 import org.morphscout.demo.Shot;
 import org.morphscout.demo.VesselRenderer;
 import org.morphscout.indexer.bench.CatalogVolumes;
+import org.morphscout.indexer.silhouette.ModelFolder;
+import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.indexer.bench.ChainBenchmark;
 import org.morphscout.indexer.bench.FeatureBenchmark;
 import org.morphscout.indexer.bench.HeapMeter;
 import org.morphscout.indexer.bench.IndexingBenchmark;
 import org.morphscout.indexer.bench.MachineInfo;
 import org.morphscout.indexer.bench.PairBenchmark;
+import org.morphscout.indexer.bench.PairStoreCost;
+import org.morphscout.indexer.bench.StoredPairsBenchmark;
 import org.morphscout.indexer.bench.VectorSearchBenchmark;
 import org.morphscout.indexer.bench.WalkBenchmark;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
@@ -89,6 +93,16 @@ final class BenchCommand implements Callable<Integer> {
       + "volumes of this catalog folder (for example a demo catalog).")
   Path volumesCatalog;
 
+  @Option(names = "--stored-pairs", paramLabel = "<images>", split = ",", description = "Only measure whole-library "
+      + "pair queries (pairs --top 30) on stored pairs of synthetic catalogs of these sizes, for example "
+      + "10000,100000, and stop. Give the JVM room for the largest (MORPHSCOUT_JAVA_OPTS=-Xmx4g is plenty).")
+  List<Integer> storedPairSizes;
+
+  @Option(names = "--pair-cost", paramLabel = "<folder>", description = "Only measure what storing pairs adds to "
+      + "indexing this folder of images (indexed into a scratch catalog with the default analysis), and stop. "
+      + "Combines with --stored-pairs.")
+  Path pairCostFolder;
+
   private PrintWriter err;
 
   @Override
@@ -98,6 +112,12 @@ final class BenchCommand implements Callable<Integer> {
       vectorSizes.forEach(n -> check.between("--vectors", n, 1, 100_000_000));
     }
     err = spec.commandLine().getErr();
+    if (storedPairSizes != null || pairCostFolder != null) {
+      if (storedPairSizes != null) {
+        storedPairSizes.forEach(n -> check.between("--stored-pairs", n, 100, 10_000_000));
+      }
+      return storedPairsOnly();
+    }
     int photoCount = photos != null ? photos : quick ? 60 : 300;
     List<Integer> sizes = vectorSizes != null ? vectorSizes : quick ? List.of(10_000, 100_000)
         : List.of(10_000, 100_000, 1_000_000);
@@ -151,6 +171,44 @@ final class BenchCommand implements Callable<Integer> {
           CatalogVolumes.measure(scratch.resolve("indexing").resolve("catalog")));
       if (volumesCatalog != null) {
         r.volumes(volumesCatalog.toString(), CatalogVolumes.measure(volumesCatalog));
+      }
+      r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
+    } finally {
+      deleteTree(scratch);
+    }
+    String text = r.toString();
+    spec.commandLine().getOut().print(text);
+    spec.commandLine().getOut().flush();
+    if (out != null) {
+      Files.writeString(out, text);
+    }
+    return ExitCodes.OK;
+  }
+
+  /** The stored-pairs benchmarks alone: query time and memory, and the indexing time they add. */
+  private int storedPairsOnly() throws Exception {
+    Path base = work != null ? work : Path.of(System.getProperty("java.io.tmpdir"), "morphscout-bench");
+    Path scratch = Files.createTempDirectory(Files.createDirectories(base), "pairs-");
+    String loadBefore = MachineInfo.currentLoadAverage();
+    long start = System.nanoTime();
+    Report r = new Report();
+    try {
+      String args = String.join(" ", spec.commandLine().getParseResult().originalArgs());
+      r.header(MachineInfo.current(), "./morphscout " + (args.startsWith("bench") ? args : "bench " + args), false);
+      if (storedPairSizes != null) {
+        List<StoredPairsBenchmark.Result> results = new ArrayList<>();
+        for (int n : storedPairSizes) {
+          status("stored pairs, " + n + " images");
+          results.add(StoredPairsBenchmark.run(scratch.resolve("stored-" + n), n, SEED, 5));
+          deleteTree(scratch.resolve("stored-" + n));
+        }
+        r.storedPairs(results);
+      }
+      if (pairCostFolder != null) {
+        status("indexing " + pairCostFolder + " with stored pairs");
+        r.pairCost(pairCostFolder.toString(), PairStoreCost.run(pairCostFolder, scratch.resolve("cost"),
+            AnalysisSetup.defaults().withSilhouettes(AnalysisSetup.SilhouetteMode.AUTO)
+                .withModels(ModelFolder.resolve(java.util.Optional.empty()))));
       }
       r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
     } finally {
@@ -489,6 +547,37 @@ final class BenchCommand implements Callable<Integer> {
       line("| vector index | " + f(v.vectorIndexBytesPerImage(), 0) + " |");
       line("");
       line(v.images() + " images measured.");
+      line("");
+    }
+
+    void storedPairs(List<StoredPairsBenchmark.Result> results) {
+      line("## Pair queries on stored pairs");
+      line("");
+      line("Synthetic catalogs: each image stores 20 to 30 candidate pairs of seeded random measures (one in ten stored "
+          + "without a warp); the query is `pairs --top 30` (whole library), then the same under changed weights "
+          + "(`--set`). Five runs each, the first cold. Goal: under 2 s at 10,000 and at 100,000 images, memory that "
+          + "does not grow with the stored pairs.");
+      line("");
+      line("| images | stored pairs | catalog size | top 30: p50 / max | re-ranked: p50 / max | peak heap of the "
+          + "queries | goal |");
+      line("|---|---|---|---|---|---|---|");
+      for (StoredPairsBenchmark.Result x : results) {
+        line("| " + x.images() + " | " + x.pairs() + " | " + Text.bytes(x.databaseBytes()) + " | "
+            + f(x.queryMs().p50Ms() / 1000, 2) + " s / " + f(x.queryMs().p99Ms() / 1000, 2) + " s | "
+            + f(x.rerankMs().p50Ms() / 1000, 2) + " s / " + f(x.rerankMs().p99Ms() / 1000, 2) + " s | "
+            + heap(x.heapBytes()) + " | " + met(x.queryMs().p99Ms() < 2000 && x.rerankMs().p99Ms() < 2000) + " |");
+      }
+      line("");
+    }
+
+    void pairCost(String folder, PairStoreCost.Result x) {
+      line("## What storing pairs adds to indexing");
+      line("");
+      line("`" + folder + "`: " + x.images() + " images indexed on " + x.threads() + " threads in "
+          + f(x.totalSeconds(), 1) + " s, of which the stored pairs took " + f(x.pairSeconds(), 1) + " s ("
+          + x.pairs() + " pairs, " + x.bounded() + " of them stored without a warp): **"
+          + f(100 * x.added(), 0) + "%** more than indexing without them (goal: under 25%, " + met(x.added() < 0.25)
+          + ").");
       line("");
     }
 

@@ -19,13 +19,13 @@ import org.morphscout.indexer.pairing.WarpMeasures;
  *
  * Facts are single precision to begin with, so nothing is lost. Stateless.
  */
-final class StoredPairCodec {
+public final class StoredPairCodec {
   static final int PICTURE_BYTES = 4 * 3 + 1 + 4 * 2;
   static final int PAIR_FLOATS = 14 + 8;
 
   private StoredPairCodec() {}
 
-  static byte[] picture(ImageFacts f) {
+  public static byte[] picture(ImageFacts f) {
     ByteBuffer b = ByteBuffer.allocate(PICTURE_BYTES).order(ByteOrder.LITTLE_ENDIAN);
     b.putInt(f.width()).putInt(f.height()).putInt(f.components());
     b.put((byte) ((f.empty() ? 1 : 0) | (f.touchesFrame() ? 2 : 0) | (f.uncertain() ? 4 : 0)));
@@ -52,7 +52,7 @@ final class StoredPairCodec {
     }
   }
 
-  static byte[] pair(PairMeasures m, WarpMeasures w) {
+  public static byte[] pair(PairMeasures m, WarpMeasures w) {
     ByteBuffer b = ByteBuffer.allocate(4 * PAIR_FLOATS).order(ByteOrder.LITTLE_ENDIAN);
     for (double v : new double[] {m.appearanceDistance(), m.deltaE00(), m.lightnessA(), m.lightnessB(), m.stdA(),
         m.stdB(), m.stdRatio(), m.aspectRatioGap(), m.resolutionRatio(), m.scaleRatio(), m.offset(),

@@ -28,7 +28,7 @@ import org.morphscout.indexer.progress.CancellationToken;
  * bound could still place it among the best. The answer is the one {@link org.morphscout.indexer.pairing.PairFinder}
  * gives over the same candidates, scored exactly.
  */
-final class StoredPairs {
+public final class StoredPairs {
   private static final Comparator<Entry> BEST_FIRST = Comparator.comparingDouble((Entry e) -> -e.score)
       .thenComparingLong(e -> e.first).thenComparingLong(e -> e.second);
 
@@ -36,7 +36,8 @@ final class StoredPairs {
   private final AnalysisCache cache;
   private final PairScorer scorer;
 
-  StoredPairs(Library library, AnalysisCache cache, PairScorer scorer) {
+  /** @param cache analyses for the rare pair stored without its warp that must be warped live */
+  public StoredPairs(Library library, AnalysisCache cache, PairScorer scorer) {
     this.library = library;
     this.cache = cache;
     this.scorer = scorer;
@@ -61,8 +62,8 @@ final class StoredPairs {
     return Optional.empty();
   }
 
-  /** The best pairs of the whole catalog. */
-  PairSearchResult best(PairQuery query, CancellationToken cancel) {
+  /** The best pairs of the whole catalog (check {@link #unusable} first). */
+  public PairSearchResult best(PairQuery query, CancellationToken cancel) {
     Map<Long, ImageFacts> pictures = pictures();
     PriorityQueue<Entry> heap = new PriorityQueue<>(BEST_FIRST.reversed());
     long[] counted = new long[1];

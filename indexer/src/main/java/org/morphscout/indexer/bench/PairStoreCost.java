@@ -1,0 +1,70 @@
+package org.morphscout.indexer.bench;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import org.morphscout.indexer.library.AnalysisSetup;
+import org.morphscout.indexer.library.IndexOptions;
+import org.morphscout.indexer.library.IndexReport;
+import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.library.LibraryIndexer;
+import org.morphscout.indexer.pairing.PairMeasurer;
+import org.morphscout.indexer.progress.CancellationToken;
+import org.morphscout.indexer.progress.ProgressListener;
+
+/**
+ * What storing pairs adds to indexing: indexes a folder into a new catalog, all cores, and splits the wall time into
+ * the stored-pairs phases (choosing candidates, measuring pairs) and everything else, from the indexer's own phase
+ * reports.
+ */
+public final class PairStoreCost {
+  /**
+   * @param images images indexed
+   * @param totalSeconds wall time of the whole indexing run
+   * @param pairSeconds wall time of its stored-pairs phases
+   * @param pairs stored pairs
+   * @param bounded pairs stored without a warp (cheap bound below the warn score)
+   * @param threads indexing threads
+   */
+  public record Result(int images, double totalSeconds, double pairSeconds, long pairs, long bounded, int threads) {
+    /** Extra indexing time the stored pairs cost, as a fraction of indexing without them. */
+    public double added() {
+      double without = totalSeconds - pairSeconds;
+      return without > 0 ? pairSeconds / without : Double.NaN;
+    }
+  }
+
+  private PairStoreCost() {}
+
+  public static Result run(Path folder, Path catalogDir, AnalysisSetup setup) throws IOException {
+    PhaseClock clock = new PhaseClock();
+    IndexOptions options = IndexOptions.defaults();
+    try (Library library = Library.open(catalogDir)) {
+      long start = System.nanoTime();
+      IndexReport report = new LibraryIndexer(library, setup, options)
+          .index(List.of(folder), clock, CancellationToken.none());
+      clock.phase("end", 0);
+      double total = (System.nanoTime() - start) / 1e9;
+      var counts = library.pairs().counts(PairMeasurer.VERSION);
+      return new Result(report.indexed(), total, clock.pairNanos / 1e9, counts.pairs(), counts.bounded(),
+          options.threads());
+    }
+  }
+
+  /** Adds up the wall time of the stored-pairs phases. */
+  private static final class PhaseClock implements ProgressListener {
+    private String current = "";
+    private long since = System.nanoTime();
+    long pairNanos;
+
+    @Override
+    public synchronized void phase(String name, long total) {
+      long now = System.nanoTime();
+      if (current.equals("choosing pair candidates") || current.equals("measuring pairs")) {
+        pairNanos += now - since;
+      }
+      current = name;
+      since = now;
+    }
+  }
+}
