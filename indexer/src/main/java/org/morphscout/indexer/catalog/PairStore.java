@@ -180,18 +180,16 @@ public final class PairStore {
   }
 
   /**
-   * Streams every stored pair of one kind to {@code sink}, in key order, holding only one row at a time. The sink runs
-   * under the catalog's lock: keep it quick and do not call back into the catalog.
+   * Streams every stored pair to {@code sink} in one pass, holding only one row at a time. The sink runs under the
+   * catalog's lock: keep it quick and do not call back into the catalog.
    */
-  public void forEach(Kind kind, Consumer<Row> sink) {
+  public void forEach(Consumer<Row> sink) {
     catalog.read(c -> {
-      try (PreparedStatement s = c.prepareStatement("SELECT first_id, second_id, version, measures FROM pair_measures "
-          + "WHERE kind = ?")) {
-        s.setInt(1, kind.ordinal());
+      try (Statement s = c.createStatement()) {
         s.setFetchSize(4096);
-        try (ResultSet rs = s.executeQuery()) {
+        try (ResultSet rs = s.executeQuery("SELECT first_id, second_id, kind, version, measures FROM pair_measures")) {
           while (rs.next()) {
-            sink.accept(new Row(rs.getLong(1), rs.getLong(2), kind, rs.getInt(3), rs.getBytes(4)));
+            sink.accept(new Row(rs.getLong(1), rs.getLong(2), Kind.of(rs.getInt(3)), rs.getInt(4), rs.getBytes(5)));
           }
         }
       }

@@ -7,6 +7,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.PriorityQueue;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.Semaphore;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.PairStore;
@@ -29,6 +34,7 @@ import org.morphscout.indexer.progress.CancellationToken;
  * gives over the same candidates, scored exactly.
  */
 public final class StoredPairs {
+  private static final int BATCH = 4096;
   private static final Comparator<Entry> BEST_FIRST = Comparator.comparingDouble((Entry e) -> -e.score)
       .thenComparingLong(e -> e.first).thenComparingLong(e -> e.second);
 
@@ -64,40 +70,48 @@ public final class StoredPairs {
 
   /** The best pairs of the whole catalog (check {@link #unusable} first). */
   public PairSearchResult best(PairQuery query, CancellationToken cancel) {
-    Map<Long, ImageFacts> pictures = pictures();
-    PriorityQueue<Entry> heap = new PriorityQueue<>(BEST_FIRST.reversed());
+    ImageFacts[] pictures = pictures();
+    Ranking ranking = new Ranking(query);
+    // One thread reads rows (the catalog's connection is single-threaded); the others score them in batches.
+    int workers = Math.max(1, Runtime.getRuntime().availableProcessors());
+    ExecutorService pool = Executors.newFixedThreadPool(workers, r -> {
+      Thread t = new Thread(r, "morphscout-stored-pairs");
+      t.setDaemon(true);
+      return t;
+    });
+    Semaphore inFlight = new Semaphore(2 * workers); // bounds the rows held in memory
+    List<Future<?>> done = new ArrayList<>();
+    @SuppressWarnings("unchecked")
+    List<PairStore.Row>[] batch = new List[] {new ArrayList<>(BATCH)};
     long[] counted = new long[1];
-    PairStore store = library.pairs();
-    store.forEach(PairStore.Kind.MEASURED, row -> {
-      counted[0]++;
-      PairFacts f = new PairFacts(picture(pictures, row.first()), picture(pictures, row.second()),
-          StoredPairCodec.measures(row.measures(), row.first(), row.second()),
-          StoredPairCodec.warp(row.measures(), row.first(), row.second()));
-      offer(heap, new Entry(row.first(), row.second(), scorer.score(f), f), query);
-    });
-    cancel.throwIfCancelled();
-    store.forEach(PairStore.Kind.NO_OBJECT, row -> {
-      counted[0]++;
-      PairFacts f = new PairFacts(picture(pictures, row.first()), picture(pictures, row.second()), null, null);
-      offer(heap, new Entry(row.first(), row.second(), 0, f), query);
-    });
-    List<PairSearchResult.DuplicatePair> duplicates = new ArrayList<>();
-    store.forEach(PairStore.Kind.DUPLICATE, row -> {
-      counted[0]++;
-      duplicates.add(new PairSearchResult.DuplicatePair(row.first(), row.second()));
-    });
-    // Pairs stored without a warp: only those whose best possible score could still enter the list are warped.
-    double floor = threshold(heap, query);
-    List<Entry> hopeful = new ArrayList<>();
-    store.forEach(PairStore.Kind.BOUNDED, row -> {
-      counted[0]++;
-      PairFacts f = new PairFacts(picture(pictures, row.first()), picture(pictures, row.second()),
-          StoredPairCodec.measures(row.measures(), row.first(), row.second()), null);
-      double bound = scorer.upperBound(f);
-      if (bound >= floor) {
-        hopeful.add(new Entry(row.first(), row.second(), bound, f));
+    try {
+      library.pairs().forEach(row -> {
+        counted[0]++;
+        batch[0].add(row);
+        if (batch[0].size() == BATCH) {
+          done.add(submit(pool, inFlight, batch[0], pictures, ranking));
+          batch[0] = new ArrayList<>(BATCH);
+        }
+      });
+      done.add(submit(pool, inFlight, batch[0], pictures, ranking));
+      for (Future<?> f : done) {
+        f.get();
       }
-    });
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      throw new CancellationToken.CancelledException();
+    } catch (ExecutionException e) {
+      if (e.getCause() instanceof RuntimeException r) {
+        throw r;
+      }
+      throw new IllegalStateException(e.getCause());
+    } finally {
+      pool.shutdownNow();
+    }
+    PriorityQueue<Entry> heap = ranking.heap;
+    List<PairSearchResult.DuplicatePair> duplicates = ranking.duplicates;
+    List<Entry> hopeful = ranking.hopeful;
+    cancel.throwIfCancelled();
     List<String> failures = new ArrayList<>();
     hopeful.sort(BEST_FIRST);
     for (Entry e : hopeful) {
@@ -128,7 +142,7 @@ public final class StoredPairs {
     for (PairStore.Row row : library.pairs().chosenBy(id)) {
       stored.put(row.first() == id ? row.second() : row.first(), row);
     }
-    Map<Long, ImageFacts> pictures = pictures();
+    ImageFacts[] pictures = pictures();
     int scored = 0;
     for (long other : library.pairs().choicesOf(id)) {
       cancel.throwIfCancelled();
@@ -156,14 +170,23 @@ public final class StoredPairs {
     return new PairSearchResult(ranked(heap), duplicates, scored, List.of());
   }
 
-  private Map<Long, ImageFacts> pictures() {
-    Map<Long, ImageFacts> out = new HashMap<>();
-    library.pairs().pictureFacts().forEach((id, bytes) -> out.put(id, StoredPairCodec.picture(bytes, id)));
+  /** Every paired image's facts, indexed by image id (ids are dense row ids). */
+  private ImageFacts[] pictures() {
+    Map<Long, byte[]> stored = library.pairs().pictureFacts();
+    long max = 0;
+    for (long id : stored.keySet()) {
+      max = Math.max(max, id);
+    }
+    if (max >= Integer.MAX_VALUE) {
+      throw new MorphscoutException("image ids beyond " + Integer.MAX_VALUE + " are not supported");
+    }
+    ImageFacts[] out = new ImageFacts[(int) max + 1];
+    stored.forEach((id, bytes) -> out[(int) (long) id] = StoredPairCodec.picture(bytes, id));
     return out;
   }
 
-  private static ImageFacts picture(Map<Long, ImageFacts> pictures, long id) {
-    ImageFacts f = pictures.get(id);
+  private static ImageFacts picture(ImageFacts[] pictures, long id) {
+    ImageFacts f = id >= 0 && id < pictures.length ? pictures[(int) id] : null;
     if (f == null) {
       throw new MorphscoutException("the stored pairs name image " + id + " without its facts: run index");
     }
@@ -203,4 +226,82 @@ public final class StoredPairs {
   }
 
   private record Entry(long first, long second, double score, PairFacts facts) {}
+
+  private Future<?> submit(ExecutorService pool, Semaphore inFlight, List<PairStore.Row> rows,
+      ImageFacts[] pictures, Ranking ranking) {
+    try {
+      inFlight.acquire();
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      throw new CancellationToken.CancelledException();
+    }
+    return pool.submit(() -> {
+      try {
+        for (PairStore.Row row : rows) {
+          ranking.take(row, pictures, scorer);
+        }
+      } finally {
+        inFlight.release();
+      }
+    });
+  }
+
+  /**
+   * The best entries so far, shared by the scoring threads. The top {@code topN} under a total order does not depend
+   * on the order rows arrive in, so the answer is the same whatever the threads do.
+   */
+  private static final class Ranking {
+    final PairQuery query;
+    final PriorityQueue<Entry> heap = new PriorityQueue<>(BEST_FIRST.reversed());
+    final List<PairSearchResult.DuplicatePair> duplicates = new ArrayList<>();
+    final List<Entry> hopeful = new ArrayList<>();
+    /** The lowest score that could still enter, read without the lock to reject most rows cheaply. */
+    volatile double floor;
+
+    Ranking(PairQuery query) {
+      this.query = query;
+      this.floor = query.minScore();
+    }
+
+    void take(PairStore.Row row, ImageFacts[] pictures, PairScorer scorer) {
+      switch (row.kind()) {
+        case MEASURED -> {
+          PairFacts f = new PairFacts(picture(pictures, row.first()), picture(pictures, row.second()),
+              StoredPairCodec.measures(row.measures(), row.first(), row.second()),
+              StoredPairCodec.warp(row.measures(), row.first(), row.second()));
+          double score = scorer.score(f);
+          if (score >= floor) {
+            offer(new Entry(row.first(), row.second(), score, f));
+          }
+        }
+        case NO_OBJECT -> {
+          if (0 >= floor) {
+            offer(new Entry(row.first(), row.second(), 0,
+                new PairFacts(picture(pictures, row.first()), picture(pictures, row.second()), null, null)));
+          }
+        }
+        case DUPLICATE -> {
+          synchronized (this) {
+            duplicates.add(new PairSearchResult.DuplicatePair(row.first(), row.second()));
+          }
+        }
+        case BOUNDED -> {
+          // Stored without a warp: kept aside only while its best possible score could still enter the list.
+          PairFacts f = new PairFacts(picture(pictures, row.first()), picture(pictures, row.second()),
+              StoredPairCodec.measures(row.measures(), row.first(), row.second()), null);
+          double bound = scorer.upperBound(f);
+          if (bound >= floor) {
+            synchronized (this) {
+              hopeful.add(new Entry(row.first(), row.second(), bound, f));
+            }
+          }
+        }
+      }
+    }
+
+    synchronized void offer(Entry e) {
+      StoredPairs.offer(heap, e, query);
+      floor = threshold(heap, query);
+    }
+  }
 }

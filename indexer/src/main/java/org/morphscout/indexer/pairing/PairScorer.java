@@ -33,11 +33,18 @@ public final class PairScorer {
   private final ScoreConfig config;
   private final ColourDifference colour;
   private final PairMeasurer measurer;
+  /** The components' weights under this configuration, by ordinal (read once: scoring runs per stored pair). */
+  private final double[] weights;
 
   public PairScorer(ScoreConfig config, ColourDifference colour, WarpEstimator warps) {
     this.config = config;
     this.colour = colour;
     this.measurer = new PairMeasurer(colour, warps);
+    PairComponent[] all = PairComponent.all();
+    this.weights = new double[all.length];
+    for (PairComponent c : all) {
+      weights[c.ordinal()] = c.weight(config);
+    }
   }
 
   public ScoreConfig config() {
@@ -130,7 +137,7 @@ public final class PairScorer {
     for (PairComponent c : PairComponent.all()) {
       double v = bound && c.fromWarp() ? 1 : c.subScore(f, config);
       if (!Double.isNaN(v)) {
-        double w = c.weight(config);
+        double w = weights[c.ordinal()];
         logSum += w * Math.log(Math.max(FLOOR, v));
         weightSum += w;
       }

@@ -162,10 +162,8 @@ class StoredPairsTest {
   /** Stored rows keyed "/first/second/", measures (or kind) as value. */
   private static Map<String, byte[]> storedRows(Library library) {
     Map<String, byte[]> out = new HashMap<>();
-    for (PairStore.Kind kind : PairStore.Kind.values()) {
-      library.pairs().forEach(kind, r -> out.put("/" + r.first() + "/" + r.second() + "/",
-          r.measures() == null ? new byte[] {(byte) kind.ordinal()} : r.measures()));
-    }
+    library.pairs().forEach(r -> out.put("/" + r.first() + "/" + r.second() + "/",
+        r.measures() == null ? new byte[] {(byte) r.kind().ordinal()} : r.measures()));
     return out;
   }
 
