@@ -159,6 +159,44 @@ class StoredPairsTest {
     }
   }
 
+  @Test
+  void pairsMeasuredByAnEarlierVersionAreStaleUntilIndexRefreshesThem() throws IOException {
+    Path work = tmp.resolve("stale");
+    Path lib = work.resolve("library");
+    PlantedPairs pp = TestFamilies.plantedPairs(SEED + 2);
+    for (int i = 0; i < pp.images().size(); i++) {
+      RealCatalog.png(lib.resolve(i + ".png"), pp.images().get(i).image());
+    }
+    try (RealCatalog c = RealCatalog.index(work.resolve("catalog"), lib, 8)) {
+      Map<String, byte[]> before = storedRows(c.library);
+      String model = c.context.modelId();
+      // What a new release that changed the measuring code finds: rows and the completeness mark of version 0.
+      int staled = c.library.catalog().read(conn -> {
+        try (var s = conn.createStatement()) {
+          s.executeUpdate("UPDATE settings SET value = '0:20:" + model + "' WHERE key = 'stored_pairs_complete'");
+          return s.executeUpdate("UPDATE pair_measures SET version = 0 WHERE first_id % 2 = 0");
+        }
+      });
+      assertThat(staled).isPositive();
+      assertThat(c.library.pairs().counts(PairMeasurer.VERSION).stale()).isEqualTo(staled);
+      StoredPairCounts status = StoredPairCounts.of(c.library);
+      assertThat(status.complete()).isFalse();
+      assertThat(status.stale()).isEqualTo(staled);
+      PairSearchResult live = c.pairs.bestPairs(PairQuery.DEFAULTS, ProgressListener.NONE, CancellationToken.none());
+      assertThat(live.notes()).singleElement().asString().startsWith("scored live: ").contains("another version");
+
+      new LibraryIndexer(c.library, AnalysisSetup.defaults(), IndexOptions.defaults().withThreads(2))
+          .index(List.of(lib), ProgressListener.NONE, CancellationToken.none());
+      assertThat(c.library.pairs().counts(PairMeasurer.VERSION).stale()).isZero();
+      assertThat(StoredPairCounts.of(c.library).complete()).isTrue();
+      Map<String, byte[]> after = storedRows(c.library);
+      assertThat(after.keySet()).isEqualTo(before.keySet());
+      before.forEach((k, v) -> assertThat(after.get(k)).as("re-measured %s", k).isEqualTo(v));
+      assertThat(c.pairs.bestPairs(PairQuery.DEFAULTS, ProgressListener.NONE, CancellationToken.none()).notes())
+          .isEmpty();
+    }
+  }
+
   /** Stored rows keyed "/first/second/", measures (or kind) as value. */
   private static Map<String, byte[]> storedRows(Library library) {
     Map<String, byte[]> out = new HashMap<>();
