@@ -127,6 +127,9 @@ final class ChainCommand implements Callable<Integer> {
   }
 
   private void print(PrintWriter out, ChainAnswer answer, QueryContext context) {
+    if (answer.chains().isEmpty() && (format.json || format.csv)) {
+      spec.commandLine().getErr().println("no chain: " + answer.reason()); // no silent nothing in machine output
+    }
     java.util.function.LongFunction<String> path = id -> context.library().images().byId(id).map(r -> r.path())
         .orElse("#" + id);
     if (format.json) {
@@ -150,6 +153,7 @@ final class ChainCommand implements Callable<Integer> {
         chains.add(c);
       }
       doc.put("chains", chains);
+      doc.put("notes", answer.chains().isEmpty() ? List.of("no chain: " + answer.reason()) : List.of());
       if (answer.chains().isEmpty()) {
         doc.put("reason", answer.reason());
         doc.put("closestReachable", answer.closestReachable() < 0 ? null : path.apply(answer.closestReachable()));

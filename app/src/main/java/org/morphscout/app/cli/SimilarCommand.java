@@ -51,6 +51,14 @@ final class SimilarCommand implements Callable<Integer> {
         QueryContext context = new QueryContext(library, analysis.setup())) {
       ImageAnalysis query = context.resolve(image);
       List<SimilarityService.Hit> hits = new SimilarityService(context).similar(query, k, by);
+      List<String> notes = new ArrayList<>();
+      if (hits.isEmpty()) { // no silent nothing: say why
+        int ready = library.features().readyIds(context.modelId()).size();
+        notes.add("no similar images: the catalog has " + ready + " ready image" + (ready == 1 ? "" : "s")
+            + (ready <= 1 ? " (index more pictures; see status)" : " and none has a usable "
+                + by.name().toLowerCase(java.util.Locale.ROOT) + " vector"));
+        notes.forEach(n -> spec.commandLine().getErr().println(n));
+      }
       if (json) {
         List<Map<String, Object>> results = new ArrayList<>();
         for (SimilarityService.Hit h : hits) {
@@ -63,6 +71,7 @@ final class SimilarCommand implements Callable<Integer> {
         doc.put("query", query.path());
         doc.put("by", by.name().toLowerCase(java.util.Locale.ROOT));
         doc.put("results", results);
+        doc.put("notes", notes);
         JsonOut.write(out, doc);
       } else {
         out.printf("nearest to %s by %s:%n", Terminal.safe(query.path()), by.name().toLowerCase(java.util.Locale.ROOT));

@@ -82,6 +82,23 @@ class IndexStatusCommandTest {
   }
 
   @Test
+  void aLoneImageHasNoSimilarImagesAndTheAnswerSaysWhy(@TempDir Path other) throws IOException {
+    Path folder = other.resolve("lone");
+    Files.createDirectories(folder);
+    Files.copy(lib.family.get(0), folder.resolve("a.png"));
+    Cli one = new Cli(other.resolve("catalog"));
+    one.run("index", folder.toString(), "--json", "--threads", "1").succeeds();
+    Cli.Run similar = one.run("similar", folder.resolve("a.png").toString(), "--json").succeeds();
+    assertThat(similar.json().get("results")).isEmpty();
+    assertThat(similar.json().get("notes")).singleElement().asString().contains("1 ready image");
+    assertThat(similar.err()).contains("no similar images");
+    // The status shows the stored pairs of a one-image catalog: none, and complete.
+    JsonNode stored = one.run("status", "--json").succeeds().json().get("storedPairs");
+    assertThat(stored.get("pairs").asLong()).isZero();
+    assertThat(stored.get("complete").asBoolean()).isTrue();
+  }
+
+  @Test
   void unknownOptionIsAUsageError() {
     Cli.Run run = cli.run("index", "--no-such-option", tmp.resolve("library").toString());
     assertThat(run.code()).isEqualTo(ExitCodes.USAGE).isEqualTo(2);
