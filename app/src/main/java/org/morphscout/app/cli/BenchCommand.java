@@ -37,6 +37,7 @@ import org.morphscout.indexer.bench.IndexingBenchmark;
 import org.morphscout.indexer.bench.MachineInfo;
 import org.morphscout.indexer.bench.PairBenchmark;
 import org.morphscout.indexer.bench.PairStoreCost;
+import org.morphscout.indexer.bench.RescanBenchmark;
 import org.morphscout.indexer.bench.StoredPairsBenchmark;
 import org.morphscout.indexer.bench.VectorSearchBenchmark;
 import org.morphscout.indexer.bench.WalkBenchmark;
@@ -103,6 +104,11 @@ final class BenchCommand implements Callable<Integer> {
       + "Combines with --stored-pairs.")
   Path pairCostFolder;
 
+  @Option(names = "--rescan", paramLabel = "<files>", description = "Only measure index on a library of this many "
+      + "unchanged files (for example 100000) and then with 1,000 new pictures added, and stop. Combines with "
+      + "--stored-pairs and --pair-cost.")
+  Integer rescanFiles;
+
   private PrintWriter err;
 
   @Override
@@ -112,7 +118,10 @@ final class BenchCommand implements Callable<Integer> {
       vectorSizes.forEach(n -> check.between("--vectors", n, 1, 100_000_000));
     }
     err = spec.commandLine().getErr();
-    if (storedPairSizes != null || pairCostFolder != null) {
+    if (storedPairSizes != null || pairCostFolder != null || rescanFiles != null) {
+      if (rescanFiles != null) {
+        check.between("--rescan", rescanFiles, 1, 10_000_000);
+      }
       if (storedPairSizes != null) {
         storedPairSizes.forEach(n -> check.between("--stored-pairs", n, 100, 10_000_000));
       }
@@ -209,6 +218,10 @@ final class BenchCommand implements Callable<Integer> {
         r.pairCost(pairCostFolder.toString(), PairStoreCost.run(pairCostFolder, scratch.resolve("cost"),
             AnalysisSetup.defaults().withSilhouettes(AnalysisSetup.SilhouetteMode.AUTO)
                 .withModels(ModelFolder.resolve(java.util.Optional.empty()))));
+      }
+      if (rescanFiles != null) {
+        status("re-scanning " + rescanFiles + " unchanged files, then adding 1,000");
+        r.rescan(RescanBenchmark.run(scratch.resolve("rescan"), rescanFiles, 1000, SEED));
       }
       r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
     } finally {
@@ -578,6 +591,21 @@ final class BenchCommand implements Callable<Integer> {
           + x.pairs() + " pairs, " + x.bounded() + " of them stored without a warp): **"
           + f(100 * x.added(), 0) + "%** more than indexing without them (goal: under 25%, " + met(x.added() < 0.25)
           + ").");
+      line("");
+    }
+
+    void rescan(RescanBenchmark.Result x) {
+      line("## Indexing a large library that barely changed");
+      line("");
+      line("| files | re-scan, all unchanged | files/s | then 1,000 pictures added (160x120 px) | files/s | goal "
+          + "(re-scan of 100,000 under 60 s) |");
+      line("|---|---|---|---|---|---|");
+      line("| " + x.files() + " | " + f(x.rescanSeconds(), 1) + " s (" + x.unchanged() + " unchanged) | "
+          + f(x.files() / x.rescanSeconds(), 0) + " | " + f(x.addSeconds(), 1) + " s (" + x.indexed()
+          + " analysed, stored pairs included) | " + f(x.added() / x.addSeconds(), 1) + " | "
+          + met(x.rescanSeconds() * 100_000 / x.files() < 60) + " |");
+      line("");
+      line("Indexing threads: " + x.threads() + ".");
       line("");
     }
 
