@@ -30,7 +30,7 @@ public final class ConfidenceChoiceSilhouettes implements SilhouetteExtractor {
    * @param extremeCoverage a mask covering less than this fraction, or more than 1 minus it, gets half the trust
    */
   public record Options(double learnedBelow, double framePenalty, double piecesPenalty, double extremeCoverage) {
-    public static final Options DEFAULTS = new Options(0.5, 0.75, 0.85, 0.02);
+    public static final Options DEFAULTS = new Options(0.75, 0.75, 0.85, 0.02);
 
     public Options {
       for (double v : new double[] {learnedBelow, framePenalty, piecesPenalty}) {

@@ -59,6 +59,10 @@ public final class SalientModelSilhouettes implements SilhouetteExtractor, AutoC
         .optModelPath(modelFile)
         .optEngine("OnnxRuntime")
         .optTranslator(new NoopTranslator(null))
+        // One thread per inference: indexing already runs one analysis per core, and ONNX Runtime's own pool would
+        // oversubscribe the cores (its workers spin while they wait, burning CPU for nothing).
+        .optOption("intraOpNumThreads", "1")
+        .optOption("interOpNumThreads", "1")
         .build();
     try {
       this.model = criteria.loadModel();
