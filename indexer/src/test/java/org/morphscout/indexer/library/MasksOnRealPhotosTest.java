@@ -7,14 +7,12 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -23,6 +21,7 @@ import org.morphscout.indexer.analysis.ImageAnalyzer;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
+import org.morphscout.indexer.testing.OutsideData;
 
 /**
  * Silhouettes of the default analysis ({@code index}'s: the per-image choice between the classical and the learned
@@ -36,8 +35,6 @@ import org.morphscout.indexer.silhouette.SalientModelStore;
  * the test instead of skipping it.
  */
 class MasksOnRealPhotosTest {
-  static final Path OPENCV = Path.of("/usr/share/doc/opencv-doc/examples/data");
-  static final Path SKIMAGE = Path.of("/usr/lib/python3/dist-packages/skimage/data");
 
   @TempDir static Path tmp;
   static Library library;
@@ -45,17 +42,18 @@ class MasksOnRealPhotosTest {
 
   record Drawn(String pkg, String file, double x0, double y0, double x1, double y1) {
     Path path() {
-      return (pkg.equals("opencv-doc") ? OPENCV : SKIMAGE).resolve(file);
+      return (pkg.equals("opencv-doc") ? OutsideData.OPENCV_SAMPLES : OutsideData.SKIMAGE_DATA).resolve(file);
     }
   }
 
   @BeforeAll
   static void open() throws IOException {
-    requireOrSkip(Files.isDirectory(OPENCV) && Files.isDirectory(SKIMAGE),
-        "Debian packages opencv-doc and python3-skimage are not installed (apt-get install opencv-doc "
-            + "python3-skimage)");
-    requireOrSkip(new SalientModelStore().find(ModelFolder.resolve(Optional.empty()), tmp).isPresent(),
-        "the learned silhouette model is not installed (run ./morphscout models add-salient, or .ci/run)");
+    OutsideData.require(OutsideData.OPENCV_SAMPLES, "opencv-doc");
+    OutsideData.require(OutsideData.SKIMAGE_DATA, "python3-skimage");
+    if (new SalientModelStore().find(ModelFolder.resolve(Optional.empty()), tmp).isEmpty()) {
+      OutsideData.unavailable("the learned silhouette model is not installed (./morphscout models add-salient; "
+          + ".ci/run installs it)");
+    }
     library = Library.open(tmp.resolve("catalog"));
     // The analyser index builds with its default setup (the command line's default silhouettes: auto).
     analyzer = AnalyzerFactory.create(library, AnalysisSetup.defaults()
@@ -70,14 +68,6 @@ class MasksOnRealPhotosTest {
     if (library != null) {
       library.close();
     }
-  }
-
-  /** Skips with the reason on a developer's machine; fails under CI, where .ci/run installs everything. */
-  static void requireOrSkip(boolean present, String reason) {
-    if (System.getenv("CI") != null) {
-      assertThat(present).as(reason).isTrue();
-    }
-    Assumptions.assumeTrue(present, reason);
   }
 
   static List<Drawn> drawn() throws IOException {
@@ -135,7 +125,7 @@ class MasksOnRealPhotosTest {
     List<String> report = new ArrayList<>();
     List<String> misses = new ArrayList<>();
     for (Drawn d : boxes) {
-      requireOrSkip(Files.isRegularFile(d.path()), d.path() + " is missing from package " + d.pkg());
+      OutsideData.require(d.path(), d.pkg());
       ImageAnalysis a = analyzer.analyze(d.path());
       double[] b = box(a.silhouette().mask());
       double iou = b == null ? 0 : boxIou(b, d);
