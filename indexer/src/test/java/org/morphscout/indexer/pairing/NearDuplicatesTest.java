@@ -2,8 +2,6 @@ package org.morphscout.indexer.pairing;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import static org.assertj.core.api.Assertions.assertThatThrownBy;
-
 import java.awt.geom.Rectangle2D;
 import java.util.Map;
 import java.util.SplittableRandom;
@@ -11,10 +9,11 @@ import org.junit.jupiter.api.Test;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.analysis.PixelFingerprint;
+import org.morphscout.indexer.feature.Ciede2000;
 
 class NearDuplicatesTest {
   private static final long SEED = 20261201L;
-  private final NearDuplicates dup = new NearDuplicates(NearDuplicateConfig.DEFAULTS, ColourDifference.cie76());
+  private final NearDuplicates dup = new NearDuplicates(NearDuplicateConfig.DEFAULTS, Ciede2000::difference);
 
   @Test
   void slightlyPerturbedCopyIsADuplicate() {
@@ -99,7 +98,7 @@ class NearDuplicatesTest {
     assertThat(strict.minFingerprintCorrelation()).isEqualTo(0.9999);
     assertThat(strict.minCosine()).isEqualTo(NearDuplicateConfig.DEFAULTS.minCosine());
     float[][] close = fingerprints(0.999, SEED + 2);
-    NearDuplicates strictDup = new NearDuplicates(strict, ColourDifference.cie76());
+    NearDuplicates strictDup = new NearDuplicates(strict, Ciede2000::difference);
     assertThat(strictDup.areDuplicates(Analyses.builder(1).fingerprint(close[0]).build(),
         Analyses.builder(2).fingerprint(close[1]).build())).as("seed %d", SEED + 2).isFalse();
     assertThatThrownBy(() -> NearDuplicateConfig.DEFAULTS.withOverrides(Map.of("minFingerprintCorrelation", "1.5")))

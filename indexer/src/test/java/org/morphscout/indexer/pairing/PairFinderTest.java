@@ -1,8 +1,5 @@
 package org.morphscout.indexer.pairing;
 
-import static org.assertj.core.api.Assertions.assertThat;
-import static org.assertj.core.api.Assertions.assertThatThrownBy;
-
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
@@ -16,6 +13,7 @@ import java.util.concurrent.CopyOnWriteArrayList;
 import org.junit.jupiter.api.Test;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.feature.Ciede2000;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.warp.TestMasks;
@@ -24,8 +22,8 @@ import org.morphscout.indexer.warp.WarpEstimator;
 class PairFinderTest {
   private static final long SEED = 4242L;
   private final PairScorer scorer =
-      new PairScorer(ScoreConfig.DEFAULTS, ColourDifference.cie76(), new WarpEstimator());
-  private final NearDuplicates dups = new NearDuplicates(NearDuplicateConfig.DEFAULTS, ColourDifference.cie76());
+      new PairScorer(ScoreConfig.DEFAULTS, Ciede2000::difference, new WarpEstimator());
+  private final NearDuplicates dups = new NearDuplicates(NearDuplicateConfig.DEFAULTS, Ciede2000::difference);
 
   /** A library with two planted compatible pairs (1,2) and (3,4), a duplicate (5,6) and unrelated images. */
   private static Map<Long, ImageAnalysis> library() {

@@ -5,12 +5,13 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.function.UnaryOperator;
 import org.junit.jupiter.api.Test;
 import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.feature.Ciede2000;
 import org.morphscout.indexer.warp.TestMasks;
 import org.morphscout.indexer.warp.WarpEstimator;
 
 class PairScorerTest {
   private final PairScorer scorer =
-      new PairScorer(ScoreConfig.DEFAULTS, ColourDifference.cie76(), new WarpEstimator());
+      new PairScorer(ScoreConfig.DEFAULTS, Ciede2000::difference, new WarpEstimator());
 
   private static ImageAnalysis clean(long id) {
     return Analyses.builder(id).build();
@@ -49,21 +50,32 @@ class PairScorerTest {
     expectReason(b -> b.components(2), "two objects in B");
     expectReason(b -> b.size(1080, 1920), "aspect ratios differ (4:3 vs 9:16)");
     expectReason(b -> b.size(120, 90), "B is tiny (120x90 px)");
-    // CIE76 in tests: sqrt(0^2 + 30^2 + 40^2) = 50 against the default foreground (50, 10, 20) -> (50, 40, 60).
-    expectReason(b -> b.foreground(50, 40, 60), "large colour gap (ΔE00 50)");
     // Lightness gap 42 > default threshold 40.
     expectReason(b -> b.foreground(92, 10, 20), "dark vs bright (L* 50 vs 92)");
   }
 
   @Test
   void furtherReasonsAreTriggeredByThePairBuiltForThem() {
-    // CIE76 between the default background (92, 0, 2) and (40, 0, 2) is 52 > 25.
-    expectReason(b -> b.background(40, 0, 2), "backgrounds differ (ΔE00 52)");
     // L* spread 15 against 3: ratio 0.2 < 0.4.
     expectReason(b -> b.foregroundStd(3, 5, 5), "contrast differs (L* spread 15 vs 3)");
     // 640x480 against 4000x3000: sqrt of the pixel ratio is 0.16 < 0.25.
     expectReason(b -> b.size(4000, 3000), "resolutions differ a lot (640x480 vs 4000x3000 px)");
     expectReason(b -> b.appearance(Analyses.look(12345)), "the pictures look different");
+  }
+
+  @Test
+  void colourGapsAreQuotedInCiede2000AsPublished() {
+    // Sharma, Wu and Dalal (2005), Table 1 (in the suite: feature/ciede2000-sharma-2005.csv), pair 17:
+    // (50, 2.5, 0) against (73, 25, -18) is dE00 27.1492; pair 19: (50, 2.5, 0) against (56, -27, -3) is 31.9030.
+    ImageAnalysis a = Analyses.builder(1).foreground(50, 2.5, 0).background(50, 2.5, 0).build();
+    ImageAnalysis b = Analyses.builder(2).foreground(73, 25, -18).background(56, -27, -3).build();
+    PairScore s = scorer.score(a, b);
+    // Measures are kept at single precision, hence the 1e-3 tolerance on top of the table's four decimals.
+    assertThat(s.measures().get("deltaE00")).isCloseTo(27.1492, org.assertj.core.data.Offset.offset(1e-3));
+    assertThat(s.measures().get("backgroundDeltaE00")).isCloseTo(31.9030, org.assertj.core.data.Offset.offset(1e-3));
+    assertThat(s.reasons()).contains("large colour gap (ΔE00 27)", "backgrounds differ (ΔE00 32)");
+    // The colour sub-score is 1 - dE00 / deltaEScale (40 by default).
+    assertThat(s.components().get("colour")).isCloseTo(1 - 27.1492 / 40, org.assertj.core.data.Offset.offset(1e-4));
   }
 
   @Test
@@ -152,7 +164,7 @@ class PairScorerTest {
     assertThat(close.verdict()).isEqualTo(Verdict.PASS);
     // The limit is a setting.
     PairScorer lenient = new PairScorer(ScoreConfig.DEFAULTS.withOverrides(java.util.Map.of("passMaxAspectGap", "1")),
-        ColourDifference.cie76(), new WarpEstimator());
+        Ciede2000::difference, new WarpEstimator());
     PairScore lenientScore = lenient.score(a, wide);
     assertThat(lenientScore.verdict()).isEqualTo(lenientScore.score() >= ScoreConfig.DEFAULTS.passScore()
         ? Verdict.PASS : Verdict.WARN);

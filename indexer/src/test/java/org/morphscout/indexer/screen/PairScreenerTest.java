@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
 import org.morphscout.indexer.analysis.ImageAnalysis;
+import org.morphscout.indexer.feature.Ciede2000;
 import org.morphscout.indexer.pairing.Analyses;
 import org.morphscout.indexer.pairing.ColourDifference;
 import org.morphscout.indexer.pairing.PairScorer;
@@ -18,7 +19,7 @@ import org.morphscout.indexer.warp.WarpEstimator;
 
 class PairScreenerTest {
   private final PairScorer scorer =
-      new PairScorer(ScoreConfig.DEFAULTS, ColourDifference.cie76(), new WarpEstimator());
+      new PairScorer(ScoreConfig.DEFAULTS, Ciede2000::difference, new WarpEstimator());
 
   private static ImageAnalysis byPath(String path) throws IOException {
     return switch (path) {
