@@ -1,6 +1,7 @@
 package org.morphscout.indexer.pairing;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.awt.geom.Rectangle2D;
 import java.util.Map;
