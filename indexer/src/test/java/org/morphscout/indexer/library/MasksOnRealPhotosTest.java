@@ -18,10 +18,16 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.analysis.ImageAnalyzer;
+import org.morphscout.indexer.feature.Ciede2000;
+import org.morphscout.indexer.pairing.PairScore;
+import org.morphscout.indexer.pairing.PairScorer;
+import org.morphscout.indexer.pairing.ScoreConfig;
+import org.morphscout.indexer.pairing.Verdict;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
 import org.morphscout.indexer.testing.OutsideData;
+import org.morphscout.indexer.warp.WarpEstimator;
 
 /**
  * Silhouettes of the default analysis ({@code index}'s: the per-image choice between the classical and the learned
@@ -139,5 +145,24 @@ class MasksOnRealPhotosTest {
     }
     System.err.println(String.join("\n", report)); // the per-photo figures, for the record
     assertThat(misses).as("photos whose mask box overlaps the drawn box with IoU < 0.7").isEmpty();
+  }
+
+  @Test
+  void realPairsScreenWithReasonsAPersonWouldGive() throws IOException {
+    // Common practice in morphing: two round fruits of one size morph well; a fruit into a motorcycle does not.
+    PairScorer scorer = new PairScorer(ScoreConfig.DEFAULTS, Ciede2000::difference, new WarpEstimator());
+    ImageAnalysis apple = analyzer.analyze(OutsideData.require(OutsideData.OPENCV_SAMPLES.resolve("apple.jpg"),
+        "opencv-doc"));
+    ImageAnalysis orange = analyzer.analyze(OutsideData.require(OutsideData.OPENCV_SAMPLES.resolve("orange.jpg"),
+        "opencv-doc"));
+    ImageAnalysis motorcycle = analyzer.analyze(OutsideData.require(
+        OutsideData.SKIMAGE_DATA.resolve("motorcycle_left.png"), "python3-skimage"));
+    PairScore fruit = scorer.score(apple, orange);
+    PairScore unlike = scorer.score(apple, motorcycle);
+    assertThat(fruit.reasons()).noneMatch(r -> r.startsWith("silhouettes overlap poorly"));
+    assertThat(fruit.verdict()).isNotEqualTo(Verdict.FAIL);
+    assertThat(unlike.reasons()).anyMatch(r -> r.startsWith("silhouettes overlap poorly"));
+    assertThat(unlike.verdict()).isEqualTo(Verdict.FAIL);
+    assertThat(fruit.score()).isGreaterThan(unlike.score() + 20);
   }
 }
