@@ -43,6 +43,7 @@ class DemoLibraryTest {
   void sameSeedGivesIdenticalBytesWhateverTheThreadCount(@TempDir Path second) throws IOException {
     DemoLibrary.generate(second, OPTIONS.withThreads(1));
     Set<String> a = files(first);
+    assertThat(a).as("seed %d: files generated", SEED).isNotEmpty();
     assertThat(files(second)).isEqualTo(a);
     for (String f : a) {
       assertThat(Files.readAllBytes(second.resolve(f))).as("seed %d file %s", SEED, f)
@@ -125,6 +126,7 @@ class DemoLibraryTest {
     assertThat(meanLuma(normal)).isGreaterThan(100);
 
     List<ProblemPlanner.Planned> planned = new ProblemPlanner(OPTIONS).planShots();
+    assertThat(planned).extracting(p -> p.row().problem()).contains("cut-off", "two-objects");
     VesselRenderer renderer = new VesselRenderer();
     for (ProblemPlanner.Planned p : planned) {
       assertThat(p.row()).isIn(rows);

@@ -158,6 +158,7 @@ class QueryCommandsTest {
     assertThat(seen).as("seed %d", SEED).containsExactlyInAnyOrderElementsOf(group);
 
     JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--top", "500").succeeds().json().get("pairs");
+    assertThat(pairs).as("pairs to check against the near-duplicate group").isNotEmpty();
     for (JsonNode p : pairs) {
       assertThat(group.contains(p.get("a").asText()) && group.contains(p.get("b").asText()))
           .as("near-duplicates proposed as a pair: %s", p).isFalse();

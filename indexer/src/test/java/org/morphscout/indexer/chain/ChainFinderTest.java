@@ -166,6 +166,7 @@ class ChainFinderTest {
     ChainFinder finder = new ChainFinder(f.knnGraph(12));
     StepCostModel shapeHeavy = StepCostModel.withShapeWeight(0.9);
     Chain c = finder.find(ChainQuery.between(0, 1).withCostModel(shapeHeavy), id -> 0).best();
+    assertThat(c.steps()).isNotEmpty();
     for (Edge e : c.steps()) {
       assertThat(e.cost()).isCloseTo(shapeHeavy.cost(e.components()), within(1e-12));
     }

@@ -89,6 +89,7 @@ class NeighbourGraphBuilderTest {
     b.buildAll(f.ids(), ProgressListener.NONE, CancellationToken.none());
     long victim = 17;
     long listers = present.stream().filter(o -> b.nearestOf(o).stream().anyMatch(c -> c.id() == victim)).count();
+    assertThat(listers).as("images listing %d among their nearest (family seed 11)", victim).isPositive();
     queries.set(0);
     present.remove(victim);
     b.remove(victim);

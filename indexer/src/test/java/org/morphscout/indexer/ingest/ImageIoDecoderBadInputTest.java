@@ -187,7 +187,7 @@ class ImageIoDecoderBadInputTest {
   }
 
   @Test
-  void hugeDeclaredPngIsRefusedFromItsHeaderQuicklyAndWithoutAllocating() throws Exception {
+  void hugeDeclaredPngIsRefusedFromItsHeaderWithoutAllocating() throws Exception {
     // Signature + IHDR (ISO/IEC 15948 section 11.2.2) declaring 100000 x 100000 RGB, correct CRC, nothing else.
     ByteArrayOutputStream b = new ByteArrayOutputStream();
     b.write(TestImages.PNG_SIGNATURE);
@@ -199,14 +199,11 @@ class ImageIoDecoderBadInputTest {
         (com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean();
     decoder.decode(TestImages.write(dir, "warmup.png", TestImages.encode(TestImages.filled(8, 8, -1), "png")));
     long bytesBefore = threads.getCurrentThreadAllocatedBytes();
-    long t0 = System.nanoTime();
     ImageReadException e = failure(file);
-    long millis = (System.nanoTime() - t0) / 1_000_000;
     long allocated = threads.getCurrentThreadAllocatedBytes() - bytesBefore;
 
     assertThat(e.failure()).isEqualTo(ReadFailure.TOO_LARGE);
     assertThat(e.reason()).isEqualTo("image too large: 100000x100000 = 10000.0 MP exceeds the 250 MP cap");
-    assertThat(millis).as("refused from the header").isLessThan(2000);
     // Decoding would need 10^10 pixels (40 GB as ARGB); a header check allocates a few buffers at most.
     assertThat(allocated).as("bytes allocated").isLessThan(32L << 20);
   }

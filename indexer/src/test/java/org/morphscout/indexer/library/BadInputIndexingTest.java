@@ -1,7 +1,6 @@
 package org.morphscout.indexer.library;
 
 import static org.assertj.core.api.Assertions.assertThat;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.awt.image.BufferedImage;
 import java.io.IOException;
@@ -220,8 +219,7 @@ class BadInputIndexingTest {
       Files.delete(probe);
       return true;
     } catch (IOException | UnsupportedOperationException e) {
-      assumeTrue(true);
-      return false;
+      return false; // the link cases are left out below; the rest of the test still runs
     }
   }
 }

@@ -103,6 +103,7 @@ class PairDiscoveryOnRealImagesTest {
     });
     // TestFamilies.nearDuplicates: the original and each of its five edited copies are the same picture.
     assertThat(seen).as("seed %d", SEED).isEqualTo(duplicateGroup);
+    assertThat(result.pairs()).as("pairs to check against the near-duplicate group").isNotEmpty();
     for (ScoredPair p : result.pairs()) {
       assertThat(duplicateGroup.containsAll(ends(p))).as("duplicates proposed as a pair: %s", p).isFalse();
     }

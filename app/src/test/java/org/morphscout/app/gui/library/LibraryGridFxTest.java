@@ -68,10 +68,8 @@ class LibraryGridFxTest {
         flags.put((long) i, EnumSet.of(ImageFlag.CUT_OFF));
       }
     }
-    long t0 = System.nanoTime();
     WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), flags)).get();
     WaitForAsyncUtils.waitForFxEvents();
-    long loadMs = (System.nanoTime() - t0) / 1_000_000;
     assertThat(vm.visible()).hasSize(N);
     // a virtualised list creates cells for the visible rows only: a screenful of tiles, not 100,000
     int tiles = robot.lookup(".tile").queryAll().size();
@@ -84,13 +82,10 @@ class LibraryGridFxTest {
     assertThat(robot.lookup(".tile").queryAllAs(Tile.class)).anyMatch(t -> t.shownId() == N - 1);
     assertThat(robot.lookup(".tile").queryAll().size()).isLessThanOrEqualTo(tiles + 40);
 
-    long t1 = System.nanoTime();
     WaitForAsyncUtils.asyncFx(() -> vm.flagProperty(ImageFlag.CUT_OFF).set(true)).get();
     WaitForAsyncUtils.waitForFxEvents();
-    long filterMs = (System.nanoTime() - t1) / 1_000_000;
+    // every 97th row was flagged above: ids 0, 97, ..., 99,910
     assertThat(vm.visible()).hasSize((N + 96) / 97);
-    // generous bounds (shared CI machines): the point is "well under a second", not a benchmark
-    assertThat(loadMs).as("showing 100,000 rows took %d ms", loadMs).isLessThan(5_000);
-    assertThat(filterMs).as("filtering 100,000 rows took %d ms", filterMs).isLessThan(5_000);
+    // (How long showing and filtering take is measured by the browser benchmark, not asserted here.)
   }
 }
