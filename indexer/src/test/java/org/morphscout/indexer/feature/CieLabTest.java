@@ -15,7 +15,9 @@ class CieLabTest {
 
   @Test
   void primariesMatchLindbloomsMatrixAndWhitePoint() {
-    // Values computed with Bruce Lindbloom's published sRGB matrix and D65 white (brucelindbloom.com), as in the brief.
+    // Expected values computed by us (Python, 4 decimals) from the sRGB-to-XYZ matrix and D65 white
+    // (0.95047, 1, 1.08883) of Bruce Lindbloom's "RGB/XYZ Matrices" page (brucelindbloom.com), the IEC 61966-2-1
+    // transfer curve and the CIE 15:2004 L*a*b* formulas with the exact constants 216/24389 and 24389/27.
     assertLab(CieLab.toLab(255, 0, 0), 53.2408, 80.0925, 67.2032);
     assertLab(CieLab.toLab(0, 255, 0), 87.7347, -86.1827, 83.1793);
     assertLab(CieLab.toLab(0, 0, 255), 32.2970, 79.1875, -107.8602);
@@ -26,7 +28,8 @@ class CieLabTest {
 
   @Test
   void transferCurveMatchesIec61966() {
-    // IEC 61966-2-1: linear segment below 0.04045, and sRGB 0.5 decodes to about 0.214 (common practice).
+    // IEC 61966-2-1: linear segment below 0.04045 (slope 1/12.92); above it ((v + 0.055) / 1.055)^2.4, which for
+    // v = 0.5 is 0.21404 (computed by us from that formula).
     assertThat(CieLab.srgbToLinear(0.04)).isCloseTo(0.04 / 12.92, within(1e-12));
     assertThat(CieLab.srgbToLinear(0.5)).isCloseTo(0.2140, within(1e-4));
     for (int i = 0; i <= 255; i++) {

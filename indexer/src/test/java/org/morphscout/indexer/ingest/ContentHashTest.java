@@ -33,7 +33,8 @@ class ContentHashTest {
 
   @Test
   void emptyFile() throws Exception {
-    // SHA-256 of the empty message (NIST example values, widely published).
+    // SHA-256 of the empty message: NIST's additional SHA-2 examples (CSRC, "SHA2_Additional", the 0-byte message;
+    // from memory), and the same as GNU coreutils' sha256sum of an empty file on this machine.
     Path file = Files.write(dir.resolve("empty"), new byte[0]);
     assertThat(ContentHash.sha256Hex(file))
         .isEqualTo("e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");

@@ -14,7 +14,7 @@ class DemonsRegistrationTest {
   @Test
   void recoversTheShiftOfADisc() {
     // Definition of the field (moving(x + u) = fixed(x)): a moving disc shifted by d gives u = d inside the disc.
-    // Common practice: a registration must recover a pure translation; tolerance half a pixel as specified.
+    // Common practice: a registration must recover a pure translation. The half-pixel tolerance is our own bar.
     double[][] shifts = {{3, -2}, {-4.5, 1.5}, {0, 5}};
     for (double[] d : shifts) {
       float[] fixed = TestMasks.disc(N, 31.5, 31.5, 12);
