@@ -1,6 +1,7 @@
 package org.morphscout.app.gui;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
@@ -8,7 +9,10 @@ import com.tngtech.archunit.core.importer.ImportOption;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
-/** Layering rules: the library knows nothing of the application; view-models know nothing of scene graphs. */
+/**
+ * Layering rules: the library knows nothing of the application, its packages form no cycles and it never prints;
+ * view-models know nothing of scene graphs.
+ */
 class ArchitectureTest {
   private static JavaClasses classes;
 
@@ -22,6 +26,20 @@ class ArchitectureTest {
   void indexerNeverUsesTheApplicationOrJavaFx() {
     noClasses().that().resideInAPackage("org.morphscout.indexer..")
         .should().dependOnClassesThat().resideInAnyPackage("org.morphscout.app..", "javafx..")
+        .check(classes);
+  }
+
+  @Test
+  void indexerPackagesDependOnEachOtherWithoutCycles() {
+    // Each package of the library can be understood (and tested) from the ones below it.
+    slices().matching("org.morphscout.indexer.(*)..").should().beFreeOfCycles().check(classes);
+  }
+
+  @Test
+  void theLibraryNeverWritesToTheStandardStreams() {
+    // The library reports through return values, exceptions and SLF4J; only the command line prints.
+    noClasses().that().resideInAPackage("org.morphscout.indexer..")
+        .should().accessField(System.class, "out").orShould().accessField(System.class, "err")
         .check(classes);
   }
 

@@ -22,7 +22,7 @@ import org.morphscout.indexer.silhouette.Mask;
  *
  * <p>Measured with PixelFingerprintSeparationBenchmark (DefaultSilhouettes, default 768 px analysis size, seeds
  * 8401, 7202, 8502, 1, 3, 4): see
- * {@link org.morphscout.indexer.pairing.NearDuplicateConfig#minFingerprintCorrelation()} for the figures behind the
+ * {@code pairing.NearDuplicateConfig.minFingerprintCorrelation()} for the figures behind the
  * threshold. Variants tried on the same pairs and dropped: 24 and 48 cells (48 made both copies and family members
  * drop; no better separation), margins 0.03-0.25 (0.15 best), the bounding box or a 1-99 % trimmed box instead of
  * moments (87 and 100 of 109 copies above the most similar family neighbours instead of 103), gradient magnitude of

@@ -3,6 +3,7 @@ package org.morphscout.indexer.feature;
 import java.awt.image.BufferedImage;
 import java.util.ArrayList;
 import java.util.List;
+import org.morphscout.indexer.colour.CieLab;
 import org.morphscout.indexer.silhouette.Mask;
 
 /**

@@ -1,6 +1,7 @@
 package org.morphscout.indexer.feature;
 
 import java.awt.image.BufferedImage;
+import org.morphscout.indexer.colour.CieLab;
 
 /**
  * Prepares the input tensor of the built-in GIST model for one image: float32 [4, 128, 128], row-major.

@@ -3,7 +3,7 @@
  *
  * <h2>Colour</h2>
  *
- * {@link org.morphscout.indexer.feature.CieLab} converts 8-bit sRGB (IEC 61966-2-1) to CIELAB (D65) with Bruce
+ * {@link org.morphscout.indexer.colour.CieLab} converts 8-bit sRGB (IEC 61966-2-1) to CIELAB (D65) with Bruce
  * Lindbloom's published matrix and white point, and back for display. {@link org.morphscout.indexer.feature.Ciede2000}
  * is the CIEDE2000 difference as written out by Sharma, Wu and Dalal (Color Res. Appl. 30(1), 2005).
  * {@link org.morphscout.indexer.feature.ColourStatistics} gives the foreground/background Lab mean and standard

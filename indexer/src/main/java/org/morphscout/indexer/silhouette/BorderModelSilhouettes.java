@@ -2,7 +2,7 @@ package org.morphscout.indexer.silhouette;
 
 import java.awt.image.BufferedImage;
 import java.util.Objects;
-import org.morphscout.indexer.feature.CieLab;
+import org.morphscout.indexer.colour.CieLab;
 
 /**
  * The default silhouette extractor for photographs of an object in front of a background: it learns the background

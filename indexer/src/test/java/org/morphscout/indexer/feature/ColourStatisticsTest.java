@@ -7,6 +7,7 @@ import java.awt.image.BufferedImage;
 import java.util.List;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
+import org.morphscout.indexer.colour.CieLab;
 import org.morphscout.indexer.silhouette.Mask;
 
 class ColourStatisticsTest {

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.awt.image.BufferedImage;
 import org.junit.jupiter.api.Test;
+import org.morphscout.indexer.colour.CieLab;
 
 class GistInputTest {
   private static final int N = GistInput.SIZE;

@@ -1,4 +1,4 @@
-package org.morphscout.indexer.feature;
+package org.morphscout.indexer.colour;
 
 /**
  * Conversions between 8-bit sRGB and CIELAB (D65): sRGB (IEC 61966-2-1 transfer curve) to linear RGB, to CIE XYZ with

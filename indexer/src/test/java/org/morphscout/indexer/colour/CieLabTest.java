@@ -1,4 +1,4 @@
-package org.morphscout.indexer.feature;
+package org.morphscout.indexer.colour;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
