@@ -97,7 +97,7 @@ public final class LargeCatalog {
               counts[1]++; // pending: found by the last scan, not analysed yet
             } else if (status < 0.035) {
               lib.images().markFailed(id, "not a readable JPEG: the file ends after " + rnd.nextInt(4096)
-                  + " bytes");
+                  + " bytes", "TRUNCATED", 0);
               counts[2]++;
             } else {
               lib.images().markReady(id, name.width(), name.height(), 1, name.format());

@@ -100,7 +100,7 @@ public final class SampleCatalog {
       Path broken = photos.resolve("street").resolve("broken.jpg");
       Files.write(broken, new byte[] {(byte) 0xFF, (byte) 0xD8, 1, 2, 3});
       long bad = lib.images().insertPending(rootId, broken.toString(), 5, 0, "hash-broken");
-      lib.images().markFailed(bad, "not a readable JPEG: the file ends after 5 bytes");
+      lib.images().markFailed(bad, "not a readable JPEG: the file ends after 5 bytes", "TRUNCATED", 0);
     }
     return catalogDir;
   }

@@ -143,11 +143,39 @@ public final class ImageStore {
     update("DELETE FROM failures WHERE image_id = ?", id);
   }
 
-  /** Marks an image failed with a plain-language reason (without the path), replacing an earlier reason. */
-  public void markFailed(long id, String reason) {
+  /**
+   * Marks an image failed with a plain-language reason (without the path), the failure's kind as a value and, for a
+   * file refused as too large, the pixel count it declared (0 otherwise); replaces an earlier failure.
+   */
+  public void markFailed(long id, String reason, String kind, long declaredPixels) {
     update("UPDATE images SET status = 'failed', updated_at = ? WHERE id = ?", now(), id);
-    update("INSERT INTO failures(image_id, reason, failed_at) VALUES (?, ?, ?) ON CONFLICT(image_id) DO UPDATE "
-        + "SET reason = excluded.reason, failed_at = excluded.failed_at", id, reason, now());
+    update("INSERT INTO failures(image_id, reason, failed_at, kind, declared_pixels) VALUES (?, ?, ?, ?, ?) "
+        + "ON CONFLICT(image_id) DO UPDATE SET reason = excluded.reason, failed_at = excluded.failed_at, "
+        + "kind = excluded.kind, declared_pixels = excluded.declared_pixels", id, reason, now(), kind,
+        declaredPixels > 0 ? declaredPixels : null);
+  }
+
+  /**
+   * A stored failure: the reason people read, and the kind and declared pixels as values (both null for failures
+   * recorded before layout step 08).
+   */
+  public record StoredFailure(String reason, String kind, Long declaredPixels) {}
+
+  /** The stored failure of an image, if it failed. */
+  public Optional<StoredFailure> failureOf(long id) {
+    return catalog.read(c -> {
+      try (PreparedStatement s = c.prepareStatement(
+          "SELECT reason, kind, declared_pixels FROM failures WHERE image_id = ?")) {
+        s.setLong(1, id);
+        try (ResultSet rs = s.executeQuery()) {
+          if (!rs.next()) {
+            return Optional.empty();
+          }
+          long pixels = rs.getLong(3);
+          return Optional.of(new StoredFailure(rs.getString(1), rs.getString(2), rs.wasNull() ? null : pixels));
+        }
+      }
+    });
   }
 
   public void setStatus(long id, ImageStatus status) {

@@ -210,7 +210,7 @@ public final class ImageIoDecoder implements ImageDecoder {
           file,
           ReadFailure.TOO_LARGE,
           "image too large: " + w + "x" + h + " = " + size + " MP exceeds the " + megapixels(options.maxPixels())
-              + " MP cap");
+              + " MP cap", pixels, null);
     }
   }
 

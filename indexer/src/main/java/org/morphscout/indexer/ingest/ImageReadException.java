@@ -15,16 +15,23 @@ public final class ImageReadException extends MorphscoutException {
   private final transient Path path;
   private final ReadFailure failure;
   private final String reason;
+  private final long declaredPixels;
 
   public ImageReadException(Path path, ReadFailure failure, String reason) {
     this(path, failure, reason, null);
   }
 
   public ImageReadException(Path path, ReadFailure failure, String reason, Throwable cause) {
+    this(path, failure, reason, 0, cause);
+  }
+
+  /** @param declaredPixels the pixel count the file declares, for {@link ReadFailure#TOO_LARGE}; 0 when unknown */
+  public ImageReadException(Path path, ReadFailure failure, String reason, long declaredPixels, Throwable cause) {
     super("Cannot read image " + path + ": " + reason, cause);
     this.path = Objects.requireNonNull(path, "path");
     this.failure = Objects.requireNonNull(failure, "failure");
     this.reason = Objects.requireNonNull(reason, "reason");
+    this.declaredPixels = declaredPixels;
   }
 
   /** The file that failed. */
@@ -35,6 +42,11 @@ public final class ImageReadException extends MorphscoutException {
   /** The stable code of the cause. */
   public ReadFailure failure() {
     return failure;
+  }
+
+  /** The pixel count the file declares when it was refused as too large; 0 otherwise. */
+  public long declaredPixels() {
+    return declaredPixels;
   }
 
   /** The cause as a short phrase without the path, e.g. {@code "empty file (0 bytes)"}. */

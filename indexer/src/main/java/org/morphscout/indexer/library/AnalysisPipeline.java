@@ -82,14 +82,14 @@ final class AnalysisPipeline {
           batchRows.add(s.row);
         } catch (TimeoutException e) {
           s.future.cancel(true);
-          fail(s.row, "timed out: reading and analysing took more than " + options.perFileTimeLimit().toSeconds()
-              + " s", failures);
+          fail(s.row, new FailureKind.Failure(FailureKind.TIMED_OUT, "timed out: reading and analysing took more "
+              + "than " + options.perFileTimeLimit().toSeconds() + " s"), failures);
         } catch (ExecutionException e) {
           if (DiskSpace.isFull(e.getCause())) {
             // Not the file's fault: stop the run with one message instead of failing every file that follows.
             throw new MorphscoutException(DiskSpace.full(library.catalog().dir()), e.getCause());
           }
-          fail(s.row, reason(e.getCause()), failures);
+          fail(s.row, FailureKind.of(e.getCause()), failures);
         } catch (InterruptedException e) {
           Thread.currentThread().interrupt();
           throw new CancellationToken.CancelledException();
@@ -141,7 +141,8 @@ final class AnalysisPipeline {
       results = analyzer.finish(batch, rows.stream().map(ImageRow::id).toList());
     } catch (RuntimeException e) {
       for (ImageRow r : rows) {
-        fail(r, "appearance model failed: " + e.getMessage(), failures);
+        fail(r, new FailureKind.Failure(FailureKind.MODEL_FAILED, "appearance model failed: " + e.getMessage()),
+            failures);
       }
       return 0;
     }
@@ -152,7 +153,8 @@ final class AnalysisPipeline {
         good.add(results.get(i));
         goodPrepared.add(batch.get(i));
       } else {
-        fail(rows.get(i), "analysis produced an invalid vector (NaN); please report this file", failures);
+        fail(rows.get(i), new FailureKind.Failure(FailureKind.INVALID_VECTOR,
+            "analysis produced an invalid vector (NaN); please report this file"), failures);
       }
     }
     library.catalog().inTransaction(c -> {
@@ -173,26 +175,12 @@ final class AnalysisPipeline {
   }
 
 
-  private void fail(ImageRow row, String reason, List<IndexReport.FileFailure> failures) {
+  private void fail(ImageRow row, FailureKind.Failure failure, List<IndexReport.FileFailure> failures) {
     library.catalog().inTransaction(c -> {
-      library.images().markFailed(row.id(), reason);
+      library.images().markFailed(row.id(), failure.reason(), failure.kind().name(), failure.declaredPixels());
       return null;
     });
-    failures.add(new IndexReport.FileFailure(row.path(), reason));
-    LOG.info("{}: {}", row.path(), reason);
-  }
-
-  static String reason(Throwable t) {
-    if (t instanceof ImageReadException r) {
-      return r.reason();
-    }
-    if (t instanceof java.nio.file.NoSuchFileException) {
-      return "file disappeared before it could be read";
-    }
-    if (t instanceof OutOfMemoryError) {
-      return "not enough memory to analyse this image";
-    }
-    String m = t.getMessage();
-    return "analysis failed: " + (m == null ? t.getClass().getSimpleName() : m);
+    failures.add(new IndexReport.FileFailure(row.path(), failure.reason()));
+    LOG.info("{}: {}", row.path(), failure.reason());
   }
 }

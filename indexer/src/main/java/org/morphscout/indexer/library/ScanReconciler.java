@@ -207,7 +207,22 @@ final class ScanReconciler {
   }
 
   private boolean transientFailure(long id) {
-    String reason = library.images().failureReason(id).orElse("");
+    ImageStore.StoredFailure failure = library.images().failureOf(id).orElse(null);
+    if (failure == null) {
+      return false;
+    }
+    if (failure.kind() != null) {
+      FailureKind kind;
+      try {
+        kind = FailureKind.valueOf(failure.kind());
+      } catch (IllegalArgumentException e) {
+        return false; // a kind written by a later release: leave the file as it is
+      }
+      return FailureKind.worthRetrying(kind, failure.declaredPixels() == null ? 0 : failure.declaredPixels(),
+          maxPixels);
+    }
+    // Recorded before failures had a kind (layout step 08): read the reason as that release wrote it.
+    String reason = failure.reason();
     java.util.regex.Matcher large = TOO_LARGE.matcher(reason);
     if (large.find()) {
       // Refused by the pixel cap of an earlier run: worth another try once the cap admits it.

@@ -160,13 +160,23 @@ class LibraryIndexerTest {
     try (Library library = Library.open(catalogDir)) {
       index(library);
       ImageRow v4 = library.require(root.resolve("vessel-4.png").toString());
-      library.images().markFailed(v4.id(), "timed out: reading and analysing took more than 60 s");
+      // The kind decides, not the wording: a reworded time-out is still tried again.
+      library.images().markFailed(v4.id(), "took too long this time", FailureKind.TIMED_OUT.name(), 0);
+      ImageRow v5 = library.require(root.resolve("vessel-5.png").toString());
+      // A failure recorded before failures had a kind is read by its reason, as that release wrote it.
+      library.images().markFailed(v5.id(), "timed out: reading and analysing took more than 60 s", null, 0);
       IndexReport again = index(library);
-      assertThat(again.indexed()).isEqualTo(1);
+      assertThat(again.indexed()).isEqualTo(2);
+      assertThat(library.images().byId(v5.id())).get().extracting(ImageRow::status).isEqualTo(ImageStatus.READY);
       assertThat(library.images().byId(v4.id())).get().extracting(ImageRow::status).isEqualTo(ImageStatus.READY);
       // The truncated JPEG and the text file stay failed, are not analysed again, and are still reported.
       assertThat(again.failures()).extracting(IndexReport.FileFailure::reason)
           .containsExactlyInAnyOrder("truncated JPEG data", "not an image");
+      ImageRow truncated = library.images().failures().stream()
+          .filter(f -> f.reason().equals("truncated JPEG data")).findFirst()
+          .flatMap(f -> library.images().byPath(f.path())).orElseThrow();
+      assertThat(library.images().failureOf(truncated.id())).get()
+          .extracting(org.morphscout.indexer.catalog.ImageStore.StoredFailure::kind).isEqualTo("TRUNCATED");
     }
   }
 
