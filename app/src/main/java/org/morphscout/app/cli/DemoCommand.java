@@ -195,7 +195,7 @@ final class DemoCommand implements Callable<Integer> {
         Text.num(walk.result().total(), 3), Text.num(walk.result().largestStep(), 3),
         Text.num(100 * walk.result().improvement(), 0));
     Path walkSheet = outputs.resolve("walk-sheet.png");
-    Sheets.sequence(library, "Walkthrough of the shelf views", "total step cost "
+    Sheets.sequence(library, "Walk of the shelf views", "total step cost "
         + Text.num(walk.result().total(), 3), walk.images().stream().map(ImageAnalysis::id).toList(), walk.steps(),
         walkSheet);
     out.printf("  contact sheet: %s%n", walkSheet);

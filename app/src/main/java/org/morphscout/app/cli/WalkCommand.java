@@ -72,7 +72,7 @@ final class WalkCommand implements Callable<Integer> {
       ImageAnalysis e = end == null ? null : context.resolve(end);
       WalkAnswer answer = service.plan(images, s, e, StepCostModel.withShapeWeight(shapeWeight));
       if (sheet != null) {
-        Sheets.sequence(library, "Walkthrough of " + images.size() + " images",
+        Sheets.sequence(library, "Walk of " + images.size() + " images",
             String.format(java.util.Locale.ROOT, "total %.3f · largest step %.3f · %.0f%% better than the order given",
                 answer.result().total(), answer.result().largestStep(), 100 * answer.result().improvement()),
             answer.images().stream().map(ImageAnalysis::id).toList(), answer.steps(), sheet);

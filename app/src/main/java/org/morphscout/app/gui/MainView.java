@@ -81,23 +81,26 @@ public final class MainView extends BorderPane {
   }
 
   private MenuBar menu() {
-    MenuItem open = new MenuItem("Open catalog…");
+    MenuItem open = new MenuItem("Open a catalog folder…");
+    open.setId("catalog-open");
     open.setAccelerator(KeyCombination.keyCombination("Shortcut+O"));
     open.setOnAction(e -> openCatalogDialog(false));
-    MenuItem create = new MenuItem("New catalog…");
+    MenuItem create = new MenuItem("Start a catalog in a folder…");
+    create.setId("catalog-start");
     create.setOnAction(e -> openCatalogDialog(true));
-    MenuItem quit = new MenuItem("Quit");
+    MenuItem quit = new MenuItem("Close Morphscout");
     quit.setAccelerator(KeyCombination.keyCombination("Shortcut+Q"));
     quit.setOnAction(e -> {
       if (getScene() != null && getScene().getWindow() != null) {
         getScene().getWindow().hide();
       }
     });
-    Menu file = new Menu("File", null, open, create, quit);
+    Menu catalog = new Menu("Catalog", null, open, create, new javafx.scene.control.SeparatorMenuItem(), quit);
+    catalog.setId("catalog-menu");
     MenuItem keys = new MenuItem("Keyboard shortcuts");
     keys.setOnAction(e -> showShortcuts());
     Menu help = new Menu("Help", null, keys);
-    return new MenuBar(file, help);
+    return new MenuBar(catalog, help);
   }
 
   private HBox statusBar() {

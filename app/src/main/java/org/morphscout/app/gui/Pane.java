@@ -1,11 +1,14 @@
 package org.morphscout.app.gui;
 
-/** The browser's panes, in tab order. The inspector is not here: it sits beside every pane. */
+/**
+ * The browser's panes, in tab order (the constants' names are stored in the window settings, so they stay; the
+ * titles are what people see). The inspector is not here: it sits beside every pane.
+ */
 public enum Pane {
-  LIBRARY("Library"),
+  LIBRARY("Images"),
   CHAINS("Chains"),
   PAIRS("Pairs"),
-  WALKTHROUGH("Walkthrough"),
+  WALKTHROUGH("Walk"),
   INDEXING("Indexing");
 
   private final String title;

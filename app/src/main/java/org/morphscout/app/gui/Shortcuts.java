@@ -16,7 +16,7 @@ public final class Shortcuts {
 
   public static final List<Shortcut> ALL = List.of(
       new Shortcut("Ctrl+O", "Open a catalog"),
-      new Shortcut("Ctrl+1 … Ctrl+5", "Show Library, Chains, Pairs, Walkthrough, Indexing"),
+      new Shortcut("Ctrl+1 … Ctrl+5", "Show Images, Chains, Pairs, Walk, Indexing"),
       new Shortcut("Arrow keys", "Move the selection in the grid"),
       new Shortcut("Ctrl+click / Shift+click", "Add to / extend the selection (for walkthroughs)"),
       new Shortcut("Ctrl+F", "Find images similar in appearance to the selected one"),
@@ -25,7 +25,7 @@ public final class Shortcuts {
       new Shortcut("S / E", "Use the selected image as chain start / end"),
       new Shortcut("P", "Find partners of the selected image (opens Pairs)"),
       new Shortcut("Space", "Show or hide the silhouette in the inspector"),
-      new Shortcut("Ctrl+Enter", "Run: find chains (Chains), order smoothly (Walkthrough)"),
+      new Shortcut("Ctrl+Enter", "Run: find chains (Chains), order smoothly (Walk)"),
       new Shortcut("A / R", "Approve / reject the chosen pair (Pairs)"),
       new Shortcut("N", "Write a note on the chosen pair (Pairs)"),
       new Shortcut("Alt+Left / Alt+Right", "Move the chosen image in the walkthrough strip"),

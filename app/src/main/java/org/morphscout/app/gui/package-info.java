@@ -6,7 +6,7 @@
  * (only properties and collections), so they are tested without the toolkit.
  *
  * <p>{@link org.morphscout.app.gui.MorphscoutApp} starts the window; {@link org.morphscout.app.gui.MainView} holds
- * the panes (Library, Chains, Pairs, Walkthrough, Indexing) beside the Inspector;
+ * the panes (Images, Chains, Pairs, Walk, Indexing) beside the Inspector;
  * {@link org.morphscout.app.gui.Session} is the state they share; {@link org.morphscout.app.gui.SettingsStore}
  * remembers the last catalog and the layout in {@code browser.json} in the user's configuration folder;
  * {@link org.morphscout.app.gui.Shortcuts} lists the keyboard shortcuts (F1 shows them).

@@ -21,7 +21,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
-import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.task.FxTaskRunner;
 import org.morphscout.indexer.bench.HeapMeter;
 import org.morphscout.indexer.catalog.ImageRow;
@@ -44,7 +44,7 @@ import org.testfx.util.WaitForAsyncUtils;
  * heaps over the difference of the sizes. The figures are explained in {@link BrowserMemoryReport}.
  *
  * <p>Prints a Markdown section and writes it to {@code morphscout.bench.out} (default
- * {@code target/browser-memory.md}). Asserts only facts that can fail: every image is listed, the flags read from
+ * {@code target/browser-memory.md}). Asserts only facts that can fail: every image is listed, the findings read from
  * the catalog match what was written, tile nodes stay a screenful, and the thumbnail cache stays within its capacity.
  * Nothing is timed against a limit.
  */
@@ -151,17 +151,17 @@ class LibraryViewMemoryBenchmark {
       // the cache is an LRU of MorphscoutApp.THUMB_CAPACITY: the long scroll must overflow it and it must not grow
       assertThat(shown.size()).as("thumbnails shown by the long scroll").isGreaterThan(MorphscoutApp.THUMB_CAPACITY);
       assertThat(cached).as("thumbnails still cached").isBetween(1, MorphscoutApp.THUMB_CAPACITY);
-      // the flags come from the catalog (CatalogFlags.load): as many failed images as LargeCatalog wrote
-      WaitForAsyncUtils.asyncFx(() -> w.vm().library().flagProperty(ImageFlag.FAILED).set(true)).get();
+      // the findings come from the catalog (CatalogFindings.load): as many failed images as LargeCatalog wrote
+      WaitForAsyncUtils.asyncFx(() -> w.vm().library().findingProperty(ImageFinding.FAILED).set(true)).get();
       assertThat(onFx(() -> w.vm().library().visible().size())).as("failed images listed")
           .isEqualTo(built.failed());
-      // with every flag chosen, the grid shows the images with any flag: the flagged silhouettes plus the failures
+      // with every finding chosen, the grid shows the images with any finding: the flagged silhouettes plus the failures
       WaitForAsyncUtils.asyncFx(() -> {
-        for (ImageFlag f : ImageFlag.values()) {
-          w.vm().library().flagProperty(f).set(true);
+        for (ImageFinding f : ImageFinding.values()) {
+          w.vm().library().findingProperty(f).set(true);
         }
       }).get();
-      assertThat(onFx(() -> w.vm().library().visible().size())).as("images with any flag listed")
+      assertThat(onFx(() -> w.vm().library().visible().size())).as("images with any finding listed")
           .isEqualTo(built.flagged() + built.failed());
       return new BrowserMemoryReport.Run(built, before, loaded, afterJumps, afterScroll, peak, sampledPeak, loadMs,
           tiles, maxTiles, columns, jumpShown, shown.size(), cached, scrollMs, -1);

@@ -19,7 +19,7 @@ import org.morphscout.app.gui.library.LibraryViewModel;
 import org.morphscout.app.gui.library.SortKey;
 import org.morphscout.app.gui.pairs.PairRow;
 import org.morphscout.app.gui.pairs.PairsViewModel;
-import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
 import org.morphscout.indexer.catalog.DecisionStore;
@@ -69,16 +69,16 @@ class ViewModelsTest {
   @Test
   void flagAndFolderFiltersNarrowTheGrid() {
     LibraryViewModel lib = main.library();
-    lib.flagProperty(ImageFlag.FAILED).set(true);
+    lib.findingProperty(ImageFinding.FAILED).set(true);
     assertThat(lib.visible()).extracting(ImageRow::path).singleElement().asString().endsWith("broken.jpg");
-    lib.flagProperty(ImageFlag.FAILED).set(false);
-    lib.flagProperty(ImageFlag.CUT_OFF).set(true);
+    lib.findingProperty(ImageFinding.FAILED).set(false);
+    lib.findingProperty(ImageFinding.CUT_OFF).set(true);
     assertThat(lib.visible()).extracting(ImageRow::path).anyMatch(p -> p.endsWith("round-cut.png"))
         .noneMatch(p -> p.endsWith("round-01.png"));
-    lib.flagProperty(ImageFlag.CUT_OFF).set(false);
-    lib.flagProperty(ImageFlag.SEVERAL_OBJECTS).set(true);
+    lib.findingProperty(ImageFinding.CUT_OFF).set(false);
+    lib.findingProperty(ImageFinding.SEVERAL_OBJECTS).set(true);
     assertThat(lib.visible()).extracting(ImageRow::path).singleElement().asString().endsWith("pair-of-tiles.png");
-    lib.flagProperty(ImageFlag.SEVERAL_OBJECTS).set(false);
+    lib.findingProperty(ImageFinding.SEVERAL_OBJECTS).set(false);
     lib.folderProperty().set("GARDEN");
     assertThat(lib.visible()).isNotEmpty().allMatch(r -> r.path().contains("/garden/"));
   }
@@ -112,10 +112,10 @@ class ViewModelsTest {
   }
 
   @Test
-  void inspectorShowsFactsFlagsAndSwatches() {
+  void inspectorShowsFactsFindingsAndSwatches() {
     main.session().selectedProperty().set(row("pair-of-tiles.png"));
     assertThat(main.inspector().facts()).extracting(f -> f.label() + ": " + f.value())
-        .contains("Size: 320 × 240 px", "Flags: several objects");
+        .contains("Size: 320 × 240 px", "Findings: several objects");
     assertThat(main.inspector().maskProperty().get()).isNotNull();
     assertThat(main.inspector().swatches()).hasSize(2).allMatch(s -> s.matches("#[0-9a-f]{6}"));
     main.session().selectedProperty().set(row("broken.jpg"));

@@ -71,6 +71,15 @@ public final class InspectorView extends ScrollPane {
     vm.maskProperty().addListener((o, a, m) -> silhouette.setImage(m == null ? null
         : MaskImages.overlay(m, Color.web("#0e8fa3"))));
 
+    Label uncertain = new Label();
+    uncertain.setId("uncertain-note");
+    uncertain.getStyleClass().add("uncertain-note");
+    uncertain.setWrapText(true);
+    uncertain.setMaxWidth(Double.MAX_VALUE);
+    uncertain.textProperty().bind(vm.uncertainProperty());
+    uncertain.visibleProperty().bind(vm.uncertainProperty().isNotEmpty());
+    uncertain.managedProperty().bind(uncertain.visibleProperty());
+
     ToggleButton overlay = new ToggleButton("Silhouette");
     overlay.setId("overlay-toggle");
     overlay.setTooltip(new Tooltip("Show the detected object over the image (Space)"));
@@ -80,7 +89,7 @@ public final class InspectorView extends ScrollPane {
     Button start = button("Use as start", "use-start", "S", vm::useAsStart);
     Button end = button("Use as end", "use-end", "E", vm::useAsEnd);
     Button partners = button("Find partners", "find-partners", "P", vm::findPartners);
-    Button look = button("Similar look", "similar-look", "Ctrl+F", () -> vm.findSimilar(SimilarityMode.APPEARANCE));
+    Button look = button("Similar appearance", "similar-look", "Ctrl+F", () -> vm.findSimilar(SimilarityMode.APPEARANCE));
     Button shape = button("Similar shape", "similar-shape", "Ctrl+Shift+F",
         () -> vm.findSimilar(SimilarityMode.SHAPE));
     FlowPane actions = new FlowPane(6, 6, overlay, start, end, partners, look, shape);
@@ -98,7 +107,7 @@ public final class InspectorView extends ScrollPane {
     vm.facts().addListener((ListChangeListener<Fact>) c -> fillFacts());
     vm.swatches().addListener((ListChangeListener<String>) c -> fillSwatches());
 
-    VBox box = new VBox(10, heading, title, stage, actions, endpoints, MessageLine.error(vm.messageProperty()),
+    VBox box = new VBox(10, heading, title, stage, uncertain, actions, endpoints, MessageLine.error(vm.messageProperty()),
         facts, swatches);
     box.setPadding(new Insets(12));
     box.setAlignment(Pos.TOP_LEFT);

@@ -15,8 +15,8 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.morphscout.app.gui.Messages;
 import org.morphscout.app.gui.Session;
-import org.morphscout.app.gui.service.CatalogFlags;
-import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.CatalogFindings;
+import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
@@ -25,6 +25,7 @@ import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.silhouette.Mask;
+import org.morphscout.indexer.silhouette.Silhouette;
 
 /** The selected image's details and the actions on it. Follows the session's selection. */
 public final class InspectorViewModel {
@@ -41,6 +42,7 @@ public final class InspectorViewModel {
   private final ObservableList<Fact> facts = FXCollections.observableArrayList();
   private final ObservableList<String> swatches = FXCollections.observableArrayList();
   private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
+  private final ReadOnlyStringWrapper uncertain = new ReadOnlyStringWrapper(this, "uncertain", "");
 
   public InspectorViewModel(Session session, TaskRunner runner) {
     this.session = session;
@@ -56,6 +58,7 @@ public final class InspectorViewModel {
     }
     image.set(row);
     mask.set(null);
+    uncertain.set("");
     thumbnail.set(null);
     facts.clear();
     swatches.clear();
@@ -79,6 +82,7 @@ public final class InspectorViewModel {
           d.failure().ifPresent(reason -> all.add(new Fact("Failed", reason)));
           d.analysis().ifPresent(a -> {
             mask.set(a.silhouette().mask());
+            uncertain.set(uncertainNote(a.silhouette()));
             all.addAll(analysisFacts(a));
             for (ColourStats.DominantColour c : a.colour().dominant()) {
               swatches.add(LabColours.hex(c.lab()));
@@ -89,6 +93,12 @@ public final class InspectorViewModel {
           }
           facts.setAll(all);
         }, e -> message.set(Messages.of(e)));
+  }
+
+  /** The inspector's marker for a doubtful silhouette ({@link Silhouette#uncertain()}), or "" when it is sound. */
+  static String uncertainNote(Silhouette s) {
+    return s.uncertain() ? String.format(Locale.ROOT, "Uncertain silhouette: confidence %.2f (below %.2f), so its shape "
+        + "figures may be wrong", s.confidence(), Silhouette.UNCERTAIN_BELOW) : "";
   }
 
   static List<Fact> basicFacts(ImageRow row) {
@@ -105,8 +115,8 @@ public final class InspectorViewModel {
   static List<Fact> analysisFacts(ImageAnalysis a) {
     List<Fact> f = new ArrayList<>();
     var s = a.silhouette();
-    List<String> flags = CatalogFlags.of(s).stream().map(ImageFlag::label).toList();
-    f.add(new Fact("Flags", flags.isEmpty() ? "none" : String.join(", ", flags)));
+    List<String> findings = CatalogFindings.of(s).stream().map(ImageFinding::label).toList();
+    f.add(new Fact("Findings", findings.isEmpty() ? "none" : String.join(", ", findings)));
     f.add(new Fact("Silhouette", String.format(Locale.ROOT, "%.0f%% of the frame, confidence %.2f, %d object%s (%s)",
         s.coverage() * 100, s.confidence(), s.components(), s.components() == 1 ? "" : "s", s.source())));
     f.add(new Fact("Shape", String.format(Locale.ROOT, "aspect %.2f, centroid (%.2f, %.2f), axis %.0f°",
@@ -205,6 +215,11 @@ public final class InspectorViewModel {
   /** Dominant object colours as {@code #rrggbb}, most weighty first. */
   public ObservableList<String> swatches() {
     return swatches;
+  }
+
+  /** Says the silhouette is uncertain, or "" when it is not (or nothing is selected). */
+  public ReadOnlyStringProperty uncertainProperty() {
+    return uncertain.getReadOnlyProperty();
   }
 
   public ReadOnlyStringProperty messageProperty() {

@@ -33,7 +33,7 @@ import org.morphscout.app.gui.common.ImageDrag;
 import org.morphscout.app.gui.common.MessageLine;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
-import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStore;
@@ -65,7 +65,7 @@ public final class LibraryView extends BorderPane {
     grid.setItems(rows);
     grid.setFixedCellSize(TILE + 34);
     grid.setCellFactory(lv -> new RowCell());
-    grid.setPlaceholder(new Label("No images to show. Open a catalog (File ▸ Open catalog…) or loosen the filters."));
+    grid.setPlaceholder(new Label("No images to show. Open a catalog (Catalog ▸ Open a catalog folder…) or loosen the filters."));
     grid.widthProperty().addListener((o, a, w) -> relayout());
     vm.visible().addListener((ListChangeListener<ImageRow>) c -> relayout());
     session.selection().addListener((ListChangeListener<ImageRow>) c -> grid.refresh());
@@ -125,13 +125,13 @@ public final class LibraryView extends BorderPane {
     folder.textProperty().bindBidirectional(vm.folderProperty());
     folder.setPrefColumnCount(12);
 
-    HBox flags = new HBox(8);
-    flags.setAlignment(Pos.CENTER_LEFT);
-    for (ImageFlag f : ImageFlag.values()) {
+    HBox findingBoxes = new HBox(8);
+    findingBoxes.setAlignment(Pos.CENTER_LEFT);
+    for (ImageFinding f : ImageFinding.values()) {
       CheckBox box = new CheckBox(f.label());
-      box.setId("flag-" + f.name().toLowerCase(java.util.Locale.ROOT));
-      box.selectedProperty().bindBidirectional(vm.flagProperty(f));
-      flags.getChildren().add(box);
+      box.setId("finding-" + f.name().toLowerCase(java.util.Locale.ROOT));
+      box.selectedProperty().bindBidirectional(vm.findingProperty(f));
+      findingBoxes.getChildren().add(box);
     }
 
     ComboBox<SortKey> sort = new ComboBox<>(FXCollections.observableArrayList(SortKey.values()));
@@ -162,10 +162,10 @@ public final class LibraryView extends BorderPane {
     }
     HBox top = new HBox(10, root, folder, new Label("Sort by"), sort, byFile, spacer, busy, summary);
     top.setAlignment(Pos.CENTER_LEFT);
-    Label only = new Label("Show only:");
+    Label only = new Label("Show only findings:");
     only.getStyleClass().add("summary");
-    flags.getChildren().add(0, only);
-    VBox bar = new VBox(8, top, flags);
+    findingBoxes.getChildren().add(0, only);
+    VBox bar = new VBox(8, top, findingBoxes);
     bar.getStyleClass().add("toolbar");
     for (javafx.scene.Node n : List.of(summary, sort, only, byFile)) {
       ((Region) n).setMinWidth(Region.USE_PREF_SIZE);
@@ -277,7 +277,7 @@ public final class LibraryView extends BorderPane {
           t.show(null, null, null, thumbs);
           continue;
         }
-        t.show(r, caption(r), badge(r), thumbs);
+        t.show(r, caption(r), note(r), thumbs);
         t.setSelected(selected.contains(r.id()));
       }
       setGraphic(box);
@@ -289,12 +289,8 @@ public final class LibraryView extends BorderPane {
       return Double.isNaN(d) ? name : String.format(java.util.Locale.ROOT, "%.3f · %s", d, name);
     }
 
-    private String badge(ImageRow r) {
-      Set<ImageFlag> f = vm.flags(r.id());
-      if (f.contains(ImageFlag.FAILED)) {
-        return "failed";
-      }
-      return f.isEmpty() ? null : "!";
+    private Tile.Note note(ImageRow r) {
+      return LibraryView.note(vm.findings(r.id()));
     }
 
     private void wire(Tile t) {
@@ -318,6 +314,26 @@ public final class LibraryView extends BorderPane {
         }
       });
     }
+  }
+
+  /**
+   * A tile's note: the most important finding (the enum's order) in a word or two, every finding in the tooltip;
+   * null when nothing was found.
+   */
+  static Tile.Note note(Set<ImageFinding> findings) {
+    if (findings.isEmpty()) {
+      return null;
+    }
+    ImageFinding first = findings.stream().min(java.util.Comparator.naturalOrder()).orElseThrow();
+    String kind = switch (first) {
+      case MISSING -> "missing";
+      case FAILED -> "failed";
+      case UNCERTAIN -> "uncertain";
+      default -> "other";
+    };
+    String text = first == ImageFinding.UNCERTAIN ? "uncertain" : first.label();
+    String detail = "Found: " + String.join(", ", findings.stream().sorted().map(ImageFinding::label).toList());
+    return new Tile.Note(findings.size() > 1 ? text + " +" + (findings.size() - 1) : text, kind, detail);
   }
 
   /** For keyboard focus from the main window. */

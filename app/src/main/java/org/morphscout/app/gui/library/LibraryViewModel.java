@@ -22,8 +22,8 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.morphscout.app.gui.Messages;
 import org.morphscout.app.gui.Session;
-import org.morphscout.app.gui.service.CatalogFlags;
-import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.CatalogFindings;
+import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.service.Match;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.TaskHandle;
@@ -44,7 +44,7 @@ public final class LibraryViewModel {
   private final Session session;
   private final TaskRunner runner;
   private List<ImageRow> all = List.of();
-  private Map<Long, Set<ImageFlag>> flags = Map.of();
+  private Map<Long, Set<ImageFinding>> findings = Map.of();
   private List<Match> similar = List.of();
   private Map<Long, Double> distances = Map.of();
   private TaskHandle pending;
@@ -53,7 +53,7 @@ public final class LibraryViewModel {
   private final ObservableList<ImageStore.Root> roots = FXCollections.observableArrayList();
   private final ObjectProperty<ImageStore.Root> root = new SimpleObjectProperty<>(this, "root");
   private final StringProperty folder = new SimpleStringProperty(this, "folder", "");
-  private final Map<ImageFlag, BooleanProperty> flagFilters = new EnumMap<>(ImageFlag.class);
+  private final Map<ImageFinding, BooleanProperty> findingFilters = new EnumMap<>(ImageFinding.class);
   private final ObjectProperty<SortKey> sort = new SimpleObjectProperty<>(this, "sort", SortKey.NAME);
   private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "No catalog open");
   private final ReadOnlyStringWrapper searchTitle = new ReadOnlyStringWrapper(this, "searchTitle", "");
@@ -64,10 +64,10 @@ public final class LibraryViewModel {
   public LibraryViewModel(Session session, TaskRunner runner) {
     this.session = session;
     this.runner = runner;
-    for (ImageFlag f : ImageFlag.values()) {
+    for (ImageFinding f : ImageFinding.values()) {
       BooleanProperty p = new SimpleBooleanProperty(this, f.name());
       p.addListener((o, a, b) -> apply());
-      flagFilters.put(f, p);
+      findingFilters.put(f, p);
     }
     root.addListener((o, a, b) -> apply());
     folder.addListener((o, a, b) -> apply());
@@ -80,15 +80,15 @@ public final class LibraryViewModel {
     });
   }
 
-  private record Loaded(List<ImageRow> rows, List<ImageStore.Root> roots, Map<Long, Set<ImageFlag>> flags) {}
+  private record Loaded(List<ImageRow> rows, List<ImageStore.Root> roots, Map<Long, Set<ImageFinding>> findings) {}
 
-  /** Reloads every row and flag from the catalog (after opening it, or after indexing). */
+  /** Reloads every row and finding from the catalog (after opening it, or after indexing). */
   public void reload() {
     Library lib = session.library();
     clearSimilarState();
     if (lib == null) {
       all = List.of();
-      flags = Map.of();
+      findings = Map.of();
       roots.clear();
       apply();
       summary.set("No catalog open");
@@ -99,10 +99,10 @@ public final class LibraryViewModel {
     summary.set("Loading images…");
     runner.submit("load images", token -> {
       List<ImageRow> rows = lib.images().all();
-      return new Loaded(rows, lib.images().roots(), CatalogFlags.load(lib, rows));
+      return new Loaded(rows, lib.images().roots(), CatalogFindings.load(lib, rows));
     }, loaded -> {
       busy.set(false);
-      show(loaded.rows(), loaded.roots(), loaded.flags());
+      show(loaded.rows(), loaded.roots(), loaded.findings());
     }, e -> {
       busy.set(false);
       summary.set("");
@@ -111,9 +111,9 @@ public final class LibraryViewModel {
   }
 
   /** Installs loaded rows (package-private so the grid's scale test can feed 100,000 rows without a catalog). */
-  void show(List<ImageRow> rows, List<ImageStore.Root> rootList, Map<Long, Set<ImageFlag>> flagMap) {
+  void show(List<ImageRow> rows, List<ImageStore.Root> rootList, Map<Long, Set<ImageFinding>> findingMap) {
     all = List.copyOf(rows);
-    flags = flagMap;
+    findings = findingMap;
     session.rows(all);
     roots.setAll(rootList);
     if (root.get() != null && !roots.contains(root.get())) {
@@ -214,10 +214,10 @@ public final class LibraryViewModel {
     }
     ImageStore.Root r = root.get();
     String f = folder.get() == null ? "" : folder.get().trim().toLowerCase(Locale.ROOT);
-    List<ImageFlag> wanted = new ArrayList<>();
-    flagFilters.forEach((flag, p) -> {
+    List<ImageFinding> wanted = new ArrayList<>();
+    findingFilters.forEach((finding, p) -> {
       if (p.get()) {
-        wanted.add(flag);
+        wanted.add(finding);
       }
     });
     List<ImageRow> out = new ArrayList<>(source.size());
@@ -229,7 +229,7 @@ public final class LibraryViewModel {
         continue;
       }
       if (!wanted.isEmpty()) {
-        Set<ImageFlag> has = flags.getOrDefault(row.id(), Set.of());
+        Set<ImageFinding> has = findings.getOrDefault(row.id(), Set.of());
         if (wanted.stream().noneMatch(has::contains)) {
           continue;
         }
@@ -242,9 +242,9 @@ public final class LibraryViewModel {
     summary.set(String.format(Locale.ROOT, "%,d of %,d images", out.size(), all.size()));
   }
 
-  /** The flags of an image (empty when none). */
-  public Set<ImageFlag> flags(long id) {
-    return flags.getOrDefault(id, Set.of());
+  /** The findings of an image (empty when none). */
+  public Set<ImageFinding> findings(long id) {
+    return findings.getOrDefault(id, Set.of());
   }
 
   /** The distance to the search image while a similarity search is shown, else NaN. */
@@ -275,9 +275,9 @@ public final class LibraryViewModel {
     return folder;
   }
 
-  /** When any flag is on, only images with at least one of the chosen flags are shown. */
-  public BooleanProperty flagProperty(ImageFlag flag) {
-    return flagFilters.get(flag);
+  /** When any finding is on, only images with at least one of the chosen findings are shown. */
+  public BooleanProperty findingProperty(ImageFinding finding) {
+    return findingFilters.get(finding);
   }
 
   public ObjectProperty<SortKey> sortProperty() {

@@ -20,7 +20,7 @@ import org.morphscout.app.gui.HeadlessFx;
 import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
-import org.morphscout.app.gui.service.ImageFlag;
+import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.task.DirectTaskRunner;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStatus;
@@ -59,16 +59,16 @@ class LibraryGridFxTest {
   @Test
   void hundredThousandImagesMakeOnlyAScreenfulOfTiles(FxRobot robot) throws Exception {
     List<ImageRow> rows = new ArrayList<>(N);
-    Map<Long, Set<ImageFlag>> flags = new HashMap<>();
+    Map<Long, Set<ImageFinding>> findings = new HashMap<>();
     for (int i = 0; i < N; i++) {
       String folder = "/photos/set-" + (i % 50);
       rows.add(new ImageRow(i, 1, folder + "/img-" + i + ".jpg", 1000 + i, 0, "h" + i, 640, 480, 1, "jpeg",
           ImageStatus.READY));
       if (i % 97 == 0) {
-        flags.put((long) i, EnumSet.of(ImageFlag.CUT_OFF));
+        findings.put((long) i, EnumSet.of(ImageFinding.CUT_OFF));
       }
     }
-    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), flags)).get();
+    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), findings)).get();
     WaitForAsyncUtils.waitForFxEvents();
     assertThat(vm.visible()).hasSize(N);
     // a virtualised list creates cells for the visible rows only: a screenful of tiles, not 100,000
@@ -82,10 +82,39 @@ class LibraryGridFxTest {
     assertThat(robot.lookup(".tile").queryAllAs(Tile.class)).anyMatch(t -> t.shownId() == N - 1);
     assertThat(robot.lookup(".tile").queryAll().size()).isLessThanOrEqualTo(tiles + 40);
 
-    WaitForAsyncUtils.asyncFx(() -> vm.flagProperty(ImageFlag.CUT_OFF).set(true)).get();
+    WaitForAsyncUtils.asyncFx(() -> vm.findingProperty(ImageFinding.CUT_OFF).set(true)).get();
     WaitForAsyncUtils.waitForFxEvents();
-    // every 97th row was flagged above: ids 0, 97, ..., 99,910
+    // every 97th row has a finding above: ids 0, 97, ..., 99,910
     assertThat(vm.visible()).hasSize((N + 96) / 97);
     // (How long showing and filtering take is measured by the browser benchmark, not asserted here.)
+  }
+
+  @Test
+  void findingsShowAsAStripOnTheTileAndAMissingFileIsDimmed(FxRobot robot) throws Exception {
+    List<ImageRow> rows = List.of(
+        new ImageRow(1, 1, "/photos/gone.jpg", 1000, 0, "h1", 640, 480, 1, "jpeg", ImageStatus.MISSING),
+        new ImageRow(2, 1, "/photos/doubtful.jpg", 1000, 0, "h2", 640, 480, 1, "jpeg", ImageStatus.READY),
+        new ImageRow(3, 1, "/photos/fine.jpg", 1000, 0, "h3", 640, 480, 1, "jpeg", ImageStatus.READY));
+    Map<Long, Set<ImageFinding>> findings = Map.of(1L, EnumSet.of(ImageFinding.MISSING), 2L,
+        EnumSet.of(ImageFinding.UNCERTAIN, ImageFinding.CUT_OFF));
+    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), findings)).get();
+    WaitForAsyncUtils.waitForFxEvents();
+    Map<Long, Tile> byId = new HashMap<>();
+    robot.lookup(".tile").queryAllAs(Tile.class).forEach(t -> byId.put(t.shownId(), t));
+    Tile gone = byId.get(1L);
+    assertThat(gone.note().isVisible()).isTrue();
+    assertThat(gone.note().getText()).isEqualTo("missing");
+    assertThat(gone.note().getStyleClass()).contains("tile-note-missing");
+    assertThat(((javafx.scene.layout.StackPane) gone.getChildren().get(0)).getChildren().get(0).getOpacity())
+        .as("a missing file's thumbnail is dimmed").isLessThan(0.5);
+    Tile doubtful = byId.get(2L);
+    assertThat(doubtful.note().getText()).isEqualTo("uncertain +1");
+    assertThat(doubtful.note().getStyleClass()).contains("tile-note-uncertain");
+    assertThat(doubtful.note().getTooltip().getText()).isEqualTo("Found: uncertain silhouette, cut off");
+    assertThat(byId.get(3L).note().isVisible()).isFalse();
+    // the filter box for each finding is there, the missing one included
+    assertThat(robot.lookup("#finding-missing").tryQuery()).isPresent();
+    WaitForAsyncUtils.asyncFx(() -> vm.findingProperty(ImageFinding.UNCERTAIN).set(true)).get();
+    assertThat(vm.visible()).extracting(ImageRow::id).containsExactly(2L);
   }
 }
