@@ -53,6 +53,7 @@ public final class PairStoreUpdater {
   private final VectorIndex index;
   private final AnalysisCache cache;
   private final int threads;
+  private final int batch;
   private final PairMeasurer measurer = new PairMeasurer(Ciede2000::difference, new WarpEstimator());
   private final PairScorer bounds = new PairScorer(ScoreConfig.DEFAULTS, Ciede2000::difference, new WarpEstimator());
   private final NearDuplicates duplicates = new NearDuplicates(NearDuplicateConfig.DEFAULTS, Ciede2000::difference);
@@ -68,13 +69,19 @@ public final class PairStoreUpdater {
   public record Result(int chosen, int measured, int bounded, int failed) {}
 
   public PairStoreUpdater(Library library, VectorIndex index, AnalysisCache cache, int threads) {
-    if (threads < 1) {
-      throw new IllegalArgumentException("threads must be at least 1, got " + threads);
+    this(library, index, cache, threads, CHOOSER_BATCH);
+  }
+
+  /** @param batch images whose choices or pairs are committed together (small in tests, to interrupt between) */
+  PairStoreUpdater(Library library, VectorIndex index, AnalysisCache cache, int threads, int batch) {
+    if (threads < 1 || batch < 1) {
+      throw new IllegalArgumentException("threads and batch must be at least 1, got " + threads + ", " + batch);
     }
     this.library = library;
     this.index = index;
     this.cache = cache;
     this.threads = threads;
+    this.batch = batch;
   }
 
   /**
@@ -102,10 +109,10 @@ public final class PairStoreUpdater {
     try {
       progress.phase("choosing pair candidates", toChoose.size());
       long done = 0;
-      for (List<Long> batch : batches(toChoose, CHOOSER_BATCH)) {
+      for (List<Long> ids : batches(toChoose, batch)) {
         cancel.throwIfCancelled();
         List<Callable<Optional<Choice>>> work = new ArrayList<>();
-        for (long id : batch) {
+        for (long id : ids) {
           work.add(() -> choose(id));
         }
         List<Choice> choices = new ArrayList<>();
@@ -118,15 +125,15 @@ public final class PairStoreUpdater {
           }
           return null;
         });
-        done += batch.size();
+        done += ids.size();
         progress.progressed(done, "");
       }
       int[] counts = new int[3];
       progress.phase("measuring pairs", ready.size());
       done = 0;
-      for (List<Long> batch : batches(ready, CHOOSER_BATCH)) {
+      for (List<Long> ids : batches(ready, batch)) {
         cancel.throwIfCancelled();
-        List<PairStore.Choice> pairs = store.unmeasuredOf(batch, PairMeasurer.VERSION);
+        List<PairStore.Choice> pairs = store.unmeasuredOf(ids, PairMeasurer.VERSION);
         List<Callable<Optional<PairStore.Row>>> work = new ArrayList<>();
         for (PairStore.Choice p : pairs) {
           work.add(() -> measure(p.chooser(), p.other(), cancel));
@@ -144,7 +151,7 @@ public final class PairStoreUpdater {
           store.putMeasures(rows);
           return null;
         });
-        done += batch.size();
+        done += ids.size();
         progress.progressed(done, "");
       }
       if (!toChoose.isEmpty()) {

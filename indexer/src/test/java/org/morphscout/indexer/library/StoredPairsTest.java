@@ -1,6 +1,7 @@
 package org.morphscout.indexer.library;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.awt.Color;
 import java.awt.Graphics2D;
@@ -194,6 +195,58 @@ class StoredPairsTest {
       before.forEach((k, v) -> assertThat(after.get(k)).as("re-measured %s", k).isEqualTo(v));
       assertThat(c.pairs.bestPairs(PairQuery.DEFAULTS, ProgressListener.NONE, CancellationToken.none()).notes())
           .isEmpty();
+    }
+  }
+
+  @Test
+  void anInterruptedUpgradeKeepsItsFinishedBatchesAndTheNextRunCompletesIt() throws IOException {
+    Path work = tmp.resolve("upgrade");
+    Path lib = work.resolve("library");
+    PlantedPairs pp = TestFamilies.plantedPairs(SEED + 3);
+    for (int i = 0; i < pp.images().size(); i++) {
+      RealCatalog.png(lib.resolve(i + ".png"), pp.images().get(i).image());
+    }
+    try (RealCatalog c = RealCatalog.index(work.resolve("catalog"), lib, 8)) {
+      long all = c.library.pairs().counts(PairMeasurer.VERSION).pairs();
+      // A catalog from before stored pairs existed: none stored. Its next index run pairs it, in small batches.
+      c.library.pairs().clear();
+      String model = c.context.modelId();
+      AnalysisCache cache = new AnalysisCache(c.library, 1000);
+      CancellationToken cancel = new CancellationToken();
+      ProgressListener stopMidway = new ProgressListener() {
+        private String phase = "";
+
+        @Override
+        public void phase(String name, long total) {
+          phase = name;
+        }
+
+        @Override
+        public void progressed(long done, String item) {
+          if (phase.equals("measuring pairs") && done >= 4) {
+            cancel.cancel(); // what Ctrl-C does
+          }
+        }
+      };
+      try (var index = org.morphscout.indexer.vector.LuceneVectorIndex.open(c.library.catalog().vectorDir(),
+          org.morphscout.indexer.vector.LuceneIndexOptions.defaults())) {
+        assertThatThrownBy(() -> new PairStoreUpdater(c.library, index, cache, 2, 2).update(model, stopMidway, cancel))
+            .isInstanceOf(CancellationToken.CancelledException.class);
+        long kept = c.library.pairs().counts(PairMeasurer.VERSION).pairs();
+        assertThat(kept).as("pairs of the finished batches").isPositive().isLessThan(all);
+        assertThat(StoredPairCounts.of(c.library).complete()).isFalse();
+        PairSearchResult meanwhile = c.pairs.bestPairs(PairQuery.DEFAULTS, ProgressListener.NONE,
+            CancellationToken.none());
+        assertThat(meanwhile.notes()).singleElement().asString().contains("not complete");
+
+        PairStoreUpdater.Result rest = new PairStoreUpdater(c.library, index, cache, 2, 2)
+            .update(model, ProgressListener.NONE, CancellationToken.none());
+        assertThat(rest.chosen()).as("every image had chosen before the interruption").isZero();
+        assertThat(rest.measured() + rest.bounded()).as("only the pairs not stored yet are measured")
+            .isLessThanOrEqualTo((int) (all - kept));
+      }
+      assertThat(c.library.pairs().counts(PairMeasurer.VERSION).pairs()).isEqualTo(all);
+      assertThat(StoredPairCounts.of(c.library).complete()).isTrue();
     }
   }
 
