@@ -13,34 +13,40 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
-/** {@code morphscout decide A B approve|reject}: record a verdict on a pair. */
+/** {@code morphscout decide FIRST SECOND approve|reject}, or {@code --clear}: record or clear a decision on a pair. */
 @Command(
     name = "decide",
     mixinStandardHelpOptions = true,
-    header = "Record your verdict on a pair of catalog images (approve or reject, with a note).",
-    description = {"The verdict is kept with both pictures' content hashes: it survives renames and moves, and a",
-        "different picture put at an old path does not inherit it. Deciding again replaces the earlier verdict."})
+    header = "Record your decision on a pair of catalog images (approve or reject, with a note), or clear it.",
+    description = {"The decision is kept with both pictures' content hashes: it survives renames and moves, and a",
+        "different picture put at an old path does not inherit it. Deciding again replaces the earlier decision;",
+        "--clear removes it (the order of the two images does not matter); the browser's Clear decision does the",
+        "same."})
 final class DecideCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
 
-  @Parameters(index = "0", paramLabel = "<imageA>", description = "First image (a path in the catalog).")
-  String a;
+  @Parameters(index = "0", paramLabel = "<first>", description = "First image (a path in the catalog).")
+  String first;
 
-  @Parameters(index = "1", paramLabel = "<imageB>", description = "Second image.")
-  String b;
+  @Parameters(index = "1", paramLabel = "<second>", description = "Second image.")
+  String second;
 
-  @Parameters(index = "2", paramLabel = "approve|reject", description = "Your verdict.")
-  String verdict;
+  @Parameters(index = "2", arity = "0..1", paramLabel = "approve|reject",
+      description = "Your decision (leave it out with --clear).")
+  String decision;
 
-  @Option(names = "--note", paramLabel = "<text>", description = "A note kept with the verdict.")
+  @Option(names = "--clear", description = "Clear the decision on the pair instead of recording one.")
+  boolean clear;
+
+  @Option(names = "--note", paramLabel = "<text>", description = "A note kept with the decision.")
   String note;
 
   @Option(names = "--json", description = "Write JSON to stdout.")
   boolean json;
 
-  /** The verdict word as a usage error (exit 2) when it is neither approve(d) nor reject(ed). */
-  static Verdict verdict(CommandSpec spec, String what, String word) {
+  /** The decision word as a usage error (exit 2) when it is neither approve(d) nor reject(ed). */
+  static Verdict decision(CommandSpec spec, String what, String word) {
     try {
       return Verdict.parse(word);
     } catch (org.morphscout.indexer.MorphscoutException e) {
@@ -50,18 +56,36 @@ final class DecideCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    Verdict v = verdict(spec, "approve|reject", verdict);
+    if (clear && (decision != null || note != null)) {
+      throw OptionCheck.of(spec).fail("--clear takes no decision and no --note: decide FIRST SECOND --clear");
+    }
+    if (!clear && decision == null) {
+      throw OptionCheck.of(spec).fail("say approve or reject, or --clear to remove the decision");
+    }
+    Verdict v = clear ? null : decision(spec, "approve|reject", decision);
     try (Library library = Library.openExisting(root.catalogDir())) {
-      ImageRow ra = library.require(a);
-      ImageRow rb = library.require(b);
-      library.decisions().decide(ra.id(), rb.id(), v, note);
+      ImageRow ra = library.require(first);
+      ImageRow rb = library.require(second);
+      boolean hadOne = false;
+      if (clear) {
+        hadOne = library.decisions().clear(ra.id(), rb.id());
+      } else {
+        library.decisions().decide(ra.id(), rb.id(), v, note);
+      }
       if (json) {
         Map<String, Object> doc = new LinkedHashMap<>();
-        doc.put("a", ra.path());
-        doc.put("b", rb.path());
-        doc.put("verdict", v.word());
-        doc.put("note", note);
+        doc.put("first", ra.path());
+        doc.put("second", rb.path());
+        doc.put("decision", clear ? null : v.word());
+        if (clear) {
+          doc.put("cleared", hadOne);
+        } else {
+          doc.put("note", note);
+        }
         JsonOut.write(spec.commandLine().getOut(), doc);
+      } else if (clear) {
+        spec.commandLine().getOut().printf("%s: %s <-> %s%n", hadOne ? "cleared" : "no decision to clear",
+            Terminal.safe(ra.path()), Terminal.safe(rb.path()));
       } else {
         spec.commandLine().getOut().printf("%s: %s <-> %s%s%n", v.word(), Terminal.safe(ra.path()),
             Terminal.safe(rb.path()), note == null ? "" : "  (" + Terminal.safe(note) + ")");

@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.catalog.DecisionStore.Decision;
 import org.morphscout.indexer.catalog.DecisionStore.Verdict;
+import org.morphscout.indexer.library.DecisionTable;
 import org.morphscout.indexer.library.Library;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -16,12 +17,14 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
-/** {@code morphscout decisions}: list the verdicts kept in the catalog. */
+/** {@code morphscout decisions}: list the decisions kept in the catalog. */
 @Command(
     name = "decisions",
     mixinStandardHelpOptions = true,
-    header = "List your verdicts on pairs (newest first), as text, JSON or CSV.",
-    description = "The same verdicts the desktop browser shows and edits.")
+    header = "List your decisions on pairs (newest first), as text, JSON or CSV.",
+    description = {"The same decisions the desktop browser shows and edits. CSV columns: first, second, decision, note,",
+        "decided_at (an ISO-8601 instant, UTC); the browser's export of approved pairs writes exactly",
+        "decisions --only approved --csv (or --json)."})
 final class DecisionsCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
@@ -29,42 +32,24 @@ final class DecisionsCommand implements Callable<Integer> {
   @ArgGroup(exclusive = true)
   OutputFormat format = new OutputFormat();
 
-  @Option(names = "--only", paramLabel = "approved|rejected", description = "Only this verdict.")
+  @Option(names = "--only", paramLabel = "approved|rejected", description = "Only this decision.")
   String only;
 
   @Override
   public Integer call() throws Exception {
-    Verdict wanted = only == null ? null : DecideCommand.verdict(spec, "--only", only);
+    Verdict wanted = only == null ? null : DecideCommand.decision(spec, "--only", only);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openForReading(root.catalogDir())) {
-      List<Decision> decisions = new ArrayList<>();
-      for (Decision d : library.decisions().all()) {
-        if (wanted == null || d.verdict() == wanted) {
-          decisions.add(d);
-        }
-      }
-      String none = "no decisions yet (morphscout decide A B approve|reject)";
+      List<Decision> decisions = DecisionTable.only(library.decisions().all(), wanted);
+      String none = DecisionTable.NONE;
       if (decisions.isEmpty() && (format.json || format.csv)) {
         spec.commandLine().getErr().println(none); // no silent nothing, also for scripts
       }
       if (format.json) {
-        List<Map<String, Object>> rows = new ArrayList<>();
-        for (Decision d : decisions) {
-          Map<String, Object> row = new LinkedHashMap<>();
-          row.put("a", d.pathA());
-          row.put("b", d.pathB());
-          row.put("verdict", d.verdict().word());
-          row.put("note", d.note());
-          row.put("decidedAt", d.decidedAt());
-          rows.add(row);
-        }
-        JsonOut.write(out, Map.of("decisions", rows, "notes", decisions.isEmpty() ? List.of(none) : List.of()));
+        JsonOut.write(out, DecisionTable.json(decisions, decisions.isEmpty() ? List.of(none) : List.of()));
       } else if (format.csv) {
-        try (CsvOut csv = new CsvOut(out, "a", "b", "verdict", "note", "decided_at")) {
-          for (Decision d : decisions) {
-            csv.row(d.pathA(), d.pathB(), d.verdict().word(), d.note(), d.decidedAt());
-          }
-        }
+        DecisionTable.csv(out, decisions);
+        out.flush();
       } else if (decisions.isEmpty()) {
         out.println(none);
       } else {

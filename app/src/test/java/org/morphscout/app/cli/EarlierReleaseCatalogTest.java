@@ -66,7 +66,9 @@ class EarlierReleaseCatalogTest {
       });
       assertThat(paths).as("two paths in %s", d).hasSize(2);
       paths.sort(null);
-      out.add(paths.get(0) + " | " + paths.get(1) + " | " + d.get("verdict").asText() + " | " + d.get("note").asText());
+      // the earlier release named the decision "verdict"; it is "decision" now
+      JsonNode decision = d.has("decision") ? d.get("decision") : d.get("verdict");
+      out.add(paths.get(0) + " | " + paths.get(1) + " | " + decision.asText() + " | " + d.get("note").asText());
     }
     return out;
   }

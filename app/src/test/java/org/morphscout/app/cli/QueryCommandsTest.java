@@ -224,32 +224,49 @@ class QueryCommandsTest {
     String b = Cli.abs(lib.distractors.get(1));
     cli.run("decide", a, b, "approve", "--note", "good opener").succeeds();
     JsonNode mine = decisionOn(a, b);
-    assertThat(mine.get("verdict").asText()).isEqualTo("approved");
+    assertThat(mine.get("decision").asText()).isEqualTo("approved");
     assertThat(mine.get("note").asText()).isEqualTo("good opener");
 
     Cli.Run csv = cli.run("decisions", "--csv").succeeds();
-    assertThat(csv.csvHeader()).startsWith("a", "b", "verdict", "note");
+    assertThat(csv.csvHeader()).containsExactly("first", "second", "decision", "note", "decided_at");
     assertThat(csv.csv()).anySatisfy(r -> {
-      assertThat(Set.of(r.get("a"), r.get("b"))).isEqualTo(Set.of(a, b)); // an unordered pair
+      assertThat(Set.of(r.get("first"), r.get("second"))).isEqualTo(Set.of(a, b)); // an unordered pair
       assertThat(r.get("note")).isEqualTo("good opener");
     });
 
     cli.run("decide", b, a, "reject", "--note", "too far apart").succeeds();
     JsonNode replaced = decisionOn(a, b);
-    assertThat(replaced.get("verdict").asText()).isEqualTo("rejected");
+    assertThat(replaced.get("decision").asText()).isEqualTo("rejected");
     assertThat(replaced.get("note").asText()).isEqualTo("too far apart");
 
     Cli.Run unknown = cli.run("decide", a, b, "maybe");
     unknown.failsCleanly(ExitCodes.USAGE);
     assertThat(unknown.err()).contains("maybe", "approve", "reject");
-    assertThat(decisionOn(a, b).get("verdict").asText()).isEqualTo("rejected");
+    assertThat(decisionOn(a, b).get("decision").asText()).isEqualTo("rejected");
+  }
+
+  @Test
+  void decideClearRemovesTheDecisionInEitherOrder() {
+    String a = Cli.abs(lib.distractors.get(2));
+    String b = Cli.abs(lib.distractors.get(3));
+    cli.run("decide", a, b, "approve").succeeds();
+    assertThat(decisionOn(a, b).get("decision").asText()).isEqualTo("approved");
+    // both orders name the same unordered pair
+    Cli.Run cleared = cli.run("decide", b, a, "--clear", "--json").succeeds();
+    assertThat(cleared.json().get("cleared").asBoolean()).isTrue();
+    assertThat(cleared.json().get("decision").isNull()).isTrue();
+    assertThat(cli.run("decisions", "--json").succeeds().json().get("decisions"))
+        .noneMatch(d -> Set.of(d.get("first").asText(), d.get("second").asText()).equals(Set.of(a, b)));
+    assertThat(cli.run("decide", a, b, "--clear").succeeds().out()).startsWith("no decision to clear");
+    cli.run("decide", a, b, "approve", "--clear").failsCleanly(ExitCodes.USAGE);
+    cli.run("decide", a, b).failsCleanly(ExitCodes.USAGE);
   }
 
   /** The one decision on {a, b} in either order, failing when there is not exactly one. */
   private static JsonNode decisionOn(String a, String b) {
     List<JsonNode> found = new ArrayList<>();
     for (JsonNode d : cli.run("decisions", "--json").succeeds().json().get("decisions")) {
-      Set<String> ends = Set.of(d.get("a").asText(), d.get("b").asText());
+      Set<String> ends = Set.of(d.get("first").asText(), d.get("second").asText());
       if (ends.equals(Set.of(a, b))) {
         found.add(d);
       }

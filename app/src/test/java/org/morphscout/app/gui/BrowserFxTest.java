@@ -123,7 +123,7 @@ class BrowserFxTest {
       DecisionStore.Decision d = lib.decisions().find(chosen.suggestion().a(), chosen.suggestion().b())
           .orElseThrow();
       assertThat(d.verdict()).isEqualTo(DecisionStore.Verdict.APPROVED);
-      lib.decisions().forget(d.imageA(), d.imageB());
+      lib.decisions().clear(d.imageA(), d.imageB());
     }
   }
 

@@ -7,6 +7,7 @@ import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Set;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.BeforeAll;
@@ -177,22 +178,28 @@ class ViewModelsTest {
     assertThat(out.toString()).contains("approved").contains(Path.of(main.session().row(first.suggestion().a())
         .orElseThrow().path()).getFileName().toString());
 
+    // the browser's export is exactly what decisions --only approved --csv (--json) prints, same library writer
     Path csv = tmp.resolve("out/approved.csv");
     pairs.exportApproved(csv);
+    assertThat(Files.readString(csv)).isEqualTo(cliOut("decisions", "--only", "approved", "--csv"));
     List<CSVRecord> records = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
         .parse(Files.newBufferedReader(csv)).getRecords();
     assertThat(records).hasSize(1);
     assertThat(records.get(0).get("note")).isEqualTo("lovely match");
-    assertThat(Long.parseLong(records.get(0).get("a_id"))).isEqualTo(first.suggestion().a());
+    assertThat(records.get(0).get("decision")).isEqualTo("approved");
+    assertThat(Set.of(records.get(0).get("first"), records.get(0).get("second"))).isEqualTo(Set.of(
+        main.session().row(first.suggestion().a()).orElseThrow().path(),
+        main.session().row(first.suggestion().b()).orElseThrow().path()));
     Path json = tmp.resolve("approved.json");
     pairs.exportApproved(json);
-    var tree = new com.fasterxml.jackson.databind.ObjectMapper().readTree(json.toFile());
-    assertThat(tree.size()).isEqualTo(1);
-    assertThat(tree.get(0).get("b_id").asLong()).isEqualTo(first.suggestion().b());
+    var mapper = new com.fasterxml.jackson.databind.ObjectMapper();
+    assertThat(mapper.readTree(json.toFile())).isEqualTo(mapper.readTree(cliOut("decisions", "--only", "approved",
+        "--json")));
+    assertThat(mapper.readTree(json.toFile()).get("decisions")).hasSize(1);
     // leave the shared catalog as found
     try (var lib = org.morphscout.indexer.library.Library.openExisting(catalog)) {
       for (DecisionStore.Decision d : lib.decisions().all()) {
-        lib.decisions().forget(d.imageA(), d.imageB());
+        lib.decisions().clear(d.imageA(), d.imageB());
       }
     }
   }
@@ -226,5 +233,15 @@ class ViewModelsTest {
     assertThat(idx.progressProperty().get()).isEqualTo(1.0);
     idx.add(tmp.resolve("not-there"));
     assertThat(idx.messageProperty().get()).endsWith("is not a folder.");
+  }
+
+  private String cliOut(String... args) {
+    StringWriter out = new StringWriter();
+    String[] all = new String[args.length + 2];
+    all[0] = "--catalog";
+    all[1] = catalog.toString();
+    System.arraycopy(args, 0, all, 2, args.length);
+    assertThat(Main.execute(all, new PrintWriter(out), new PrintWriter(new StringWriter()))).isZero();
+    return out.toString();
   }
 }

@@ -10,11 +10,11 @@ import java.util.Optional;
 import org.morphscout.indexer.MorphscoutException;
 
 /**
- * The user's verdicts on pairs. A decision belongs to the two pictures judged, named by their content hashes
- * (SHA-256; {@code id:<n>} for an image not hashed yet, and for both sides of a byte-identical pair), not to their
- * paths or rows: a picture moved or renamed keeps its decisions, and a different picture found at an old path starts
- * with none. A pair is unordered; it is stored with the smaller name first. The paths at decision time are kept to
- * show a decision whose pictures are no longer in the catalog.
+ * The user's decisions on pairs (approve or reject). A decision belongs to the two pictures judged, named by their
+ * content hashes (SHA-256; {@code id:<n>} for an image not hashed yet, and for both sides of a byte-identical pair),
+ * not to their paths or rows: a picture moved or renamed keeps its decisions, and a different picture found at an old
+ * path starts with none. A pair is unordered; it is stored with the smaller name first. The paths at decision time are
+ * kept to show a decision whose pictures are no longer in the catalog.
  */
 public final class DecisionStore {
   private final Catalog catalog;
@@ -82,10 +82,13 @@ public final class DecisionStore {
     });
   }
 
-  /** Removes the decision on a pair; returns whether there was one. */
-  public boolean forget(long a, long b) {
+  /**
+   * Clears the decision on a pair (either order), as {@code decide FIRST SECOND --clear} and the browser's Clear decision do;
+   * returns whether there was one.
+   */
+  public boolean clear(long a, long b) {
     Pictures p = pictures(a, b);
-    return catalog.read(c -> {
+    return catalog.inTransaction(c -> {
       try (PreparedStatement s = c.prepareStatement("DELETE FROM decisions WHERE picture_a = ? AND picture_b = ?")) {
         ImageStore.bind(s, p.a(), p.b());
         return s.executeUpdate() > 0;

@@ -59,7 +59,7 @@ class DecisionsFollowPicturesTest {
           .satisfies(dec -> assertThat(List.of(dec.pathA(), dec.pathB())).contains(back.toString(), c.toString()));
 
       // Forgetting works through the images holding the pictures.
-      assertThat(library.decisions().forget(ic, restored)).isTrue();
+      assertThat(library.decisions().clear(ic, restored)).isTrue();
       assertThat(library.decisions().count()).isZero();
     }
   }

@@ -254,8 +254,10 @@ public final class PairsView extends BorderPane {
     reject.setId("reject");
     reject.setTooltip(new Tooltip("Reject the pair (R)"));
     reject.setOnAction(e -> vm.reject(vm.selectedProperty().get()));
-    Button forget = new Button("Undecide");
-    forget.setOnAction(e -> vm.undecide(vm.selectedProperty().get()));
+    Button forget = new Button("Clear decision");
+    forget.setId("clear-decision");
+    forget.setTooltip(new Tooltip("Clear your decision on the pair (as decide FIRST SECOND --clear does)"));
+    forget.setOnAction(e -> vm.clearDecision(vm.selectedProperty().get()));
     note.setId("pair-note");
     note.setPromptText("Note (N), Enter to save");
     note.setOnAction(e -> vm.note(vm.selectedProperty().get(), note.getText()));

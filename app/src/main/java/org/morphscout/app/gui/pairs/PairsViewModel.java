@@ -29,6 +29,7 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.DecisionStore;
 import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.library.DecisionTable;
 import org.morphscout.indexer.library.Library;
 
 /**
@@ -161,14 +162,14 @@ public final class PairsViewModel {
     decide(row, DecisionStore.Verdict.parse(verdict), text);
   }
 
-  /** Removes the decision on a pair. */
-  public void undecide(PairRow row) {
+  /** Clears the decision on a pair (the library call {@code decide --clear} makes). */
+  public void clearDecision(PairRow row) {
     Library lib = session.library();
     if (row == null || lib == null) {
       return;
     }
     PairSuggestion p = row.suggestion();
-    runner.submit("forget decision", token -> lib.decisions().forget(p.a(), p.b()), ok -> row.decided("", ""),
+    runner.submit("clear decision", token -> lib.decisions().clear(p.a(), p.b()), ok -> row.decided("", ""),
         e -> message.set(Messages.of(e)));
   }
 
@@ -195,19 +196,24 @@ public final class PairsViewModel {
     }, e -> message.set(Messages.of(e)));
   }
 
-  /** Writes every approved pair of the catalog (not only those listed) to {@code file}. */
+  /**
+   * Writes every approved pair of the catalog (not only those listed) to {@code file}, in exactly the format of
+   * {@code decisions --only approved --csv} ({@code --json} for a {@code .json} name), by the same library writer.
+   */
   public void exportApproved(Path file) {
     Library lib = session.library();
     if (lib == null) {
       message.set("Open a catalog first.");
       return;
     }
-    ExportFormat format = ExportFormat.forFile(file.getFileName().toString());
-    runner.submit("export approved pairs", token -> ApprovedPairsExport.write(lib.decisions().all(), file, format),
-        n -> {
-          message.set("");
-          info.set("Exported " + n + " approved pair" + (n == 1 ? "" : "s") + " to " + file);
-        }, e -> message.set(Messages.of(e)));
+    runner.submit("export approved pairs", token -> {
+      List<DecisionStore.Decision> approved = DecisionTable.only(lib.decisions().all(), DecisionStore.Verdict.APPROVED);
+      DecisionTable.write(file, approved);
+      return approved.size();
+    }, n -> {
+      message.set("");
+      info.set("Exported " + n + " approved pair" + (n == 1 ? "" : "s") + " to " + file);
+    }, e -> message.set(Messages.of(e)));
   }
 
   private void loadOverlay(PairRow row) {
