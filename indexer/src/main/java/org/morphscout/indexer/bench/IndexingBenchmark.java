@@ -11,7 +11,8 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.ingest.DecodeOptions;
-import org.morphscout.indexer.ingest.ImageIoDecoder;
+import org.morphscout.indexer.ingest.ImageDecoder;
+import org.morphscout.indexer.ingest.OpenCvJpegDecoder;
 import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.IndexReport;
@@ -107,7 +108,7 @@ public final class IndexingBenchmark {
 
   /** Decodes every file on {@code threads} threads; a failure is an error (the photos are generated). */
   static void decodeAll(List<Path> files, int threads) throws IOException {
-    ImageIoDecoder decoder = new ImageIoDecoder(DecodeOptions.defaults());
+    ImageDecoder decoder = OpenCvJpegDecoder.create(DecodeOptions.defaults()); // what index uses
     ExecutorService pool = Executors.newFixedThreadPool(threads, BenchThreads.factory());
     try {
       List<Future<Integer>> done = new ArrayList<>();

@@ -71,6 +71,18 @@ public final class ImageIoDecoder implements ImageDecoder {
   }
 
   private DecodedImage decodeChecked(Path file) throws IOException {
+    return decodeAfter(file, preflight(file));
+  }
+
+  /**
+   * What every decoder of this package learns and checks before decoding, in this order: not a folder, not empty,
+   * the format sniffed from the bytes and decodable, the data complete ({@link DataEndCheck}), the EXIF orientation.
+   *
+   * @param label the format's name as sniffed, for messages
+   */
+  record Preflight(FileFormat format, String label, int orientation) {}
+
+  static Preflight preflight(Path file) throws IOException {
     if (Files.isDirectory(file)) {
       throw new ImageReadException(file, ReadFailure.NOT_AN_IMAGE, "not an image (a folder)");
     }
@@ -99,11 +111,30 @@ public final class ImageIoDecoder implements ImageDecoder {
                 || format == FileFormat.WEBP
             ? ExifOrientationReader.read(file)
             : 1;
+    return new Preflight(format, sniffed.label(), orientation);
+  }
 
+  /** Decodes a file that passed {@link #preflight} with the ImageIO decoders installed for its format. */
+  DecodedImage decodeAfter(Path file, Preflight preflight) throws IOException {
+    try {
+      return decodeWithReaders(file, preflight);
+    } catch (NoSuchFileException e) {
+      throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
+    } catch (AccessDeniedException e) {
+      throw new ImageReadException(file, ReadFailure.UNREADABLE, "file not readable (permission denied)", e);
+    } catch (ClosedByInterruptException e) {
+      throw interrupted(file);
+    }
+  }
+
+  private DecodedImage decodeWithReaders(Path file, Preflight preflight) throws IOException {
+    FileFormat format = preflight.format();
+    int orientation = preflight.orientation();
+    String sniffedLabel = preflight.label();
     Iterator<ImageReader> readers = ImageIO.getImageReadersByFormatName(format.formatName());
     if (!readers.hasNext()) {
       throw new ImageReadException(
-          file, ReadFailure.UNSUPPORTED_FORMAT, "unsupported format (" + sniffed.label() + ", no decoder installed)");
+          file, ReadFailure.UNSUPPORTED_FORMAT, "unsupported format (" + sniffedLabel + ", no decoder installed)");
     }
     ImageReadException firstFailure = null;
     while (readers.hasNext()) {
@@ -185,14 +216,24 @@ public final class ImageIoDecoder implements ImageDecoder {
         }
       }
       raw = null; // let the decoded picture go before allocating the next one
-      int[] target = AreaDownscaler.fitWithin(w, h, options.analysisLongSide());
-      BufferedImage small =
-          AreaDownscaler.resize(
-              srgb, Math.min(target[0], srgb.getWidth()), Math.min(target[1], srgb.getHeight()));
-      BufferedImage upright = orientation == 1 ? small : Orientation.apply(small, orientation);
-      boolean swap = Orientation.swapsAxes(orientation);
-      return new DecodedImage(upright, swap ? h : w, swap ? w : h, format.formatName(), orientation, hasAlpha);
+      return finish(srgb, w, h, format, orientation, hasAlpha);
     }
+  }
+
+  /**
+   * The last steps every decoder of this package takes: downscale the sRGB picture to at most the analysis size
+   * ({@link AreaDownscaler}), then turn it upright ({@link Orientation}).
+   *
+   * @param w the stored picture's width as the file declares it (before orientation)
+   * @param h its height
+   */
+  DecodedImage finish(BufferedImage srgb, int w, int h, FileFormat format, int orientation, boolean hasAlpha) {
+    int[] target = AreaDownscaler.fitWithin(w, h, options.analysisLongSide());
+    BufferedImage small =
+        AreaDownscaler.resize(srgb, Math.min(target[0], srgb.getWidth()), Math.min(target[1], srgb.getHeight()));
+    BufferedImage upright = orientation == 1 ? small : Orientation.apply(small, orientation);
+    boolean swap = Orientation.swapsAxes(orientation);
+    return new DecodedImage(upright, swap ? h : w, swap ? w : h, format.formatName(), orientation, hasAlpha);
   }
 
   /** Largest integer step that keeps the decoded long side at least twice {@code analysisLongSide}. */
@@ -200,7 +241,7 @@ public final class ImageIoDecoder implements ImageDecoder {
     return Math.max(1, Math.max(w, h) / (2 * analysisLongSide));
   }
 
-  private void checkPixelCap(Path file, int w, int h) {
+  void checkPixelCap(Path file, int w, int h) {
     long pixels = (long) w * h;
     if (pixels > options.maxPixels()) {
       String size = pixels >= 100_000
@@ -234,7 +275,7 @@ public final class ImageIoDecoder implements ImageDecoder {
         file, ReadFailure.TRUNCATED, "truncated " + format.label() + " data", cause);
   }
 
-  private static ImageReadException interrupted(Path file) {
+  static ImageReadException interrupted(Path file) {
     return new ImageReadException(file, ReadFailure.TIMED_OUT, "decoding stopped (time limit or cancel)");
   }
 

@@ -45,9 +45,12 @@ public final class TimeLimitedDecoder implements ImageDecoder, AutoCloseable {
     this.workers = Executors.newCachedThreadPool(factory);
   }
 
-  /** An {@link ImageIoDecoder} with {@code options}, limited to {@link DecodeOptions#perFileTimeLimit()}. */
+  /**
+   * The default decoder ({@link OpenCvJpegDecoder#create}: fast JPEGs, ImageIO for the rest) with {@code options},
+   * limited to {@link DecodeOptions#perFileTimeLimit()}.
+   */
   public TimeLimitedDecoder(DecodeOptions options) {
-    this(new ImageIoDecoder(options), options.perFileTimeLimit());
+    this(OpenCvJpegDecoder.create(options), options.perFileTimeLimit());
   }
 
   @Override

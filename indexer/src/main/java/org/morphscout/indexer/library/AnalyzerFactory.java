@@ -12,7 +12,7 @@ import org.morphscout.indexer.analysis.ImageAnalyzer;
 import org.morphscout.indexer.feature.AppearanceEmbedder;
 import org.morphscout.indexer.feature.ColourStatistics;
 import org.morphscout.indexer.feature.OnnxAppearanceEmbedder;
-import org.morphscout.indexer.ingest.ImageIoDecoder;
+import org.morphscout.indexer.ingest.OpenCvJpegDecoder;
 import org.morphscout.indexer.silhouette.ConfidenceChoiceSilhouettes;
 import org.morphscout.indexer.silhouette.DefaultSilhouettes;
 import org.morphscout.indexer.silhouette.ModelFolder;
@@ -53,7 +53,7 @@ public final class AnalyzerFactory {
     AppearanceEmbedder embedder = setup.model().isPresent()
         ? OnnxAppearanceEmbedder.custom(setup.model().get())
         : OnnxAppearanceEmbedder.builtIn(library.catalog().modelDir());
-    return new ImageAnalyzer(new ImageIoDecoder(setup.decode()), silhouettes, new ShapeDescriptors(),
+    return new ImageAnalyzer(OpenCvJpegDecoder.create(setup.decode()), silhouettes, new ShapeDescriptors(),
         new ColourStatistics(), embedder);
   }
 

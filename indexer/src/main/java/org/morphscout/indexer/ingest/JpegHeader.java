@@ -1,0 +1,81 @@
+package org.morphscout.indexer.ingest;
+
+import java.util.Optional;
+
+/**
+ * The few facts of a JPEG's header the fast decoder needs, read from its markers up to the first scan (ITU-T T.81,
+ * annex B): frame size and components from the start-of-frame marker, and whether an ICC profile (APP2
+ * {@code ICC_PROFILE}, ICC.1 annex B.4) or an Adobe colour-transform marker (APP14 {@code Adobe}) is present.
+ *
+ * @param width samples per line
+ * @param height lines
+ * @param components colour components (1 grey, 3 YCbCr or RGB, 4 CMYK or YCCK)
+ * @param iccProfile whether the file embeds an ICC profile
+ * @param adobe whether the file has an Adobe APP14 marker (common with CMYK and YCCK)
+ */
+record JpegHeader(int width, int height, int components, boolean iccProfile, boolean adobe) {
+
+  /** The header of a JPEG file's bytes; empty when the markers before the first scan cannot be read. */
+  static Optional<JpegHeader> read(byte[] b) {
+    if (b.length < 4 || (b[0] & 0xff) != 0xFF || (b[1] & 0xff) != 0xD8) {
+      return Optional.empty();
+    }
+    int i = 2;
+    boolean icc = false;
+    boolean adobe = false;
+    int width = -1;
+    int height = -1;
+    int components = -1;
+    while (i + 3 < b.length) {
+      if ((b[i] & 0xff) != 0xFF) {
+        return Optional.empty();
+      }
+      int marker = b[i + 1] & 0xff;
+      if (marker == 0xFF) { // fill byte
+        i++;
+        continue;
+      }
+      if (marker == 0x01 || (marker >= 0xD0 && marker <= 0xD7)) { // no length
+        i += 2;
+        continue;
+      }
+      if (marker == 0xD9) {
+        break;
+      }
+      int length = ((b[i + 2] & 0xff) << 8) | (b[i + 3] & 0xff);
+      int body = i + 4;
+      if (length < 2 || body + length - 2 > b.length) {
+        return Optional.empty();
+      }
+      if (marker == 0xE2 && startsWith(b, body, "ICC_PROFILE\0")) {
+        icc = true;
+      } else if (marker == 0xEE && startsWith(b, body, "Adobe")) {
+        adobe = true;
+      } else if (marker >= 0xC0 && marker <= 0xCF && marker != 0xC4 && marker != 0xC8 && marker != 0xCC
+          && length >= 8) {
+        height = ((b[body + 1] & 0xff) << 8) | (b[body + 2] & 0xff);
+        width = ((b[body + 3] & 0xff) << 8) | (b[body + 4] & 0xff);
+        components = b[body + 5] & 0xff;
+      } else if (marker == 0xDA) { // start of scan: the header is over
+        break;
+      }
+      i += 2 + length;
+    }
+    if (width <= 0 || height <= 0 || components <= 0) {
+      return Optional.empty();
+    }
+    return Optional.of(new JpegHeader(width, height, components, icc, adobe));
+  }
+
+  private static boolean startsWith(byte[] b, int at, String ascii) {
+    if (at + ascii.length() > b.length) {
+      return false;
+    }
+    for (int k = 0; k < ascii.length(); k++) {
+      if (b[at + k] != (byte) ascii.charAt(k)) {
+        return false;
+      }
+    }
+    return true;
+  }
+}

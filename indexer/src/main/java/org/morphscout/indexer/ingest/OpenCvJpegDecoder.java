@@ -1,0 +1,144 @@
+package org.morphscout.indexer.ingest;
+
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.atomic.AtomicBoolean;
+import org.opencv.core.Mat;
+import org.opencv.core.MatOfByte;
+import org.opencv.imgcodecs.Imgcodecs;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * Decodes JPEGs straight to about the analysis size in the DCT domain, through OpenCV's reduced-size reads (libjpeg
+ * scaling by 1/2, 1/4 or 1/8, the largest that keeps the long side at least the analysis size), which costs a
+ * fraction of a full decode of a camera photo. Everything else is exactly what {@link ImageIoDecoder} does: the same
+ * checks first ({@link ImageIoDecoder#preflight}: format, completeness, EXIF orientation), the same pixel cap from the
+ * header, and the same last steps (area downscale, orientation). A file the fast path does not take (not a JPEG, an
+ * embedded ICC profile, which ImageIO converts to sRGB, CMYK or other than 1 or 3 components, or anything OpenCV
+ * cannot decode) goes to {@link ImageIoDecoder}, per file. Results differ from ImageIO's by the resampling only (a
+ * DCT-domain reduction instead of subsampling then area averaging): see the tolerance in the tests.
+ *
+ * <p>OpenCV's native library comes inside the {@code org.openpnp:opencv} artifact (Linux x86-64 and ARM, macOS,
+ * Windows) and is loaded once; where it cannot load, one warning says so and every file takes the ImageIO path.
+ * Thread-safe.
+ */
+public final class OpenCvJpegDecoder implements ImageDecoder {
+  private static final Logger LOG = LoggerFactory.getLogger(OpenCvJpegDecoder.class);
+  private static final AtomicBoolean WARNED = new AtomicBoolean();
+  private static volatile Boolean loaded;
+
+  private final ImageIoDecoder fallback;
+
+  private OpenCvJpegDecoder(ImageIoDecoder fallback) {
+    this.fallback = fallback;
+  }
+
+  /** The fast decoder when OpenCV's native library loads here, else the ImageIO decoder (said once, in the log). */
+  public static ImageDecoder create(DecodeOptions options) {
+    ImageIoDecoder fallback = new ImageIoDecoder(Objects.requireNonNull(options, "options"));
+    return available() ? new OpenCvJpegDecoder(fallback) : fallback;
+  }
+
+  /** Whether OpenCV's native library is loaded (tries once). */
+  public static synchronized boolean available() {
+    if (loaded == null) {
+      try {
+        nu.pattern.OpenCV.loadLocally();
+        loaded = true;
+      } catch (Throwable e) { // UnsatisfiedLinkError, or an unpacking failure: both mean "not here"
+        loaded = false;
+        if (WARNED.compareAndSet(false, true)) {
+          LOG.warn("the fast JPEG decoder is not available on this machine ({}); JPEGs are decoded with ImageIO, "
+              + "about three times slower", e.toString());
+        }
+      }
+    }
+    return loaded;
+  }
+
+  /** The options this decoder applies. */
+  public DecodeOptions options() {
+    return fallback.options();
+  }
+
+  @Override
+  public DecodedImage decode(Path file) throws IOException {
+    ImageIoDecoder.Preflight preflight;
+    try {
+      preflight = ImageIoDecoder.preflight(file);
+    } catch (java.nio.file.NoSuchFileException e) {
+      throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
+    } catch (java.nio.file.AccessDeniedException e) {
+      throw new ImageReadException(file, ReadFailure.UNREADABLE, "file not readable (permission denied)", e);
+    }
+    if (preflight.format() != FileFormat.JPEG) {
+      return fallback.decodeAfter(file, preflight);
+    }
+    byte[] bytes = Files.readAllBytes(file);
+    Optional<JpegHeader> header = JpegHeader.read(bytes);
+    if (header.isEmpty() || header.get().iccProfile() || header.get().adobe()
+        || (header.get().components() != 1 && header.get().components() != 3)) {
+      return fallback.decodeAfter(file, preflight);
+    }
+    int w = header.get().width();
+    int h = header.get().height();
+    fallback.checkPixelCap(file, w, h);
+    int reduction = reduction(w, h, fallback.options().analysisLongSide());
+    BufferedImage image = decode(bytes, reduction);
+    if (Thread.currentThread().isInterrupted()) {
+      throw ImageIoDecoder.interrupted(file);
+    }
+    if (image == null) {
+      LOG.debug("{}: OpenCV could not decode it, trying ImageIO", file);
+      return fallback.decodeAfter(file, preflight);
+    }
+    return fallback.finish(image, w, h, FileFormat.JPEG, preflight.orientation(), false);
+  }
+
+  /** The largest of 8, 4, 2 and 1 that keeps the long side at least {@code analysisLongSide}. */
+  static int reduction(int w, int h, int analysisLongSide) {
+    int longSide = Math.max(w, h);
+    for (int r : new int[] {8, 4, 2}) {
+      if (longSide / r >= analysisLongSide) {
+        return r;
+      }
+    }
+    return 1;
+  }
+
+  /** Decodes to 8-bit sRGB (the JPEG's own colour, as a file without a profile is read), or null on failure. */
+  private static BufferedImage decode(byte[] bytes, int reduction) {
+    int flags = Imgcodecs.IMREAD_IGNORE_ORIENTATION | switch (reduction) {
+      case 8 -> Imgcodecs.IMREAD_REDUCED_COLOR_8;
+      case 4 -> Imgcodecs.IMREAD_REDUCED_COLOR_4;
+      case 2 -> Imgcodecs.IMREAD_REDUCED_COLOR_2;
+      default -> Imgcodecs.IMREAD_COLOR;
+    };
+    MatOfByte in = new MatOfByte(bytes);
+    Mat bgr = Imgcodecs.imdecode(in, flags);
+    try {
+      if (bgr.empty() || bgr.channels() != 3 || bgr.depth() != org.opencv.core.CvType.CV_8U) {
+        return null;
+      }
+      int width = bgr.cols();
+      int height = bgr.rows();
+      byte[] px = new byte[width * height * 3];
+      bgr.get(0, 0, px);
+      int[] argb = new int[width * height];
+      for (int i = 0, j = 0; i < argb.length; i++, j += 3) {
+        argb[i] = 0xFF000000 | (px[j + 2] & 0xff) << 16 | (px[j + 1] & 0xff) << 8 | (px[j] & 0xff);
+      }
+      BufferedImage out = new BufferedImage(width, height, BufferedImage.TYPE_INT_ARGB);
+      out.setRGB(0, 0, width, height, argb, 0, width);
+      return out;
+    } finally {
+      bgr.release();
+      in.release();
+    }
+  }
+}

@@ -1,0 +1,135 @@
+package org.morphscout.indexer.ingest;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.color.ColorSpace;
+import java.awt.color.ICC_Profile;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.indexer.colour.CieLab;
+import org.morphscout.indexer.feature.Ciede2000;
+import org.morphscout.indexer.silhouette.DefaultSilhouettes;
+import org.morphscout.indexer.silhouette.Mask;
+import org.morphscout.indexer.testing.OutsideData;
+
+/**
+ * The fast JPEG path against the ImageIO path on real JPEGs made with ImageMagick (the {@code convert} tool, Debian
+ * package {@code imagemagick}) from a real photograph (Debian {@code opencv-doc}: {@code squirrel_cls.jpg}, which
+ * carries an EXIF block, enlarged to a camera-like 3072 px so that the DCT-domain reduction is used): EXIF orientations 1, 3, 6 and 8 set with
+ * {@code -orient}, and a copy tagged with a non-sRGB ICC profile (the JDK's linear-RGB profile, embedded with
+ * {@code -profile}). Tolerance (ours): the two analysis images within a mean CIEDE2000 of 1.5 (a difference near the
+ * threshold of a just-noticeable difference, common practice) and the classical silhouettes within IoU 0.95.
+ */
+class OpenCvJpegDecoderTest {
+  @TempDir static Path tmp;
+  static Path big;
+
+  @BeforeAll
+  static void makeJpegs() throws IOException, InterruptedException {
+    Path photo = OutsideData.require(OutsideData.OPENCV_SAMPLES.resolve("squirrel_cls.jpg"), "opencv-doc");
+    if (!convertAvailable()) {
+      OutsideData.unavailable("ImageMagick's convert is not on the PATH (Debian package imagemagick)");
+    }
+    big = tmp.resolve("squirrel-3072.jpg");
+    convert(photo.toString(), "-resize", "3072x3072", "-quality", "92", big.toString());
+  }
+
+  static boolean convertAvailable() {
+    try {
+      Process p = new ProcessBuilder("convert", "-version").redirectErrorStream(true).start();
+      p.getInputStream().readAllBytes();
+      return p.waitFor(30, TimeUnit.SECONDS) && p.exitValue() == 0;
+    } catch (IOException e) {
+      return false;
+    } catch (InterruptedException e) {
+      Thread.currentThread().interrupt();
+      return false;
+    }
+  }
+
+  static void convert(String... args) throws IOException, InterruptedException {
+    List<String> cmd = new ArrayList<>(List.of("convert"));
+    cmd.addAll(List.of(args));
+    Process p = new ProcessBuilder(cmd).redirectErrorStream(true).start();
+    String out = new String(p.getInputStream().readAllBytes());
+    assertThat(p.waitFor(60, TimeUnit.SECONDS)).isTrue();
+    assertThat(p.exitValue()).as("convert %s: %s", cmd, out).isZero();
+  }
+
+  @Test
+  void theNativeLibraryLoadsHere() {
+    // Linux x86-64 is one of the platforms the org.openpnp:opencv artifact carries natives for.
+    assertThat(OpenCvJpegDecoder.available()).isTrue();
+    assertThat(OpenCvJpegDecoder.create(DecodeOptions.defaults())).isInstanceOf(OpenCvJpegDecoder.class);
+  }
+
+  @Test
+  void everyOrientationDecodesLikeImageIoWithinTheTolerance() throws IOException, InterruptedException {
+    ImageIoDecoder slow = new ImageIoDecoder(DecodeOptions.defaults());
+    ImageDecoder fast = OpenCvJpegDecoder.create(DecodeOptions.defaults());
+    String[] names = {"TopLeft", "BottomRight", "RightTop", "LeftBottom"};
+    int[] tags = {1, 3, 6, 8};
+    for (int i = 0; i < names.length; i++) {
+      Path file = tmp.resolve("squirrel-" + tags[i] + ".jpg");
+      convert(big.toString(), "-orient", names[i], file.toString());
+      DecodedImage a = slow.decode(file);
+      DecodedImage b = fast.decode(file);
+      assertThat(b.orientation()).as("orientation of %s", file).isEqualTo(tags[i]).isEqualTo(a.orientation());
+      assertThat(b.width()).isEqualTo(a.width());
+      assertThat(b.height()).isEqualTo(a.height());
+      assertThat(b.analysis().getWidth()).isEqualTo(a.analysis().getWidth());
+      assertThat(b.analysis().getHeight()).isEqualTo(a.analysis().getHeight());
+      assertThat(meanDeltaE00(a.analysis(), b.analysis())).as("mean ΔE00, orientation %d", tags[i]).isLessThan(1.5);
+      Mask ma = new DefaultSilhouettes().extract(a.analysis()).mask();
+      Mask mb = new DefaultSilhouettes().extract(b.analysis()).mask();
+      assertThat(ma.iou(mb)).as("silhouette IoU, orientation %d", tags[i]).isGreaterThan(0.95);
+    }
+  }
+
+  @Test
+  void aJpegWithAnEmbeddedProfileTakesTheImageIoPathExactly() throws IOException, InterruptedException {
+    Path icc = tmp.resolve("linear-rgb.icc");
+    Files.write(icc, ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData());
+    Path tagged = tmp.resolve("squirrel-linear.jpg");
+    convert(big.toString(), "-profile", icc.toString(), tagged.toString());
+    assertThat(JpegHeader.read(Files.readAllBytes(tagged))).get().extracting(JpegHeader::iccProfile).isEqualTo(true);
+    DecodedImage a = new ImageIoDecoder(DecodeOptions.defaults()).decode(tagged);
+    DecodedImage b = OpenCvJpegDecoder.create(DecodeOptions.defaults()).decode(tagged);
+    assertThat(meanDeltaE00(a.analysis(), b.analysis())).isZero();
+    // And the profile was applied: the linear-RGB picture reads lighter than the same pixels taken as sRGB.
+    DecodedImage untagged = new ImageIoDecoder(DecodeOptions.defaults()).decode(big);
+    assertThat(meanDeltaE00(a.analysis(), untagged.analysis())).isGreaterThan(5);
+  }
+
+  @Test
+  void readsTheHeaderItNeeds() throws IOException {
+    JpegHeader h = JpegHeader.read(Files.readAllBytes(big)).orElseThrow();
+    assertThat(h.width()).isEqualTo(3072);
+    assertThat(h.height()).isEqualTo(2446);
+    assertThat(h.components()).isEqualTo(3);
+    assertThat(JpegHeader.read(new byte[] {1, 2, 3, 4})).isEmpty();
+    assertThat(OpenCvJpegDecoder.reduction(3072, 3072, 768)).isEqualTo(4);
+    assertThat(OpenCvJpegDecoder.reduction(6000, 4000, 768)).isEqualTo(4);
+    assertThat(OpenCvJpegDecoder.reduction(700, 500, 768)).isEqualTo(1);
+  }
+
+  static double meanDeltaE00(BufferedImage a, BufferedImage b) {
+    double sum = 0;
+    int n = 0;
+    for (int y = 0; y < a.getHeight(); y++) {
+      for (int x = 0; x < a.getWidth(); x++) {
+        sum += Ciede2000.difference(CieLab.toLab(a.getRGB(x, y)), CieLab.toLab(b.getRGB(x, y)));
+        n++;
+      }
+    }
+    return sum / n;
+  }
+}
