@@ -44,6 +44,13 @@ class ArchitectureTest {
   }
 
   @Test
+  void benchmarksStayOutOfTheLibrary() {
+    // The library jar is what other programs embed; the benchmarks belong to the application that runs them.
+    noClasses().that().resideInAPackage("org.morphscout.indexer..").should().haveSimpleNameEndingWith("Benchmark")
+        .check(classes);
+  }
+
+  @Test
   void onlyTheCommandLineWritesToStandardOutput() {
     // Main hands System.out to the command line's writers; everything else goes through those writers or SLF4J
     noClasses().that().resideOutsideOfPackage("org.morphscout.app.cli..")

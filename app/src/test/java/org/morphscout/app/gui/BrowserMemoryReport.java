@@ -3,7 +3,7 @@ package org.morphscout.app.gui;
 import java.time.Instant;
 import java.util.List;
 import java.util.Locale;
-import org.morphscout.indexer.bench.MachineInfo;
+import org.morphscout.app.bench.MachineInfo;
 
 /** The Markdown section {@link LibraryViewMemoryBenchmark} prints: machine, one table row per size, derived figures. */
 final class BrowserMemoryReport {

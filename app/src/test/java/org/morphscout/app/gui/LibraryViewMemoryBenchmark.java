@@ -23,7 +23,7 @@ import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.task.FxTaskRunner;
-import org.morphscout.indexer.bench.HeapMeter;
+import org.morphscout.app.bench.HeapMeter;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStatus;
 import org.testfx.api.FxToolkit;

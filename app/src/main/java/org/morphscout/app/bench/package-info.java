@@ -4,8 +4,8 @@
  * scan, pair scoring and discovery, chain queries, walk ordering, heap use, and the per-image data volumes of a
  * catalog.
  *
- * <p>Library code: every benchmark is one small class that returns a result record and prints nothing; the command
- * line formats the report. Randomness comes from seeds given by the caller. Latencies are wall-clock
+ * <p>Part of the application, not of the library jar: every benchmark is one small class that drives the library's
+ * public API and returns a result record, printing nothing; the command line formats the report. Randomness comes from seeds given by the caller. Latencies are wall-clock
  * ({@link System#nanoTime()}) over many repetitions after a warm-up, summarised as percentiles
  * ({@link Latencies}); heap figures are used-heap after explicit garbage collections ({@link HeapMeter}), so they
  * are estimates of live data, not exact object sizes.
@@ -14,4 +14,4 @@
  * and Faithfull, "ANN-Benchmarks", Information Systems 2020): the fraction of the exact k nearest neighbours that the
  * approximate search returns, averaged over the queries.
  */
-package org.morphscout.indexer.bench;
+package org.morphscout.app.bench;

@@ -1,4 +1,4 @@
-package org.morphscout.indexer.bench;
+package org.morphscout.app.bench;
 
 import static org.assertj.core.api.Assertions.assertThat;
 

@@ -1,7 +1,6 @@
-package org.morphscout.indexer.library;
+package org.morphscout.app.bench;
 
 import java.nio.file.Path;
-import org.morphscout.indexer.bench.StoredPairsBenchmark;
 
 /**
  * A child process for {@link StoredPairsMemoryIT}: fills a synthetic catalog of stored pairs and asks it for the best
