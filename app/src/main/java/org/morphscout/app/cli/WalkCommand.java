@@ -15,6 +15,7 @@ import org.morphscout.indexer.library.QueryContext;
 import org.morphscout.indexer.library.Sheets;
 import org.morphscout.indexer.library.WalkService;
 import org.morphscout.indexer.library.WalkService.WalkAnswer;
+import org.morphscout.indexer.library.WalkTable;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -24,14 +25,17 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.ParentCommand;
 import picocli.CommandLine.Spec;
 
-/** {@code morphscout walk}: order a set of images into the smoothest walkthrough. */
+/** {@code morphscout walk}: order a set of images into the smoothest walk. */
 @Command(
     name = "walk",
     mixinStandardHelpOptions = true,
-    header = "Order folders, a list of images, or the whole library into the smoothest walkthrough.",
-    description = "Finds an open path through the images with the smallest total step cost and few large jumps (a "
+    header = "Order folders, a list of images, or the whole library into the smoothest walk.",
+    description = {"Finds an open path through the images with the smallest total step cost and few large jumps (a "
         + "nearest-neighbour construction from several starts, then 2-opt and Or-opt improvement). Reports the total, "
-        + "the largest step and the improvement over the order given.")
+        + "the largest step and the improvement over the order given.",
+        "--csv columns: position, path, step_cost (the cost FROM the previous image TO this one; empty on the first "
+        + "row); the browser's walk export writes the same. The --sheet contact sheet writes each step cost on its "
+        + "arrow (three significant digits) under a legend saying so."})
 final class WalkCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
@@ -51,7 +55,7 @@ final class WalkCommand implements Callable<Integer> {
       description = "0 = steps judged by appearance only, 1 = by silhouette only (default: ${DEFAULT-VALUE}).")
   double shapeWeight;
 
-  @Option(names = "--sheet", paramLabel = "<file.png>", description = "Also write a contact sheet of the order.")
+  @Option(names = "--sheet", paramLabel = "<file.png>", description = "Also write a contact sheet of the order (step costs on the arrows).")
   Path sheet;
 
   @ArgGroup(exclusive = true)
@@ -97,11 +101,12 @@ final class WalkCommand implements Callable<Integer> {
       return;
     }
     if (format.csv) {
-      try (CsvOut csv = new CsvOut(out, "position", "path", "step_cost")) {
-        for (int i = 0; i < a.images().size(); i++) {
-          csv.row(i + 1, a.images().get(i).path(), i == 0 ? "" : PairRows.round(a.steps().get(i - 1), 4));
-        }
+      try {
+        WalkTable.csv(out, a.images().stream().map(ImageAnalysis::path).toList(), a.steps());
+      } catch (java.io.IOException e) {
+        throw new java.io.UncheckedIOException(e);
       }
+      out.flush();
       return;
     }
     for (int i = 0; i < a.images().size(); i++) {

@@ -116,6 +116,10 @@ class BrowserFxTest {
     robot.clickOn(robot.lookup("#pairs-table .table-row-cell").nth(0).queryAs(javafx.scene.Node.class));
     PairRow chosen = table.getSelectionModel().getSelectedItem();
     assertThat(chosen).isNotNull();
+    // the inspector follows the table: the chosen pair's first image
+    assertThat(vm.inspector().titleProperty().get()).isEqualTo(chosen.nameA());
+    assertThat(table.getColumns()).extracting(c -> c.getText()).contains("First", "Second")
+        .doesNotContain("A", "B", "Look");
     waitUntil(() -> vm.pairs().overlayProperty().get() != null);
     robot.type(KeyCode.A);
     waitUntil(() -> chosen.decisionProperty().get().equals("approved"));
@@ -153,5 +157,20 @@ class BrowserFxTest {
     }
     assertThat(last - first).isEqualTo(2);
     assertThat(robot.lookup("#walk-summary").queryLabeled().getText()).startsWith("5 images");
+    // each image after the first shows the step cost FROM the previous one, as walk --csv counts it
+    assertThat(robot.lookup(".step-cost").queryAllAs(javafx.scene.control.Label.class))
+        .extracting(javafx.scene.control.Label::getText).contains("start").anyMatch(t -> t.startsWith("step cost "))
+        .noneMatch(t -> t.startsWith("next"));
+    // the inspector follows the strip's selection
+    robot.clickOn(robot.lookup("#walk-strip .list-cell").nth(2).queryAs(javafx.scene.Node.class));
+    assertThat(vm.session().selectedProperty().get()).isEqualTo(vm.walkthrough().strip().get(2));
+  }
+
+  @Test
+  void ourOwnMenuAndPaneNames(FxRobot robot) {
+    javafx.scene.control.MenuBar bar = robot.lookup(".menu-bar").queryAs(javafx.scene.control.MenuBar.class);
+    assertThat(bar.getMenus()).extracting(javafx.scene.control.Menu::getText).containsExactly("Catalog", "Help");
+    assertThat(robot.lookup("#panes").queryAs(TabPane.class).getTabs()).extracting(t -> t.getText())
+        .containsExactly("Images", "Chains", "Pairs", "Walk", "Indexing");
   }
 }

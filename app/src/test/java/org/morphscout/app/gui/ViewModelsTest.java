@@ -205,7 +205,7 @@ class ViewModelsTest {
   }
 
   @Test
-  void walkthroughOrdersAndFollowsMoves() {
+  void walkthroughOrdersAndFollowsMoves() throws java.io.IOException {
     var walk = main.walkthrough();
     main.session().selection().setAll(main.library().visible().subList(1, 7));
     walk.useSelection();
@@ -219,6 +219,27 @@ class ViewModelsTest {
     assertThat(walk.strip().get(5)).isEqualTo(first);
     assertThat(walk.steps()).hasSize(5);
     assertThat(walk.steps().stream().mapToDouble(Double::doubleValue).sum()).isGreaterThanOrEqualTo(before - 1e-9);
+
+    // the export is walk --csv's format, by the same library writer: step cost FROM the previous image, first empty
+    Path csv = tmp.resolve("walk.csv");
+    walk.export(csv);
+    List<CSVRecord> records = CSVFormat.RFC4180.builder().setHeader().setSkipHeaderRecord(true).get()
+        .parse(Files.newBufferedReader(csv)).getRecords();
+    assertThat(records.get(0).getParser().getHeaderNames()).containsExactly("position", "path", "step_cost");
+    assertThat(records).hasSize(6);
+    assertThat(records.get(0).get("step_cost")).isEmpty();
+    for (int i = 1; i < 6; i++) {
+      assertThat(records.get(i).get("path")).isEqualTo(walk.strip().get(i).path());
+      assertThat(Double.parseDouble(records.get(i).get("step_cost"))).isCloseTo(walk.steps().get(i - 1),
+          org.assertj.core.data.Offset.offset(5e-5));
+    }
+    java.io.StringWriter same = new java.io.StringWriter();
+    org.morphscout.indexer.library.WalkTable.csv(same, walk.strip().stream().map(ImageRow::path).toList(),
+        walk.steps());
+    assertThat(Files.readString(csv)).isEqualTo(same.toString());
+    // never over one of the walk's own images
+    walk.export(Path.of(walk.strip().get(0).path()));
+    assertThat(walk.messageProperty().get()).contains("input");
   }
 
   @Test

@@ -15,8 +15,15 @@ import org.morphscout.indexer.library.ChainService.StepDetail;
 import org.morphscout.indexer.preview.ContactSheet;
 import org.morphscout.indexer.preview.ContactSheetRow;
 
-/** Contact sheets of chains and walkthroughs, from the catalog's thumbnails. */
+/** Contact sheets of chains and walks, from the catalog's thumbnails, each with a legend for its arrows' numbers. */
 public final class Sheets {
+  /** The legend of a chain sheet. */
+  public static final String CHAIN_LEGEND = "Number on each arrow: the pair score of that step (0 to 100, higher is "
+      + "better)";
+  /** The legend of a walk sheet. */
+  public static final String WALK_LEGEND = "Number on each arrow: the step cost from one image to the next (lower is "
+      + "smoother)";
+
   private Sheets() {}
 
   /** One row per chain; between thumbnails, each step's pair score (0-100). */
@@ -36,10 +43,10 @@ public final class Sheets {
         + String.format(Locale.ROOT, " (direct pair score %.0f)", answer.direct().score());
     List<Path> inputs = new ArrayList<>();
     answer.chains().forEach(d -> d.chain().images().forEach(id -> inputs.add(inputPath(library, id))));
-    OutputFile.write(file, inputs, temp -> new ContactSheet().writePng(title, rows, temp));
+    OutputFile.write(file, inputs, temp -> new ContactSheet().writePng(title, CHAIN_LEGEND, rows, temp));
   }
 
-  /** One sequence (a walkthrough); between thumbnails, each step's cost. */
+  /** One sequence (a walk); between thumbnails, each step's cost. */
   public static void sequence(Library library, String title, String caption, List<Long> ids, List<Double> steps,
       Path file) throws IOException {
     List<ContactSheetRow.Tile> tiles = new ArrayList<>();
@@ -48,7 +55,8 @@ public final class Sheets {
     }
     List<Path> inputs = ids.stream().map(id -> inputPath(library, id)).toList();
     OutputFile.write(file, inputs,
-        temp -> new ContactSheet().writePng(title, List.of(new ContactSheetRow(caption, tiles, steps)), temp));
+        temp -> new ContactSheet().writePng(title, WALK_LEGEND, List.of(new ContactSheetRow(caption, tiles, steps)),
+            temp));
   }
 
   private static Path inputPath(Library library, long id) {

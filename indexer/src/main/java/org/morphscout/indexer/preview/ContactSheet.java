@@ -12,18 +12,19 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import javax.imageio.ImageIO;
 
 /**
- * Renders sequences (chains, walkthroughs) as a PNG contact sheet: a title line, then per sequence a caption line and
- * its thumbnails left to right with the step score written between consecutive ones; long sequences wrap onto
- * further lines (the score of a step that crosses a line break is written after the line's last thumbnail, with an
- * arrow). Plain look: white background, dark text, system sans-serif font. Pure Java2D, works headless.
+ * Renders sequences (chains, walks) as a PNG contact sheet: a title line, an optional legend line saying what the
+ * numbers on the arrows are, then per sequence a caption line and its thumbnails left to right with the step's number
+ * written between consecutive ones (three significant digits, {@link #stepLabel}, so small step costs still differ);
+ * long sequences wrap onto further lines (the number of a step that crosses a line break is written after the line's
+ * last thumbnail, with an arrow). Plain look: white background, dark text, system sans-serif font. Pure Java2D, works
+ * headless.
  *
- * <p>Layout ({@link #size}): width = 2·margin + c·thumb + (c-1)·gap, plus one more gap when any sequence wraps, where
- * c = min(perLine, longest sequence); height = 2·margin + line (title) + Σ over sequences of
- * [margin + line (caption) + lines·(thumb + line (tile captions))]. Thread-safe (no shared state).
+ * <p>Layout ({@link #size}): width = 2·margin + c·thumb + (c-1)·gap, plus one more gap when any sequence wraps,
+ * where c = min(perLine, longest sequence); height = 2·margin + line (title) + line (legend, when there is one) + Σ
+ * over sequences of [margin + line (caption) + lines·(thumb + line (tile captions))]. Thread-safe (no shared state).
  */
 public final class ContactSheet {
   private static final Color INK = new Color(0x20, 0x20, 0x20);
@@ -43,23 +44,45 @@ public final class ContactSheet {
     this(ContactSheetStyle.DEFAULT);
   }
 
-  /** The pixel size {@link #render} will produce for these rows. */
+  /**
+   * A step's number as written on its arrow: three significant digits (0.0213, 0.156, 40.5), so the small step costs
+   * of a smooth walk do not all print as the same two decimals.
+   */
+  public static String stepLabel(double value) {
+    return org.morphscout.indexer.text.Figures.threeDigits(value);
+  }
+
+  /** The pixel size {@link #render} will produce for these rows, without a legend. */
   public Dimension size(List<ContactSheetRow> rows) {
+    return size(null, rows);
+  }
+
+  /** The pixel size {@link #render(String, String, List)} will produce. */
+  public Dimension size(String legend, List<ContactSheetRow> rows) {
     int longest = rows.stream().mapToInt(r -> r.tiles().size()).max().orElse(1);
     int cols = Math.min(style.perLine(), longest);
     boolean wraps = longest > style.perLine();
     int width = 2 * style.margin() + cols * style.thumbSize() + (cols - 1) * style.gap() + (wraps ? style.gap() : 0);
     int line = style.lineHeight();
-    int height = 2 * style.margin() + line;
+    int height = 2 * style.margin() + line + (hasLegend(legend) ? line : 0);
     for (ContactSheetRow r : rows) {
       height += style.margin() + line + lines(r) * (style.thumbSize() + line);
     }
     return new Dimension(width, height);
   }
 
-  /** Draws the sheet. */
+  private static boolean hasLegend(String legend) {
+    return legend != null && !legend.isBlank();
+  }
+
+  /** Draws the sheet without a legend. */
   public BufferedImage render(String title, List<ContactSheetRow> rows) {
-    Dimension size = size(rows);
+    return render(title, null, rows);
+  }
+
+  /** Draws the sheet; {@code legend} (one line under the title, or null) says what the arrows' numbers are. */
+  public BufferedImage render(String title, String legend, List<ContactSheetRow> rows) {
+    Dimension size = size(legend, rows);
     BufferedImage out = new BufferedImage(size.width, size.height, BufferedImage.TYPE_INT_RGB);
     Graphics2D g = out.createGraphics();
     try {
@@ -75,6 +98,10 @@ public final class ContactSheet {
       int y = style.margin();
       text(g, bold, INK, title, style.margin(), y, contentWidth, false);
       y += line;
+      if (hasLegend(legend)) {
+        text(g, plain, FAINT, legend, style.margin(), y, contentWidth, false);
+        y += line;
+      }
       for (ContactSheetRow row : rows) {
         y += style.margin();
         text(g, bold, INK, row.caption(), style.margin(), y, contentWidth, false);
@@ -87,9 +114,14 @@ public final class ContactSheet {
     return out;
   }
 
-  /** Renders and writes a PNG file. */
+  /** Renders and writes a PNG file (no legend). */
   public void writePng(String title, List<ContactSheetRow> rows, Path file) throws IOException {
-    BufferedImage img = render(title, rows);
+    writePng(title, null, rows, file);
+  }
+
+  /** Renders and writes a PNG file with a legend line under the title. */
+  public void writePng(String title, String legend, List<ContactSheetRow> rows, Path file) throws IOException {
+    BufferedImage img = render(title, legend, rows);
     Path parent = file.toAbsolutePath().getParent();
     if (parent != null) {
       Files.createDirectories(parent);
@@ -114,7 +146,7 @@ public final class ContactSheet {
       text(g, font, FAINT, tiles.get(i).caption(), x, y + thumb, thumb, true);
       if (i + 1 < tiles.size()) {
         boolean breaks = col == style.perLine() - 1;
-        String score = String.format(Locale.ROOT, "%.2f", row.stepScores().get(i));
+        String score = stepLabel(row.stepScores().get(i));
         drawStep(g, font, score, x + thumb, y + thumb / 2, breaks);
       }
     }

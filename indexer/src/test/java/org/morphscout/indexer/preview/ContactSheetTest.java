@@ -86,6 +86,27 @@ class ContactSheetTest {
   }
 
   @Test
+  void stepLabelsKeepThreeSignificantDigitsSoSmallStepsDiffer() {
+    // a smooth walk's step costs: two decimals would print 0.02 for all three
+    assertThat(List.of(0.02134, 0.01987, 0.0242).stream().map(ContactSheet::stepLabel))
+        .containsExactly("0.0213", "0.0199", "0.0242");
+    assertThat(ContactSheet.stepLabel(40.54)).isEqualTo("40.5");
+    assertThat(ContactSheet.stepLabel(0.5)).isEqualTo("0.5");
+    assertThat(ContactSheet.stepLabel(0)).isEqualTo("0");
+    assertThat(ContactSheet.stepLabel(Double.NaN)).isEqualTo("–");
+  }
+
+  @Test
+  void aLegendAddsOneLineUnderTheTitle() {
+    List<ContactSheetRow> rows = List.of(row("walk", 3, 40, 40));
+    java.awt.Dimension plain = new ContactSheet(STYLE).size(rows);
+    BufferedImage sheet = new ContactSheet(STYLE).render("walk", "Number on each arrow: the step cost", rows);
+    assertThat(sheet.getHeight()).isEqualTo(plain.height + 20);
+    // the legend's line (below the 20 px title line) holds text
+    assertThat(darkPixels(sheet, 10, 30, 250, 20)).isPositive(); // sheet width 2*10 + 3*64 + 2*40 = 292
+  }
+
+  @Test
   void rejectsMismatchedScores() {
     BufferedImage img = solid(8, 8, Color.RED);
     assertThatThrownBy(() -> new ContactSheetRow("x",

@@ -33,9 +33,14 @@ final class PreviewPlayer extends HBox {
     view.setPreserveRatio(true);
     Button play = new Button("Play");
     play.setId("play-preview");
+    // the button says what a press will do: Pause while playing, Play otherwise
+    play.textProperty().bind(javafx.beans.binding.Bindings.when(timeline.statusProperty().isEqualTo(
+        Animation.Status.RUNNING)).then("Pause").otherwise("Play"));
     play.setOnAction(e -> {
       if (timeline.getStatus() == Animation.Status.RUNNING) {
         timeline.pause();
+      } else if (timeline.getStatus() == Animation.Status.PAUSED) {
+        timeline.play();
       } else if (!frames.isEmpty()) {
         timeline.playFromStart();
       }
@@ -51,6 +56,11 @@ final class PreviewPlayer extends HBox {
     getChildren().addAll(view, new VBox(8, text, new HBox(8, play, scrub)));
     getStyleClass().add("preview-bar");
     setPadding(new Insets(8, 12, 8, 12));
+  }
+
+  /** Whether the preview is playing (the button then reads Pause). */
+  boolean playing() {
+    return timeline.getStatus() == Animation.Status.RUNNING;
   }
 
   /** Shows {@code raw} (or nothing when null or empty) and plays it once. */

@@ -16,6 +16,7 @@ import javafx.scene.layout.VBox;
 import javafx.stage.DirectoryChooser;
 import org.morphscout.app.gui.common.MessageLine;
 import org.morphscout.indexer.catalog.ImageStore;
+import org.morphscout.indexer.text.HumanTime;
 
 /** Add a folder, watch progress, cancel; failures with their reasons below. */
 public final class IndexingView extends BorderPane {
@@ -76,9 +77,11 @@ public final class IndexingView extends BorderPane {
     reason.setCellValueFactory(c -> new ReadOnlyStringWrapper(c.getValue().reason()));
     reason.setPrefWidth(420);
     TableColumn<ImageStore.Failure, String> when = new TableColumn<>("When");
-    when.setCellValueFactory(c -> new ReadOnlyStringWrapper(c.getValue().failedAt()));
-    when.setPrefWidth(180);
+    when.setCellValueFactory(c -> new ReadOnlyStringWrapper(HumanTime.localIso(c.getValue().failedAt())));
+    when.setPrefWidth(130);
     failures.getColumns().setAll(java.util.List.of(path, reason, when));
+    // the inspector follows the selected failure
+    failures.getSelectionModel().selectedItemProperty().addListener((o, a, f) -> vm.inspect(f));
     failures.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
     Label heading = new Label("Failures");
     heading.getStyleClass().add("pane-heading");

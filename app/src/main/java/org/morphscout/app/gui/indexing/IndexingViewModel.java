@@ -183,4 +183,11 @@ public final class IndexingViewModel {
   public ObservableList<ImageStore.Failure> failures() {
     return failures;
   }
+
+  /** Shows a failed image in the inspector (the failures table's selection). */
+  public void inspect(ImageStore.Failure failure) {
+    if (failure != null) {
+      session.row(failure.imageId()).ifPresent(session.selectedProperty()::set);
+    }
+  }
 }

@@ -26,6 +26,7 @@ import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.Silhouette;
+import org.morphscout.indexer.text.HumanTime;
 
 /** The selected image's details and the actions on it. Follows the session's selection. */
 public final class InspectorViewModel {
@@ -108,6 +109,9 @@ public final class InspectorViewModel {
     f.add(new Fact("Size", row.width() > 0 ? row.width() + " × " + row.height() + " px" : "unknown"));
     f.add(new Fact("File", humanBytes(row.size()) + (row.format() == null ? "" : ", " + row.format().toUpperCase(
         Locale.ROOT))));
+    if (row.mtimeMs() > 0) {
+      f.add(new Fact("Modified", HumanTime.localMillis(row.mtimeMs())));
+    }
     f.add(new Fact("Status", row.status().word()));
     return f;
   }

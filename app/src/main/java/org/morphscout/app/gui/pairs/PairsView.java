@@ -203,7 +203,7 @@ public final class PairsView extends BorderPane {
   /** Short column headers for the components shown as numbers; the full name goes in the tooltip. */
   static String header(String component) {
     return switch (component) {
-      case "appearance" -> "Look";
+      case "appearance" -> "Appearance";
       case "shape" -> "Shape";
       case "overlap" -> "Overlap";
       case "warpEffort" -> "Warp";
@@ -214,6 +214,13 @@ public final class PairsView extends BorderPane {
         yield h.isEmpty() ? h : Character.toUpperCase(h.charAt(0)) + h.substring(1);
       }
     };
+  }
+
+  /** Shows the first (or second) image of {@code pair} in the inspector. */
+  private void inspect(PairRow pair, boolean first) {
+    if (pair != null) {
+      session.row(first ? pair.suggestion().a() : pair.suggestion().b()).ifPresent(session.selectedProperty()::set);
+    }
   }
 
   private VBox detail() {
@@ -238,6 +245,8 @@ public final class PairsView extends BorderPane {
     });
     Label legend = new Label("orange: first only · blue: second only · dark: both");
     legend.getStyleClass().add("legend");
+    a.setOnMouseClicked(e -> inspect(vm.selectedProperty().get(), true));
+    b.setOnMouseClicked(e -> inspect(vm.selectedProperty().get(), false));
     vm.selectedProperty().addListener((o, x, r) -> {
       a.show(r == null ? null : session.row(r.suggestion().a()).orElse(null), r == null ? null : r.nameA(), null,
           thumbs);

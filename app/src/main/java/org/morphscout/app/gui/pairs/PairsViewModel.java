@@ -59,6 +59,12 @@ public final class PairsViewModel {
     this.session = session;
     this.runner = runner;
     selected.addListener((o, a, row) -> loadOverlay(row));
+    // the inspector follows the table: a chosen pair shows its first image there (a click on a tile shows either)
+    selected.addListener((o, a, row) -> {
+      if (row != null) {
+        session.row(row.suggestion().a()).ifPresent(session.selectedProperty()::set);
+      }
+    });
     focus.addListener((o, a, f) -> scope.set(f == null ? "Whole library" : "Partners of " + session.name(f.id())));
     session.partnersRequestProperty().addListener((o, a, row) -> {
       if (row != null) {

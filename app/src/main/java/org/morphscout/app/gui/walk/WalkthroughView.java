@@ -2,7 +2,6 @@ package org.morphscout.app.gui.walk;
 
 import java.io.File;
 import java.util.List;
-import java.util.Locale;
 import javafx.collections.ListChangeListener;
 import javafx.geometry.Orientation;
 import javafx.geometry.Pos;
@@ -27,8 +26,9 @@ import org.morphscout.app.gui.common.MessageLine;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.text.Figures;
 
-/** The walkthrough strip: images in order with the size of each step drawn as a bar; drag to reorder. */
+/** The walk strip: images in order with the size of each step drawn as a bar; drag to reorder. */
 public final class WalkthroughView extends BorderPane {
   static final double TILE = 120;
   private static final DataFormat POSITION = new DataFormat("application/x-morphscout-strip-position");
@@ -48,9 +48,14 @@ public final class WalkthroughView extends BorderPane {
     strip.setOrientation(Orientation.HORIZONTAL);
     strip.setItems(vm.strip());
     strip.setCellFactory(l -> new StripCell());
-    strip.setPlaceholder(new Label("Select images in the Library (Ctrl+click), then Use Library selection; or use "
-        + "a folder."));
+    strip.setPlaceholder(new Label("Select images in Images (Ctrl+click), then Use the selection; or use a folder."));
     vm.steps().addListener((ListChangeListener<Double>) c -> strip.refresh());
+    // the inspector follows the strip's selection
+    strip.getSelectionModel().selectedItemProperty().addListener((o, a, r) -> {
+      if (r != null) {
+        session.selectedProperty().set(r);
+      }
+    });
     strip.setOnKeyPressed(e -> {
       int i = strip.getSelectionModel().getSelectedIndex();
       if (e.isAltDown() && i >= 0) {
@@ -68,7 +73,7 @@ public final class WalkthroughView extends BorderPane {
   }
 
   private VBox toolbar() {
-    Button selection = new Button("Use Library selection");
+    Button selection = new Button("Use the selection");
     selection.setId("walk-use-selection");
     selection.setOnAction(e -> vm.useSelection());
     Button folder = new Button("Use folder…");
@@ -97,9 +102,9 @@ public final class WalkthroughView extends BorderPane {
     export.setId("walk-export");
     export.setOnAction(e -> {
       FileChooser fc = new FileChooser();
-      fc.setTitle("Export the walkthrough order");
+      fc.setTitle("Export the walk (the same CSV as walk --csv)");
       fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("CSV", "*.csv"));
-      fc.setInitialFileName("walkthrough.csv");
+      fc.setInitialFileName("walk.csv");
       File f = fc.showSaveDialog(getScene().getWindow());
       if (f != null) {
         vm.export(f.toPath());
@@ -143,7 +148,10 @@ public final class WalkthroughView extends BorderPane {
     strip.getSelectionModel().select(to);
   }
 
-  /** One image with the step to the next one as a number and a bar (longer bar = bigger jump). */
+  /**
+   * One image with the step cost FROM the previous image TO it (as {@code walk} and its CSV count it) as a number and
+   * a bar (longer bar = bigger jump); the first image has none.
+   */
   private final class StripCell extends ListCell<ImageRow> {
     private final Tile tile = new Tile(TILE);
     private final Label step = new Label();
@@ -191,16 +199,16 @@ public final class WalkthroughView extends BorderPane {
       tile.show(row, (getIndex() + 1) + ". " + session.name(row.id()), null, thumbs);
       List<Double> steps = vm.steps();
       int i = getIndex();
-      if (i < steps.size()) {
+      if (i > 0 && i - 1 < steps.size()) {
         double max = steps.stream().mapToDouble(Double::doubleValue).max().orElse(1);
-        double s = steps.get(i);
-        step.setText(String.format(Locale.ROOT, "next → %.3f", s));
+        double s = steps.get(i - 1);
+        step.setText("step cost " + Figures.threeDigits(s));
         bar.setPrefWidth(Math.max(4, (TILE - 8) * (max <= 0 ? 0 : s / max)));
         bar.setMaxWidth(bar.getPrefWidth());
         bar.setVisible(true);
         bar.pseudoClassStateChanged(javafx.css.PseudoClass.getPseudoClass("largest"), s >= max - 1e-12);
       } else {
-        step.setText(i == steps.size() && i > 0 ? "end" : "");
+        step.setText(i == 0 && !steps.isEmpty() ? "start" : "");
         bar.setVisible(false);
       }
       setGraphic(box);

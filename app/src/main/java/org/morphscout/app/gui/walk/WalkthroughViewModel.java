@@ -1,9 +1,5 @@
 package org.morphscout.app.gui.walk;
 
-import java.io.IOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -19,14 +15,14 @@ import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
 import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.text.CsvCells;
+import org.morphscout.indexer.library.WalkTable;
 
 /**
- * A walkthrough: a set of images (the grid's selection, or a folder), ordered smoothly, with the size of each step;
+ * A walk: a set of images (the grid's selection, or a folder), ordered smoothly, with the size of each step;
  * the user can move images and the steps follow; the order can be exported.
  */
 public final class WalkthroughViewModel {
-  /** Most images a walkthrough takes from a folder. */
+  /** Most images a walk takes from a folder. */
   static final int MAX_IMAGES = 2000;
 
   private final Session session;
@@ -55,7 +51,7 @@ public final class WalkthroughViewModel {
   public void useSelection() {
     List<ImageRow> sel = List.copyOf(session.selection());
     if (sel.size() < 2) {
-      message.set("Select at least two images in the Library (Ctrl+click or Shift+click), then use them here.");
+      message.set("Select at least two images in Images (Ctrl+click or Shift+click), then use them here.");
       return;
     }
     load(sel);
@@ -77,7 +73,7 @@ public final class WalkthroughViewModel {
       return;
     }
     if (in.size() > MAX_IMAGES) {
-      message.set("The folder holds " + in.size() + " images; a walkthrough takes at most " + MAX_IMAGES + ".");
+      message.set("The folder holds " + in.size() + " images; a walk takes at most " + MAX_IMAGES + ".");
       return;
     }
     load(in);
@@ -102,7 +98,7 @@ public final class WalkthroughViewModel {
     List<ImageRow> before = List.copyOf(strip);
     running.set(true);
     message.set("");
-    pending = runner.submit("order walkthrough", token -> session.backends().walk().order(ids, token), ordered -> {
+    pending = runner.submit("order walk", token -> session.backends().walk().order(ids, token), ordered -> {
       running.set(false);
       List<ImageRow> rows = new ArrayList<>();
       for (long id : ordered) {
@@ -148,11 +144,15 @@ public final class WalkthroughViewModel {
       steps.setAll(s);
       double total = s.stream().mapToDouble(Double::doubleValue).sum();
       double max = s.stream().mapToDouble(Double::doubleValue).max().orElse(0);
-      summary.set(String.format(Locale.ROOT, "%d images · total %.2f · largest step %.2f", ids.size(), total, max));
+      summary.set(String.format(Locale.ROOT, "%d images · total step cost %.3f · largest step %.3f", ids.size(), total,
+          max));
     }, e -> message.set(Messages.of(e)));
   }
 
-  /** Writes the order as CSV: position, id, path, step to the next image. */
+  /**
+   * Writes the order as CSV in exactly the format of {@code walk --csv} (position, path, step cost FROM the previous
+   * image, the first row's empty), by the same library writer, through the library's safe output file.
+   */
   public void export(Path file) {
     List<ImageRow> rows = List.copyOf(strip);
     List<Double> s = List.copyOf(steps);
@@ -160,27 +160,17 @@ public final class WalkthroughViewModel {
       message.set("Nothing to export yet.");
       return;
     }
-    runner.submit("export walkthrough", token -> {
-      write(rows, s, file);
+    if (s.size() != rows.size() - 1) {
+      message.set("The steps are still being measured; export again in a moment.");
+      return;
+    }
+    runner.submit("export walk", token -> {
+      WalkTable.write(file, rows.stream().map(ImageRow::path).toList(), s);
       return rows.size();
     }, n -> {
       message.set("");
       summary.set("Exported " + n + " images in order to " + file);
     }, e -> message.set(Messages.of(e)));
-  }
-
-  static void write(List<ImageRow> rows, List<Double> steps, Path file) throws IOException {
-    Path parent = file.toAbsolutePath().getParent();
-    if (parent != null) {
-      Files.createDirectories(parent);
-    }
-    try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
-        CsvCells.Printer csv = CsvCells.printer(w, "position", "id", "path", "step_to_next")) {
-      for (int i = 0; i < rows.size(); i++) {
-        String step = i < steps.size() ? String.format(Locale.ROOT, "%.4f", steps.get(i)) : "";
-        csv.row(i + 1, rows.get(i).id(), rows.get(i).path(), step);
-      }
-    }
   }
 
   public ObservableList<ImageRow> strip() {
