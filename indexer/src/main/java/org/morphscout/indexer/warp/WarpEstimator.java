@@ -5,7 +5,7 @@ import org.morphscout.indexer.silhouette.Mask;
 /**
  * Estimates the warp between two silhouettes: similarity alignment, then diffeomorphic demons on the aligned masks,
  * then the overlap, effort and fold measures of {@link WarpResult}. Immutable and thread-safe; one estimate at the
- * default 64 x 64 grid takes a few milliseconds on one core (see {@link WarpBenchmark}).
+ * default 64 x 64 grid takes a few milliseconds on one core (see the pair score latency in docs/BENCHMARKS.md).
  */
 public final class WarpEstimator {
   private final SimilarityAlignment alignment;
