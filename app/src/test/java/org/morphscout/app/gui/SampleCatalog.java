@@ -17,7 +17,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import javax.imageio.ImageIO;
-import org.morphscout.app.gui.service.MaskAligner;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.feature.ColourStats;
@@ -162,7 +161,7 @@ public final class SampleCatalog {
       }
     }
     Mask mask = new Mask(128, 96, bits);
-    Mask grid = MaskAligner.align(mask, mask, 16).a();
+    Mask grid = normalise(mask, 16);
     float[] shape = new float[256];
     double norm = 0;
     for (int i = 0; i < 256; i++) {
@@ -193,5 +192,41 @@ public final class SampleCatalog {
   /** The row of a sample picture by file name. */
   public static ImageRow row(Library lib, String name) {
     return lib.images().all().stream().filter(r -> r.path().endsWith("/" + name)).findFirst().orElseThrow();
+  }
+
+  /**
+   * The sample shape vector's grid: the mask moved so its centroid sits at the grid centre and scaled so its area is
+   * 18% of the grid (translation + isotropic scale, as moment-based shape comparison normalises; Hu 1962).
+   */
+  private static Mask normalise(Mask m, int size) {
+    int area = m.area();
+    if (area == 0) {
+      return Mask.empty(size, size);
+    }
+    double cx = 0;
+    double cy = 0;
+    for (int y = 0; y < m.height(); y++) {
+      for (int x = 0; x < m.width(); x++) {
+        if (m.get(x, y)) {
+          cx += x + 0.5;
+          cy += y + 0.5;
+        }
+      }
+    }
+    cx /= area;
+    cy /= area;
+    double scale = Math.sqrt(0.18 * size * size / area);
+    byte[] out = new byte[size * size];
+    double half = size / 2.0;
+    for (int gy = 0; gy < size; gy++) {
+      int sy = (int) Math.floor((gy + 0.5 - half) / scale + cy);
+      for (int gx = 0; gx < size; gx++) {
+        int sx = (int) Math.floor((gx + 0.5 - half) / scale + cx);
+        if (sy >= 0 && sy < m.height() && sx >= 0 && sx < m.width() && m.get(sx, sy)) {
+          out[gy * size + gx] = 1;
+        }
+      }
+    }
+    return new Mask(size, size, out);
   }
 }

@@ -41,6 +41,20 @@ public final class WarpEstimator {
     return measure(iouBefore, aligned, field);
   }
 
+  /**
+   * The similarity alignment {@link #estimate} starts from, alone: the same transform (rotation and flip included,
+   * within the same turn limit) and the same aligned IoU ({@link Alignment#iou()} = {@link WarpResult#iouAligned()})
+   * the pair measures and reasons report. For showing the aligned silhouettes without the cost of a registration.
+   *
+   * @throws IllegalArgumentException when either mask is empty
+   */
+  public Alignment align(Mask a, Mask b) {
+    if (a.area() == 0 || b.area() == 0) {
+      throw new IllegalArgumentException("cannot align an empty mask");
+    }
+    return alignment.align(a, b);
+  }
+
   /** The measures of a given field between aligned masks (used by tests and alternative registrations). */
   static WarpResult measure(double iouBefore, Alignment aligned, DisplacementField field) {
     int n = field.width();

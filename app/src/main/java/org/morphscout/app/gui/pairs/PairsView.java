@@ -240,8 +240,8 @@ public final class PairsView extends BorderPane {
     iou.getStyleClass().add("summary");
     vm.overlayProperty().addListener((o, x, m) -> {
       overlay.setImage(m == null ? null : MaskImages.pair(m));
-      iou.setText(m == null ? "" : String.format(Locale.ROOT, "Silhouettes aligned by centre and area: IoU %.2f",
-          m.iou()));
+      iou.setText(m == null ? "" : String.format(Locale.ROOT, "Aligned IoU %.2f (centre, size and turn "
+          + "matched, as in the reasons)", m.iou()));
     });
     Label legend = new Label("orange: first only · blue: second only · dark: both");
     legend.getStyleClass().add("legend");

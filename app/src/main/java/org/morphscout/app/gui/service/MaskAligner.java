@@ -1,61 +1,30 @@
 package org.morphscout.app.gui.service;
 
 import org.morphscout.indexer.silhouette.Mask;
+import org.morphscout.indexer.warp.Alignment;
+import org.morphscout.indexer.warp.WarpEstimator;
 
 /**
- * Aligns two silhouettes for display and a quick overlap figure: each is translated so its centroid sits at the grid
- * centre and scaled so its area becomes {@link #AREA_FRACTION} of the grid (translation + isotropic scale, the
- * normalisation used for moment-based shape comparison; no rotation). Sampling is nearest-neighbour. Stateless.
+ * Aligns two silhouettes for the pairs view's overlay with the library's own alignment, the one the pair measures
+ * and reasons use ({@link WarpEstimator#align}: centroids and areas matched, B turned onto A's axis within the morph's
+ * turn limit, flipped when that fits better), drawn on a finer grid for the screen. The IoU shown is that alignment's
+ * aligned IoU, the {@code alignedIou} the command line prints for the pair. Stateless.
  */
 public final class MaskAligner {
-  /** Object area after alignment, as a fraction of the grid: small enough that elongated shapes stay inside. */
-  static final double AREA_FRACTION = 0.18;
+  private static final WarpEstimator ALIGNMENT = new WarpEstimator();
 
   private MaskAligner() {}
 
-  /** Aligns both masks onto a {@code size} x {@code size} grid (size 16..1024). */
+  /** Aligns both masks onto a {@code size} x {@code size} grid (size 16..1024); empty masks give empty grids, IoU 0. */
   public static AlignedMasks align(Mask a, Mask b, int size) {
     if (size < 16 || size > 1024) {
       throw new IllegalArgumentException("grid size must be 16..1024, got " + size);
     }
-    Mask ga = normalise(a, size);
-    Mask gb = normalise(b, size);
-    return new AlignedMasks(ga, gb, ga.iou(gb));
-  }
-
-  static Mask normalise(Mask m, int size) {
-    int area = m.area();
-    if (area == 0) {
-      return Mask.empty(size, size);
+    if (a.area() == 0 || b.area() == 0) {
+      return new AlignedMasks(Mask.empty(size, size), Mask.empty(size, size), 0);
     }
-    double cx = 0;
-    double cy = 0;
-    for (int y = 0; y < m.height(); y++) {
-      for (int x = 0; x < m.width(); x++) {
-        if (m.get(x, y)) {
-          cx += x + 0.5;
-          cy += y + 0.5;
-        }
-      }
-    }
-    cx /= area;
-    cy /= area;
-    // grid px per source px, so that area * scale^2 = AREA_FRACTION * size^2
-    double scale = Math.sqrt(AREA_FRACTION * size * size / area);
-    byte[] out = new byte[size * size];
-    double half = size / 2.0;
-    for (int gy = 0; gy < size; gy++) {
-      int sy = (int) Math.floor((gy + 0.5 - half) / scale + cy);
-      if (sy < 0 || sy >= m.height()) {
-        continue;
-      }
-      for (int gx = 0; gx < size; gx++) {
-        int sx = (int) Math.floor((gx + 0.5 - half) / scale + cx);
-        if (sx >= 0 && sx < m.width() && m.get(sx, sy)) {
-          out[gy * size + gx] = 1;
-        }
-      }
-    }
-    return new Mask(size, size, out);
+    Alignment aligned = ALIGNMENT.align(a, b);
+    Mask[] drawn = aligned.draw(a, b, size);
+    return new AlignedMasks(drawn[0], drawn[1], aligned.iou());
   }
 }
