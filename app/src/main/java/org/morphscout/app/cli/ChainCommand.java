@@ -49,9 +49,15 @@ final class ChainCommand implements Callable<Integer> {
   @Parameters(index = "1", paramLabel = "<to>", description = "End image (in the catalog).")
   String to;
 
-  @Option(names = "--alternatives", paramLabel = "<k>", defaultValue = "3",
-      description = "How many different chains (default: ${DEFAULT-VALUE}).")
-  int alternatives;
+  // No defaultValue attribute: picocli would apply it after parsing and undo the hidden alias below.
+  @Option(names = "--count", paramLabel = "<n>", description = "How many different chains (default: "
+      + "${DEFAULT-VALUE}).")
+  int alternatives = 3;
+
+  @Option(names = "--alternatives", hidden = true, paramLabel = "<n>", description = "Earlier name of --count.")
+  void alternativesAlias(int n) {
+    alternatives = n;
+  }
 
   @Option(names = "--min-steps", paramLabel = "<n>", defaultValue = "1", description = "Fewest steps (default: "
       + "${DEFAULT-VALUE}).")
@@ -79,7 +85,7 @@ final class ChainCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    OptionCheck.of(spec).between("--alternatives", alternatives, 1, 20)
+    OptionCheck.of(spec).between("--count", alternatives, 1, 20)
         .between("--min-steps", minSteps, 1, ChainQuery.STEP_LIMIT)
         .between("--max-steps", maxSteps, minSteps, ChainQuery.STEP_LIMIT).between("--shape-weight", shapeWeight, 0, 1);
     PrintWriter out = spec.commandLine().getOut();
@@ -147,9 +153,9 @@ final class ChainCommand implements Callable<Integer> {
         }
         c.put("steps", steps);
         c.put("maxStep", PairRows.round(d.chain().maxStep(), 4));
-        c.put("evenness", PairRows.round(d.chain().evenness(), 4));
+        c.put("unevenness", PairRows.round(d.chain().evenness(), 4));
         c.put("total", PairRows.round(d.chain().total(), 4));
-        c.put("overlap", PairRows.round(d.chain().overlap(), 4));
+        c.put("sharedImages", PairRows.round(d.chain().overlap(), 4));
         chains.add(c);
       }
       doc.put("chains", chains);
@@ -163,7 +169,7 @@ final class ChainCommand implements Callable<Integer> {
     }
     if (format.csv) {
       try (CsvOut csv = new CsvOut(out, "chain", "step", "a", "b", "cost", "appearance", "aligned_iou",
-          "warp_effort", "colour_gap", "score", "verdict")) {
+          "mean_displacement", "colour_gap", "score", "verdict")) {
         int n = 0;
         for (ChainDetail d : answer.chains()) {
           n++;
@@ -171,7 +177,7 @@ final class ChainCommand implements Callable<Integer> {
           for (StepDetail s : d.steps()) {
             Map<String, Object> st = step(s, path);
             csv.row(n, ++i, st.get("a"), st.get("b"), st.get("cost"), st.get("appearance"), st.get("alignedIou"),
-                st.get("warpEffort"), st.get("colourGap"), st.get("score"), st.get("verdict"));
+                st.get("meanDisplacement"), st.get("colourGap"), st.get("score"), st.get("verdict"));
           }
         }
       }
@@ -190,15 +196,15 @@ final class ChainCommand implements Callable<Integer> {
     }
     int n = 0;
     for (ChainDetail d : answer.chains()) {
-      out.printf("%nchain %d: %d steps, largest step %s, evenness %s, overlap with earlier chains %s%n", ++n,
+      out.printf("%nchain %d: %d steps, largest step %s, unevenness %s, images shared with earlier chains %s%n", ++n,
           d.steps().size(), Text.num(d.chain().maxStep(), 3), Text.num(d.chain().evenness(), 2),
           Text.num(d.chain().overlap(), 2));
       out.printf("  %s%n", Terminal.safe(path.apply(d.chain().images().get(0))));
       for (StepDetail s : d.steps()) {
         Map<String, Object> st = step(s, path);
-        out.printf("    step cost %s | score %s %s | IoU %s, warp effort %s, colour gap %s%n  %s%n",
+        out.printf("    step cost %s | score %s %s | IoU %s, mean displacement %s, colour gap %s%n  %s%n",
             Text.num(s.cost(), 3), Text.num(s.score().score(), 0), s.score().verdict().label(), st.get("alignedIou"),
-            st.get("warpEffort"), st.get("colourGap"), Terminal.safe(path.apply(s.b())));
+            st.get("meanDisplacement"), st.get("colourGap"), Terminal.safe(path.apply(s.b())));
       }
     }
   }
@@ -211,7 +217,7 @@ final class ChainCommand implements Callable<Integer> {
     m.put("appearance", PairRows.round(s.components().appearanceDistance(), 4));
     m.put("shape", PairRows.round(s.components().shapeIncompatibility(), 4));
     m.put("alignedIou", PairRows.round(s.score().measures().getOrDefault("alignedIou", Double.NaN), 3));
-    m.put("warpEffort", PairRows.round(s.score().measures().getOrDefault("meanDisplacement", Double.NaN), 3));
+    m.put("meanDisplacement", PairRows.round(s.score().measures().getOrDefault("meanDisplacement", Double.NaN), 3));
     m.put("colourGap", PairRows.round(s.components().colourGap(), 2));
     m.put("score", PairRows.round(s.score().score(), 1));
     m.put("verdict", s.score().verdict().label());

@@ -169,7 +169,7 @@ final class DemoCommand implements Callable<Integer> {
       out.println("  no chain: " + chain.reason());
     } else {
       ChainService.ChainDetail c = chain.chains().get(0);
-      out.printf("  %d steps, largest step %s, evenness %s:%n", c.steps().size(), Text.num(c.chain().maxStep(), 3),
+      out.printf("  %d steps, largest step %s, unevenness %s:%n", c.steps().size(), Text.num(c.chain().maxStep(), 3),
           Text.num(c.chain().evenness(), 2));
       for (long id : c.chain().images()) {
         out.printf("    %s%n", rel(libraryDir, path(library, id)));

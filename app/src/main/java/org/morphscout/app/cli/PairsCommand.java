@@ -44,8 +44,14 @@ final class PairsCommand implements Callable<Integer> {
   @Option(names = "--for", paramLabel = "<image>", description = "Best partners of this image (catalog or any file).")
   String forImage;
 
-  @Option(names = "--top", paramLabel = "<n>", defaultValue = "20", description = "How many (default: ${DEFAULT-VALUE}).")
-  int top;
+  // No defaultValue attribute: picocli would apply it after parsing and undo the hidden alias below.
+  @Option(names = "--count", paramLabel = "<n>", description = "How many pairs (default: ${DEFAULT-VALUE}).")
+  int top = 20;
+
+  @Option(names = "--top", hidden = true, paramLabel = "<n>", description = "Earlier name of --count.")
+  void topAlias(int n) {
+    top = n;
+  }
 
   @Option(names = "--min-score", paramLabel = "<s>", defaultValue = "0",
       description = "Leave out pairs scoring below this (default: ${DEFAULT-VALUE}).")
@@ -63,7 +69,7 @@ final class PairsCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    OptionCheck.of(spec).between("--top", top, 1, Integer.MAX_VALUE).between("--candidates", candidates, 1, 1000)
+    OptionCheck.of(spec).between("--count", top, 1, Integer.MAX_VALUE).between("--candidates", candidates, 1, 1000)
         .between("--min-score", minScore, 0, 100);
     PrintWriter out = spec.commandLine().getOut();
     PairQuery query = new PairQuery(candidates, top, minScore);

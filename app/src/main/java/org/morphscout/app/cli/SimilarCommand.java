@@ -33,8 +33,14 @@ final class SimilarCommand implements Callable<Integer> {
   @Parameters(index = "0", paramLabel = "<image>", description = "The query image.")
   String image;
 
-  @Option(names = "-k", paramLabel = "<n>", defaultValue = "10", description = "How many (default: ${DEFAULT-VALUE}).")
-  int k;
+  // No defaultValue attribute: picocli would apply it after parsing and undo the hidden alias below.
+  @Option(names = "--count", paramLabel = "<n>", description = "How many images (default: ${DEFAULT-VALUE}).")
+  int k = 10;
+
+  @Option(names = "-k", hidden = true, paramLabel = "<n>", description = "Earlier name of --count.")
+  void kAlias(int n) {
+    k = n;
+  }
 
   @Option(names = "--by", paramLabel = "appearance|shape|both", defaultValue = "appearance",
       description = "What similar means (default: ${DEFAULT-VALUE}).")
@@ -45,7 +51,7 @@ final class SimilarCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    OptionCheck.of(spec).between("-k", k, 1, 10_000);
+    OptionCheck.of(spec).between("--count", k, 1, 10_000);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openForReading(root.catalogDir());
         QueryContext context = new QueryContext(library, analysis.setup())) {

@@ -62,13 +62,13 @@ class ChainWalkPreviewCommandTest {
         max = Math.max(max, s.get("cost").asDouble());
       }
       assertThat(c.get("maxStep").asDouble()).isCloseTo(max, org.assertj.core.data.Offset.offset(1e-3));
-      assertThat(c.get("evenness").asDouble()).isGreaterThanOrEqualTo(0);
+      assertThat(c.get("unevenness").asDouble()).isGreaterThanOrEqualTo(0);
     }
   }
 
   @Test
   void chainHonoursAlternativesStepBoundsAvoidAndVia() {
-    assertThat(cli.run("chain", from, to, "--json", "--alternatives", "1").succeeds().json().get("chains"))
+    assertThat(cli.run("chain", from, to, "--json", "--count", "1").succeeds().json().get("chains"))
         .hasSize(1);
 
     JsonNode bounded = cli.run("chain", from, to, "--json", "--min-steps", "3", "--max-steps", "4").succeeds().json();

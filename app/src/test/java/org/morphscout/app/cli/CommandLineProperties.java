@@ -34,9 +34,9 @@ class CommandLineProperties {
   Arbitrary<List<String>> optionLines() {
     Arbitrary<List<String>> lines = Arbitraries.of(
         List.of("index", "--threads"), List.of("index", "--neighbours"), List.of("index", "--time-limit"),
-        List.of("index", "--max-megapixels"), List.of("pairs", "--top"), List.of("pairs", "--candidates"),
+        List.of("index", "--max-megapixels"), List.of("pairs", "--count"), List.of("pairs", "--candidates"),
         List.of("pairs", "--min-score"), List.of("walk", "--shape-weight"), List.of("chain", "a.png", "b.png",
-            "--alternatives"), List.of("chain", "a.png", "b.png", "--max-steps"), List.of("similar", "a.png", "-k"),
+            "--count"), List.of("chain", "a.png", "b.png", "--max-steps"), List.of("similar", "a.png", "--count"),
         List.of("preview", "a.png", "b.png", "--out", "x.gif", "--frame-ms"), List.of("decisions", "--only"),
         List.of("similar", "a.png", "--by"), List.of("index", "--silhouettes"));
     return lines;

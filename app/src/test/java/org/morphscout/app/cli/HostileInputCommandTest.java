@@ -40,12 +40,12 @@ class HostileInputCommandTest {
     String[][] lines = {
       {"index", "--threads", "0"}, {"index", "--threads", "999"}, {"index", "--neighbours", "-3"},
       {"index", "--time-limit", "0"}, {"index", "--max-megapixels", "-5"}, {"index", "--max-megapixels", "NaN"},
-      {"index", "--max-megapixels", "Infinity"}, {"pairs", "--top", "0"}, {"pairs", "--candidates", "0"},
+      {"index", "--max-megapixels", "Infinity"}, {"pairs", "--count", "0"}, {"pairs", "--candidates", "0"},
       {"pairs", "--min-score", "NaN"}, {"pairs", "--min-score", "101"}, {"walk", "--shape-weight", "NaN"},
       {"walk", "--shape-weight", "2"}, {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--frame-ms", "-5"},
       {"preview", a, b, "--out", tmp.resolve("p.gif").toString(), "--frames-per-step", "1"},
-      {"chain", a, b, "--alternatives", "0"}, {"chain", a, b, "--min-steps", "5", "--max-steps", "4"},
-      {"chain", a, b, "--shape-weight", "-1"}, {"similar", a, "-k", "0"}, {"demo", "--products", "0"},
+      {"chain", a, b, "--count", "0"}, {"chain", a, b, "--min-steps", "5", "--max-steps", "4"},
+      {"chain", a, b, "--shape-weight", "-1"}, {"similar", a, "--count", "0"}, {"demo", "--products", "0"},
       {"bench", "--photos", "0"},
     };
     for (String[] line : lines) {

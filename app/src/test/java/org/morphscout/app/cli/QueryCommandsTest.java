@@ -45,7 +45,7 @@ class QueryCommandsTest {
   void similarListsNearestFirstWithoutTheQuery() {
     for (String by : List.of("appearance", "shape", "both")) {
       String query = Cli.abs(lib.original);
-      JsonNode doc = cli.run("similar", query, "-k", "5", "--by", by, "--json").succeeds().json();
+      JsonNode doc = cli.run("similar", query, "--count", "5", "--by", by, "--json").succeeds().json();
       assertThat(doc.get("query").asText()).isEqualTo(query);
       JsonNode results = doc.get("results");
       assertThat(results).as("by %s", by).hasSize(5);
@@ -67,7 +67,7 @@ class QueryCommandsTest {
     // outline lies between catalog members 3 (t = 3/7) and 4 (t = 4/7).
     List<FamilyItem> fine = TestFamilies.silhouetteFamily(SEED, 15, Archetype.VASE, Archetype.BOTTLE);
     Path outside = Cli.png(tmp.resolve("outside/half-way.png"), fine.get(7).image());
-    JsonNode doc = cli.run("similar", outside.toString(), "-k", "3", "--by", "shape", "--json").succeeds().json();
+    JsonNode doc = cli.run("similar", outside.toString(), "--count", "3", "--by", "shape", "--json").succeeds().json();
     assertThat(doc.get("query").asText()).isEqualTo(Cli.abs(outside));
     JsonNode results = doc.get("results");
     assertThat(results).hasSize(3);
@@ -82,7 +82,7 @@ class QueryCommandsTest {
     } catch (IOException e) {
       throw new java.io.UncheckedIOException(e);
     }
-    JsonNode same = cli.run("similar", copy.toString(), "-k", "4", "--json").succeeds().json();
+    JsonNode same = cli.run("similar", copy.toString(), "--count", "4", "--json").succeeds().json();
     List<String> paths = new ArrayList<>();
     same.get("results").forEach(r -> paths.add(r.get("path").asText()));
     assertThat(paths).hasSize(4).doesNotContain(Cli.abs(lib.family.get(2)), Cli.abs(copy));
@@ -90,7 +90,7 @@ class QueryCommandsTest {
 
   @Test
   void pairsJsonHasScoresComponentsAndReasonsBestFirst() {
-    JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--top", "30").succeeds().json().get("pairs");
+    JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--count", "30").succeeds().json().get("pairs");
     assertThat(pairs).isNotEmpty().hasSizeLessThanOrEqualTo(30);
     double last = Double.MAX_VALUE;
     for (JsonNode p : pairs) {
@@ -107,17 +107,26 @@ class QueryCommandsTest {
   }
 
   @Test
+  void earlierOptionNamesStillWorkAsHiddenAliases() {
+    // --count replaced -k (similar), --top (pairs) and --alternatives (chain); scripts using the old names keep working.
+    String query = Cli.abs(lib.original);
+    assertThat(cli.run("similar", query, "-k", "2", "--json").succeeds().json().get("results")).hasSize(2);
+    assertThat(cli.run("pairs", "--top", "2", "--json").succeeds().json().get("pairs")).hasSize(2);
+    assertThat(cli.run("similar", "--help").succeeds().out()).contains("--count").doesNotContain("-k,", " -k ");
+  }
+
+  @Test
   void pairsTopMinScoreForAndCsv() throws IOException {
-    JsonNode all = cli.run("pairs", "--candidates", "4", "--json", "--top", "200").succeeds().json().get("pairs");
+    JsonNode all = cli.run("pairs", "--candidates", "4", "--json", "--count", "200").succeeds().json().get("pairs");
     double median = all.get(all.size() / 2).get("score").asDouble();
-    JsonNode high = cli.run("pairs", "--candidates", "4", "--json", "--top", "200", "--min-score", "" + median)
+    JsonNode high = cli.run("pairs", "--candidates", "4", "--json", "--count", "200", "--min-score", "" + median)
         .succeeds().json().get("pairs");
     assertThat(high).isNotEmpty().hasSizeLessThan(all.size());
     high.forEach(p -> assertThat(p.get("score").asDouble()).isGreaterThanOrEqualTo(median));
     // Another candidate count than the stored one is scored live, and the answer says so; nothing else to explain.
-    assertThat(cli.run("pairs", "--candidates", "4", "--json", "--top", "200").succeeds().json().get("notes"))
+    assertThat(cli.run("pairs", "--candidates", "4", "--json", "--count", "200").succeeds().json().get("notes"))
         .singleElement().satisfies(n -> assertThat(n.asText()).startsWith("scored live: ").contains("not 4"));
-    assertThat(cli.run("pairs", "--json", "--top", "200").succeeds().json().get("notes"))
+    assertThat(cli.run("pairs", "--json", "--count", "200").succeeds().json().get("notes"))
         .as("answered from the stored pairs: nothing to explain").isEmpty();
     Cli.Run none = cli.run("pairs", "--json", "--min-score", "100").succeeds();
     if (none.json().get("pairs").isEmpty()) { // no silent nothing: an empty answer says why, in JSON and on stderr
@@ -126,12 +135,12 @@ class QueryCommandsTest {
     }
 
     String member = Cli.abs(lib.family.get(2));
-    JsonNode partners = cli.run("pairs", "--candidates", "4", "--for", member, "--json", "--top", "5").succeeds()
+    JsonNode partners = cli.run("pairs", "--candidates", "4", "--for", member, "--json", "--count", "5").succeeds()
         .json().get("pairs");
     assertThat(partners).isNotEmpty().hasSizeLessThanOrEqualTo(5);
     partners.forEach(p -> assertThat(List.of(p.get("a").asText(), p.get("b").asText())).contains(member));
 
-    Cli.Run csv = cli.run("pairs", "--candidates", "4", "--csv", "--top", "3").succeeds();
+    Cli.Run csv = cli.run("pairs", "--candidates", "4", "--csv", "--count", "3").succeeds();
     assertThat(csv.csvHeader()).startsWith("a", "b", "score", "verdict", "reasons");
     List<CSVRecord> rows = csv.csv();
     assertThat(rows).as("--top 3").hasSize(3);
@@ -145,7 +154,7 @@ class QueryCommandsTest {
   @Test
   void nearDuplicatesAreListedAndNeverPaired() {
     Set<String> group = new HashSet<>(lib.duplicateGroup());
-    JsonNode dupes = cli.run("pairs", "--candidates", "8", "--duplicates", "--json", "--top", "200").succeeds().json()
+    JsonNode dupes = cli.run("pairs", "--candidates", "8", "--duplicates", "--json", "--count", "200").succeeds().json()
         .get("duplicates");
     Set<String> seen = new HashSet<>();
     for (JsonNode d : dupes) {
@@ -157,7 +166,7 @@ class QueryCommandsTest {
     // Every edited copy is found as a near-duplicate inside its group (TestFamilies.nearDuplicates ground truth).
     assertThat(seen).as("seed %d", SEED).containsExactlyInAnyOrderElementsOf(group);
 
-    JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--top", "500").succeeds().json().get("pairs");
+    JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--count", "500").succeeds().json().get("pairs");
     assertThat(pairs).as("pairs to check against the near-duplicate group").isNotEmpty();
     for (JsonNode p : pairs) {
       assertThat(group.contains(p.get("a").asText()) && group.contains(p.get("b").asText()))
@@ -168,7 +177,7 @@ class QueryCommandsTest {
   @Test
   void onlyEditedCopiesAreNearDuplicates() {
     Set<String> group = new HashSet<>(lib.duplicateGroup());
-    JsonNode dupes = cli.run("pairs", "--duplicates", "--json", "--top", "200").succeeds().json().get("duplicates");
+    JsonNode dupes = cli.run("pairs", "--duplicates", "--json", "--count", "200").succeeds().json().get("duplicates");
     for (JsonNode d : dupes) {
       // Near-duplicates are the same picture resized, recompressed or lightly edited (pairs --help); the family's
       // members are different vessels, the unrelated pictures other vessels or glazes.
