@@ -168,7 +168,7 @@ class ScreenshotsFxTest {
     });
     fx(() -> scrollGridTo(row(VASE)));
     waitUntil(() -> vm.inspector().maskProperty().get() != null);
-    shoot(dir, "library");
+    shoot(dir, "images");
 
     fx(() -> vm.inspector().overlayProperty().set(true));
     fx(() -> vm.inspector().findSimilar(SimilarityMode.SHAPE));
@@ -256,9 +256,9 @@ class ScreenshotsFxTest {
     // (either direction; up to two breaks allowed for 2-opt's local optima).
     assertThat(trueNeighbours(ordered, filmed)).as("ordered %s, filmed %s", ordered, filmed)
         .isGreaterThanOrEqualTo(filmed.size() - 3);
-    shoot(dir, "walkthrough");
+    shoot(dir, "walk");
 
-    assertThat(dir.resolve("walkthrough.png")).exists();
+    assertThat(dir.resolve("walk.png")).exists();
   }
 
   /** The shelf views' file names in the order the generator filmed them ({@code shelf_order} in the manifest). */

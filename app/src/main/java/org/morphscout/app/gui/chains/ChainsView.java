@@ -277,9 +277,11 @@ public final class ChainsView extends BorderPane {
     }
   }
 
+  /** A step part's short label under the step cost; the tooltip gives the full key. */
   static String abbreviate(String component) {
     return switch (component) {
-      case "appearance" -> "look";
+      case "appearanceDistance" -> "appearance dist.";
+      case "shapeIncompatibility" -> "shape dist.";
       default -> component;
     };
   }

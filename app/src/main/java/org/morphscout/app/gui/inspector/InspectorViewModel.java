@@ -144,7 +144,7 @@ public final class InspectorViewModel {
       return bytes + " B";
     }
     double kb = bytes / 1024.0;
-    return kb < 1024 ? String.format(Locale.ROOT, "%.0f KB", kb) : String.format(Locale.ROOT, "%.1f MB", kb / 1024);
+    return kb < 1024 ? String.format(Locale.ROOT, "%.0f KiB", kb) : String.format(Locale.ROOT, "%.1f MiB", kb / 1024);
   }
 
   public void useAsStart() {

@@ -254,7 +254,7 @@ public final class LibraryViewModel {
 
   /** The root a row belongs to, as shown in the root filter. */
   public static String rootLabel(ImageStore.Root root) {
-    return root == null ? "All roots" : Path.of(root.path()).getFileName() + "  (" + root.path() + ")";
+    return root == null ? "All folders" : Path.of(root.path()).getFileName() + "  (" + root.path() + ")";
   }
 
   public ObservableList<ImageRow> visible() {

@@ -194,8 +194,10 @@ public final class PairsView extends BorderPane {
             : String.format(Locale.ROOT, Math.abs(v.doubleValue()) >= 10 ? "%.1f" : "%.2f", v.doubleValue()));
       }
     });
-    c.setPrefWidth(title.length() > 6 ? 80 : 56);
-    c.setMinWidth(48);
+    // wide enough for the whole title and the sort arrow: titles are never cut at the default window size
+    double titleWidth = 8.5 * title.length() + 26;
+    c.setPrefWidth(Math.max(56, titleWidth));
+    c.setMinWidth(Math.max(48, titleWidth));
     c.getStyleClass().add("numeric");
     return c;
   }
@@ -240,8 +242,8 @@ public final class PairsView extends BorderPane {
     iou.getStyleClass().add("summary");
     vm.overlayProperty().addListener((o, x, m) -> {
       overlay.setImage(m == null ? null : MaskImages.pair(m));
-      iou.setText(m == null ? "" : String.format(Locale.ROOT, "Aligned IoU %.2f (centre, size and turn "
-          + "matched, as in the reasons)", m.iou()));
+      iou.setText(m == null ? "" : String.format(Locale.ROOT, "Aligned IoU %.2f, as the reasons measure it",
+          m.iou()));
     });
     Label legend = new Label("orange: first only · blue: second only · dark: both");
     legend.getStyleClass().add("legend");

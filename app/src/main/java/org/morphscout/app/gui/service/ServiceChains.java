@@ -50,8 +50,8 @@ public final class ServiceChains implements ChainsBackend {
       List<ChainStep> steps = new ArrayList<>();
       for (ChainService.StepDetail s : c.steps()) {
         Map<String, Double> parts = new LinkedHashMap<>();
-        parts.put("appearance", s.components().appearanceDistance());
-        parts.put("shape", s.components().shapeIncompatibility());
+        parts.put("appearanceDistance", s.components().appearanceDistance());
+        parts.put("shapeIncompatibility", s.components().shapeIncompatibility());
         parts.put("ΔE00", s.components().colourGap());
         parts.put("pair score", s.score().score());
         steps.add(new ChainStep(s.a(), s.b(), s.cost(), parts));
