@@ -49,7 +49,7 @@ import picocli.CommandLine.Spec;
     header = "Run the whole job on a generated demo library (an invented ceramics studio's catalog).",
     description = "Generates the demo library when it is absent (pictures of vessels of the fictional studio "
         + "Quernhollow Ceramics, drawn by our own code), indexes it with a progress bar, then shows real results: "
-        + "similar images, the most morph-friendly pairs, a chain between two very different vessels, a walkthrough "
+        + "similar images, the most morph-friendly pairs, a chain between two very different vessels, a walk "
         + "order, a screening table, a contact sheet and a preview animation. Opens the browser when a display is "
         + "available (unless --no-gui).")
 final class DemoCommand implements Callable<Integer> {
@@ -126,7 +126,7 @@ final class DemoCommand implements Callable<Integer> {
         tour(library, context, libraryDir, outputs);
       }
     }
-    out.printf("%nTry it yourself, for example:%n  ./morphscout pairs --catalog %s --top 10%n"
+    out.printf("%nTry it yourself, for example:%n  ./morphscout pairs --catalog %s --count 10%n"
         + "  ./morphscout browse --catalog %s%n", catalogDir, catalogDir);
     out.println();
     out.println("Scores are aids to judgement, not guarantees. Before morphing pictures of people, have their consent "
@@ -182,7 +182,7 @@ final class DemoCommand implements Callable<Integer> {
       out.printf("  contact sheet: %s%n", sheet);
     }
 
-    heading("A walkthrough of the shelf views (true order hidden by shuffled file names)");
+    heading("A walk of the shelf views (true order hidden by shuffled file names)");
     WalkService walks = new WalkService(context);
     List<ImageAnalysis> shelf = walks.select(List.of(libraryDir.resolve("shelves").toString()));
     WalkService.WalkAnswer walk = walks.plan(shelf, null, null, StepCostModel.DEFAULT);

@@ -42,7 +42,7 @@ final class WalkCommand implements Callable<Integer> {
   @Mixin AnalysisOptions analysis;
 
   @Parameters(arity = "0..*", paramLabel = "<folder|image>",
-      description = "Folders (all indexed images below them) or images; none = the whole library.")
+      description = "Folders (all ready images below them) or images; none = the whole library.")
   List<String> items = new ArrayList<>();
 
   @Option(names = "--start", paramLabel = "<image>", description = "Begin the walk with this image.")

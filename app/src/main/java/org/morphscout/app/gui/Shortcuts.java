@@ -18,7 +18,7 @@ public final class Shortcuts {
       new Shortcut("Ctrl+O", "Open a catalog"),
       new Shortcut("Ctrl+1 … Ctrl+5", "Show Images, Chains, Pairs, Walk, Indexing"),
       new Shortcut("Arrow keys", "Move the selection in the grid"),
-      new Shortcut("Ctrl+click / Shift+click", "Add to / extend the selection (for walkthroughs)"),
+      new Shortcut("Ctrl+click / Shift+click", "Add to / extend the selection (for walks)"),
       new Shortcut("Ctrl+F", "Find images similar in appearance to the selected one"),
       new Shortcut("Ctrl+Shift+F", "Find images similar in shape"),
       new Shortcut("Escape", "Back from a similarity search to the whole library"),
@@ -28,7 +28,7 @@ public final class Shortcuts {
       new Shortcut("Ctrl+Enter", "Run: find chains (Chains), order smoothly (Walk)"),
       new Shortcut("A / R", "Approve / reject the chosen pair (Pairs)"),
       new Shortcut("N", "Write a note on the chosen pair (Pairs)"),
-      new Shortcut("Alt+Left / Alt+Right", "Move the chosen image in the walkthrough strip"),
+      new Shortcut("Alt+Left / Alt+Right", "Move the chosen image in the walk strip"),
       new Shortcut("F1", "Show this list"));
 
   private Shortcuts() {}

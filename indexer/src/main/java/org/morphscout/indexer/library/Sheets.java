@@ -36,8 +36,9 @@ public final class Sheets {
         tiles.add(tile(library, id));
       }
       List<Double> scores = d.steps().stream().map(StepDetail::score).map(s -> s.score()).toList();
-      rows.add(new ContactSheetRow(String.format(Locale.ROOT, "chain %d · %d steps · largest step %.3f · evenness %.2f",
-          ++n, d.steps().size(), d.chain().maxStep(), d.chain().evenness()), tiles, scores));
+      rows.add(new ContactSheetRow(String.format(Locale.ROOT,
+          "chain %d · %d steps · largest step %.3f · unevenness %.2f", ++n, d.steps().size(), d.chain().maxStep(),
+          d.chain().evenness()), tiles, scores));
     }
     String title = "Chains from " + name(answer.from().path()) + " to " + name(answer.to().path())
         + String.format(Locale.ROOT, " (direct pair score %.0f)", answer.direct().score());

@@ -46,8 +46,8 @@ class ContactSheetTest {
   @Test
   void sizeFollowsTheDocumentedLayoutAndTilesAreDrawn() {
     List<ContactSheetRow> rows = List.of(
-        row("chain 1 · max step 0.31 · evenness 0.12", 3, 128, 32), // wide thumbnails, one line
-        row("chain 2 · max step 0.40 · evenness 0.20", 10, 50, 50)); // wraps onto 3 lines
+        row("chain 1 · max step 0.31 · unevenness 0.12", 3, 128, 32), // wide thumbnails, one line
+        row("chain 2 · max step 0.40 · unevenness 0.20", 10, 50, 50)); // wraps onto 3 lines
     BufferedImage sheet = new ContactSheet(STYLE).render("Chains from a.jpg to b.jpg", rows);
 
     // Width: 2*10 + 4*64 + 3*40 + 40 (a row wraps) = 436.
@@ -91,7 +91,8 @@ class ContactSheetTest {
     assertThat(List.of(0.02134, 0.01987, 0.0242).stream().map(ContactSheet::stepLabel))
         .containsExactly("0.0213", "0.0199", "0.0242");
     assertThat(ContactSheet.stepLabel(40.54)).isEqualTo("40.5");
-    assertThat(ContactSheet.stepLabel(0.5)).isEqualTo("0.5");
+    assertThat(ContactSheet.stepLabel(0.5)).isEqualTo("0.500");
+    assertThat(ContactSheet.stepLabel(67)).isEqualTo("67.0");
     assertThat(ContactSheet.stepLabel(0)).isEqualTo("0");
     assertThat(ContactSheet.stepLabel(Double.NaN)).isEqualTo("–");
   }

@@ -216,7 +216,7 @@ public final class ChainsView extends BorderPane {
       Label head = new Label(String.format(Locale.ROOT, "Chain %d · %d steps · largest step %.3f · unevenness %.2f",
           getIndex() + 1, c.steps().size(), c.maxStep(), c.evenness()));
       head.setTooltip(new Tooltip("Unevenness: coefficient of variation of the step sizes (0 = every step the same "
-          + "size); the command line calls it evenness"));
+          + "size), as chain reports it"));
       head.getStyleClass().add("chain-heading");
       Button preview = new Button("Preview");
       preview.getStyleClass().add("small");
