@@ -18,10 +18,10 @@ import picocli.CommandLine.Spec;
     name = "decide",
     mixinStandardHelpOptions = true,
     header = "Record your decision on a pair of catalog images (approve or reject, with a note), or clear it.",
-    description = {"The decision is kept with both pictures' content hashes: it survives renames and moves, and a",
-        "different picture put at an old path does not inherit it. Deciding again replaces the earlier decision;",
-        "--clear removes it (the order of the two images does not matter); the browser's Clear decision does the",
-        "same."})
+    description = "The decision is kept with both pictures' content hashes: it survives renames and moves, and a "
+        + "different picture put at an old path does not inherit it. Deciding again replaces the earlier decision; "
+        + "--clear removes it (the order of the two images does not matter); the browser's Clear decision does the "
+        + "same.")
 final class DecideCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;

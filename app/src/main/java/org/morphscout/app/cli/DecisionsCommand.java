@@ -22,9 +22,9 @@ import picocli.CommandLine.Spec;
     name = "decisions",
     mixinStandardHelpOptions = true,
     header = "List your decisions on pairs (newest first), as text, JSON or CSV.",
-    description = {"The same decisions the desktop browser shows and edits. CSV columns: first, second, decision, note,",
-        "decided_at (an ISO-8601 instant, UTC); the browser's export of approved pairs writes exactly",
-        "decisions --only approved --csv (or --json)."})
+    description = "The same decisions the desktop browser shows and edits. CSV columns: first, second, decision, note, "
+        + "decided_at (an ISO-8601 instant, UTC); the browser's export of approved pairs writes exactly "
+        + "decisions --only approved --csv (or --json).")
 final class DecisionsCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;

@@ -30,12 +30,12 @@ import picocli.CommandLine.Spec;
     name = "walk",
     mixinStandardHelpOptions = true,
     header = "Order folders, a list of images, or the whole library into the smoothest walk.",
-    description = {"Finds an open path through the images with the smallest total step cost and few large jumps (a "
+    description = "Finds an open path through the images with the smallest total step cost and few large jumps (a "
         + "nearest-neighbour construction from several starts, then 2-opt and Or-opt improvement). Reports the total, "
-        + "the largest step and the improvement over the order given.",
-        "--csv columns: position, path, step_cost (the cost FROM the previous image TO this one; empty on the first "
+        + "the largest step and the improvement over the order given. "
+        + "--csv columns: position, path, step_cost (the cost FROM the previous image TO this one; empty on the first "
         + "row); the browser's walk export writes the same. The --sheet contact sheet writes each step cost on its "
-        + "arrow (three significant digits) under a legend saying so."})
+        + "arrow (three significant digits) under a legend saying so.")
 final class WalkCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
@@ -55,7 +55,8 @@ final class WalkCommand implements Callable<Integer> {
       description = "0 = steps judged by appearance only, 1 = by silhouette only (default: ${DEFAULT-VALUE}).")
   double shapeWeight;
 
-  @Option(names = "--sheet", paramLabel = "<file.png>", description = "Also write a contact sheet of the order (step costs on the arrows).")
+  @Option(names = "--sheet", paramLabel = "<file.png>",
+      description = "Also write a contact sheet of the order (step costs on the arrows).")
   Path sheet;
 
   @ArgGroup(exclusive = true)
