@@ -37,6 +37,7 @@ import org.morphscout.app.bench.IndexingBenchmark;
 import org.morphscout.app.bench.MachineInfo;
 import org.morphscout.app.bench.PairBenchmark;
 import org.morphscout.app.bench.PairStoreCost;
+import org.morphscout.app.bench.PeerVectors;
 import org.morphscout.app.bench.RescanBenchmark;
 import org.morphscout.app.bench.StoredPairsBenchmark;
 import org.morphscout.app.bench.VectorSearchBenchmark;
@@ -95,7 +96,7 @@ final class BenchCommand implements Callable<Integer> {
   Path volumesCatalog;
 
   @Option(names = "--stored-pairs", paramLabel = "<images>", split = ",", description = "Only measure whole-library "
-      + "pair queries (pairs --top 30) on stored pairs of synthetic catalogs of these sizes, for example "
+      + "pair queries (pairs --count 30) on stored pairs of synthetic catalogs of these sizes, for example "
       + "10000,100000, and stop. Give the JVM room for the largest (MORPHSCOUT_JAVA_OPTS=-Xmx4g is plenty).")
   List<Integer> storedPairSizes;
 
@@ -109,6 +110,12 @@ final class BenchCommand implements Callable<Integer> {
       + "--stored-pairs and --pair-cost.")
   Integer rescanFiles;
 
+  @Option(names = "--peers", paramLabel = "<folder>", description = "Only measure our vector search at the --vectors "
+      + "sizes (default 100000) and both real dimensions (560 appearance, 1024 shape), float, and write the vectors, "
+      + "queries and our figures to this folder for scripts/vector-peers, which runs other libraries on the same "
+      + "data; then stop.")
+  Path peersFolder;
+
   private PrintWriter err;
 
   @Override
@@ -118,6 +125,23 @@ final class BenchCommand implements Callable<Integer> {
       vectorSizes.forEach(n -> check.between("--vectors", n, 1, 100_000_000));
     }
     err = spec.commandLine().getErr();
+    if (peersFolder != null) {
+      for (int n : vectorSizes != null ? vectorSizes : List.of(100_000)) {
+        for (int dimension : List.of(DIMENSION, 1024)) {
+          status("vector search for peers, " + n + " x " + dimension);
+          VectorSearchBenchmark.Config config = new VectorSearchBenchmark.Config(n, dimension, Quantization.NONE,
+              200, 10, SEED, CANDIDATE_SWEEP);
+          Path scratchIndex = Files.createTempDirectory("morphscout-peers-");
+          try {
+            PeerVectors.export(peersFolder, config, VectorSearchBenchmark.run(config, scratchIndex.resolve("index")));
+          } finally {
+            deleteTree(scratchIndex);
+          }
+        }
+      }
+      err.println("wrote " + peersFolder + "; now run: scripts/vector-peers " + peersFolder);
+      return ExitCodes.OK;
+    }
     if (storedPairSizes != null || pairCostFolder != null || rescanFiles != null) {
       if (rescanFiles != null) {
         check.between("--rescan", rescanFiles, 1, 10_000_000);
@@ -185,13 +209,7 @@ final class BenchCommand implements Callable<Integer> {
     } finally {
       deleteTree(scratch);
     }
-    String text = r.toString();
-    spec.commandLine().getOut().print(text);
-    spec.commandLine().getOut().flush();
-    if (out != null) {
-      Files.writeString(out, text);
-    }
-    return ExitCodes.OK;
+    return emit(r);
   }
 
   /** The stored-pairs benchmarks alone: query time and memory, and the indexing time they add. */
@@ -227,6 +245,11 @@ final class BenchCommand implements Callable<Integer> {
     } finally {
       deleteTree(scratch);
     }
+    return emit(r);
+  }
+
+  /** Prints the report, and writes it to --out when given. */
+  private int emit(Report r) throws IOException {
     String text = r.toString();
     spec.commandLine().getOut().print(text);
     spec.commandLine().getOut().flush();
@@ -567,7 +590,7 @@ final class BenchCommand implements Callable<Integer> {
       line("## Pair queries on stored pairs");
       line("");
       line("Synthetic catalogs: each image stores 20 to 30 candidate pairs of seeded random measures (one in ten stored "
-          + "without a warp); the query is `pairs --top 30` (whole library), then the same under changed weights "
+          + "without a warp); the query is `pairs --count 30` (whole library), then the same under changed weights "
           + "(`--set`). Five runs each, the first cold. Goal: under 2 s at 10,000 and at 100,000 images, memory that "
           + "does not grow with the stored pairs.");
       line("");

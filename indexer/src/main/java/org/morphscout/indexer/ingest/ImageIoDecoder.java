@@ -58,8 +58,21 @@ public final class ImageIoDecoder implements ImageDecoder {
 
   @Override
   public DecodedImage decode(Path file) throws IOException {
+    return asReadFailure(file, () -> decodeWithReaders(file, preflight(file)));
+  }
+
+  /** One step of decoding {@code file} that reads it. */
+  interface FileWork<T> {
+    T run() throws IOException;
+  }
+
+  /**
+   * Runs {@code work}, reporting a file that vanished or may not be read as this file's {@link ImageReadException},
+   * and a channel closed by an interrupt as a stop request; other I/O errors pass as they are.
+   */
+  static <T> T asReadFailure(Path file, FileWork<T> work) throws IOException {
     try {
-      return decodeChecked(file);
+      return work.run();
     } catch (NoSuchFileException e) {
       throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
     } catch (AccessDeniedException e) {
@@ -68,10 +81,6 @@ public final class ImageIoDecoder implements ImageDecoder {
       // File channels close when their thread is interrupted: that is a stop request, not a disk failure.
       throw interrupted(file);
     }
-  }
-
-  private DecodedImage decodeChecked(Path file) throws IOException {
-    return decodeAfter(file, preflight(file));
   }
 
   /**
@@ -116,15 +125,7 @@ public final class ImageIoDecoder implements ImageDecoder {
 
   /** Decodes a file that passed {@link #preflight} with the ImageIO decoders installed for its format. */
   DecodedImage decodeAfter(Path file, Preflight preflight) throws IOException {
-    try {
-      return decodeWithReaders(file, preflight);
-    } catch (NoSuchFileException e) {
-      throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
-    } catch (AccessDeniedException e) {
-      throw new ImageReadException(file, ReadFailure.UNREADABLE, "file not readable (permission denied)", e);
-    } catch (ClosedByInterruptException e) {
-      throw interrupted(file);
-    }
+    return asReadFailure(file, () -> decodeWithReaders(file, preflight));
   }
 
   private DecodedImage decodeWithReaders(Path file, Preflight preflight) throws IOException {

@@ -68,14 +68,11 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
 
   @Override
   public DecodedImage decode(Path file) throws IOException {
-    ImageIoDecoder.Preflight preflight;
-    try {
-      preflight = ImageIoDecoder.preflight(file);
-    } catch (java.nio.file.NoSuchFileException e) {
-      throw new ImageReadException(file, ReadFailure.VANISHED, "file disappeared before decoding", e);
-    } catch (java.nio.file.AccessDeniedException e) {
-      throw new ImageReadException(file, ReadFailure.UNREADABLE, "file not readable (permission denied)", e);
-    }
+    return ImageIoDecoder.asReadFailure(file, () -> decodeChecked(file));
+  }
+
+  private DecodedImage decodeChecked(Path file) throws IOException {
+    ImageIoDecoder.Preflight preflight = ImageIoDecoder.preflight(file);
     if (preflight.format() != FileFormat.JPEG) {
       return fallback.decodeAfter(file, preflight);
     }

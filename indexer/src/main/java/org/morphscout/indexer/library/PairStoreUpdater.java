@@ -7,11 +7,8 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import java.util.concurrent.atomic.AtomicInteger;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.PairStore;
 import org.morphscout.indexer.feature.Ciede2000;
@@ -47,7 +44,6 @@ public final class PairStoreUpdater {
 
   private static final Logger LOG = LoggerFactory.getLogger(PairStoreUpdater.class);
   private static final int CHOOSER_BATCH = 64;
-  private static final AtomicInteger POOLS = new AtomicInteger();
 
   private final Library library;
   private final VectorIndex index;
@@ -101,11 +97,7 @@ public final class PairStoreUpdater {
         toChoose.add(id);
       }
     }
-    ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
-      Thread t = new Thread(r, "morphscout-pair-store-" + POOLS.incrementAndGet());
-      t.setDaemon(true);
-      return t;
-    });
+    ExecutorService pool = Workers.pool("pair-store", threads);
     try {
       progress.phase("choosing pair candidates", toChoose.size());
       long done = 0;
@@ -215,21 +207,11 @@ public final class PairStoreUpdater {
   }
 
   private static <T> List<T> all(ExecutorService pool, Collection<? extends Callable<T>> work) {
-    try {
-      List<T> out = new ArrayList<>();
-      for (Future<T> f : pool.invokeAll(work)) {
-        out.add(f.get());
-      }
-      return out;
-    } catch (InterruptedException e) {
-      Thread.currentThread().interrupt();
-      throw new CancellationToken.CancelledException();
-    } catch (ExecutionException e) {
-      if (e.getCause() instanceof RuntimeException r) {
-        throw r;
-      }
-      throw new IllegalStateException(e.getCause());
-    }
+    List<Future<T>> futures = new ArrayList<>();
+    work.forEach(w -> futures.add(pool.submit(w)));
+    List<T> out = new ArrayList<>();
+    futures.forEach(f -> out.add(Workers.await(f)));
+    return out;
   }
 
   private static List<List<Long>> batches(List<Long> ids, int size) {

@@ -7,9 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.PriorityQueue;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.Semaphore;
 import org.morphscout.indexer.MorphscoutException;
@@ -74,11 +72,7 @@ public final class StoredPairs {
     Ranking ranking = new Ranking(query);
     // One thread reads rows (the catalog's connection is single-threaded); the others score them in batches.
     int workers = Math.max(1, Runtime.getRuntime().availableProcessors());
-    ExecutorService pool = Executors.newFixedThreadPool(workers, r -> {
-      Thread t = new Thread(r, "morphscout-stored-pairs");
-      t.setDaemon(true);
-      return t;
-    });
+    ExecutorService pool = Workers.pool("stored-pairs", workers);
     Semaphore inFlight = new Semaphore(2 * workers); // bounds the rows held in memory
     List<Future<?>> done = new ArrayList<>();
     @SuppressWarnings("unchecked")
@@ -94,17 +88,7 @@ public final class StoredPairs {
         }
       });
       done.add(submit(pool, inFlight, batch[0], pictures, ranking));
-      for (Future<?> f : done) {
-        f.get();
-      }
-    } catch (InterruptedException e) {
-      Thread.currentThread().interrupt();
-      throw new CancellationToken.CancelledException();
-    } catch (ExecutionException e) {
-      if (e.getCause() instanceof RuntimeException r) {
-        throw r;
-      }
-      throw new IllegalStateException(e.getCause());
+      done.forEach(Workers::await);
     } finally {
       pool.shutdownNow();
     }

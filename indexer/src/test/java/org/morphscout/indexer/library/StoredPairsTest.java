@@ -134,11 +134,7 @@ class StoredPairsTest {
   void aChangedFileReMeasuresOnlyItsOwnPairs() throws IOException {
     Path work = tmp.resolve("changing");
     Path lib = work.resolve("library");
-    PlantedPairs pp = TestFamilies.plantedPairs(SEED + 1);
-    List<Path> files = new ArrayList<>();
-    for (int i = 0; i < pp.images().size(); i++) {
-      files.add(RealCatalog.png(lib.resolve(i + ".png"), pp.images().get(i).image()));
-    }
+    List<Path> files = plantedLibrary(lib, SEED + 1);
     try (RealCatalog first = RealCatalog.index(work.resolve("catalog"), lib, 8)) {
       long changed = first.analysis(files.get(0)).id();
       Map<String, byte[]> before = storedRows(first.library);
@@ -164,10 +160,7 @@ class StoredPairsTest {
   void pairsMeasuredByAnEarlierVersionAreStaleUntilIndexRefreshesThem() throws IOException {
     Path work = tmp.resolve("stale");
     Path lib = work.resolve("library");
-    PlantedPairs pp = TestFamilies.plantedPairs(SEED + 2);
-    for (int i = 0; i < pp.images().size(); i++) {
-      RealCatalog.png(lib.resolve(i + ".png"), pp.images().get(i).image());
-    }
+    plantedLibrary(lib, SEED + 2);
     try (RealCatalog c = RealCatalog.index(work.resolve("catalog"), lib, 8)) {
       Map<String, byte[]> before = storedRows(c.library);
       String model = c.context.modelId();
@@ -202,10 +195,7 @@ class StoredPairsTest {
   void anInterruptedUpgradeKeepsItsFinishedBatchesAndTheNextRunCompletesIt() throws IOException {
     Path work = tmp.resolve("upgrade");
     Path lib = work.resolve("library");
-    PlantedPairs pp = TestFamilies.plantedPairs(SEED + 3);
-    for (int i = 0; i < pp.images().size(); i++) {
-      RealCatalog.png(lib.resolve(i + ".png"), pp.images().get(i).image());
-    }
+    plantedLibrary(lib, SEED + 3);
     try (RealCatalog c = RealCatalog.index(work.resolve("catalog"), lib, 8)) {
       long all = c.library.pairs().counts(PairMeasurer.VERSION).pairs();
       // A catalog from before stored pairs existed: none stored. Its next index run pairs it, in small batches.
@@ -248,6 +238,16 @@ class StoredPairsTest {
       assertThat(c.library.pairs().counts(PairMeasurer.VERSION).pairs()).isEqualTo(all);
       assertThat(StoredPairCounts.of(c.library).complete()).isTrue();
     }
+  }
+
+  /** Writes the planted-pairs pictures of {@code seed} into {@code folder} as PNGs; returns their paths. */
+  private static List<Path> plantedLibrary(Path folder, long seed) {
+    PlantedPairs pp = TestFamilies.plantedPairs(seed);
+    List<Path> files = new ArrayList<>();
+    for (int i = 0; i < pp.images().size(); i++) {
+      files.add(RealCatalog.png(folder.resolve(i + ".png"), pp.images().get(i).image()));
+    }
+    return files;
   }
 
   /** Stored rows keyed "/first/second/", measures (or kind) as value. */
