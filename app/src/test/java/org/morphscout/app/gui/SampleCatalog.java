@@ -89,7 +89,8 @@ public final class SampleCatalog {
         Files.createDirectories(file.getParent());
         BufferedImage img = draw(p, 320, 240, true);
         ImageIO.write(img, "png", file.toFile());
-        long id = lib.images().insertPending(rootId, file.toString(), Files.size(file), 0, "hash-" + p.name());
+        long id = lib.images().insertPending(rootId, file.toString(), Files.size(file),
+            Files.getLastModifiedTime(file).toMillis(), "hash-" + p.name());
         lib.images().markReady(id, 320, 240, 1, "png");
         Path thumb = lib.catalog().thumbnailBase(id);
         Files.createDirectories(thumb.getParent());

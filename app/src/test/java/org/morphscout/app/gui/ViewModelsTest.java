@@ -117,11 +117,31 @@ class ViewModelsTest {
     main.session().selectedProperty().set(row("pair-of-tiles.png"));
     assertThat(main.inspector().facts()).extracting(f -> f.label() + ": " + f.value())
         .contains("Size: 320 × 240 px", "Findings: several objects");
+    // times for people: the local date to the minute, not a raw count
+    assertThat(main.inspector().facts()).filteredOn(f -> f.label().equals("Modified")).singleElement()
+        .satisfies(f -> assertThat(f.value()).matches("\\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2}"));
+    assertThat(main.inspector().uncertainProperty().get()).isEmpty(); // a sound silhouette carries no marker
     assertThat(main.inspector().maskProperty().get()).isNotNull();
     assertThat(main.inspector().swatches()).hasSize(2).allMatch(s -> s.matches("#[0-9a-f]{6}"));
     main.session().selectedProperty().set(row("broken.jpg"));
     assertThat(main.inspector().facts()).extracting(f -> f.label() + ": " + f.value())
         .contains("Failed: not a readable JPEG: the file ends after 5 bytes");
+  }
+
+  @Test
+  void anUncertainSilhouetteIsMarkedWithTheLibrarysThreshold() {
+    org.morphscout.indexer.silhouette.Mask blob = new org.morphscout.indexer.silhouette.Mask(4, 4, new byte[] {0, 0,
+        0, 0, 0, 1, 1, 0, 0, 1, 1, 0, 0, 0, 0, 0});
+    var doubtful = new org.morphscout.indexer.silhouette.Silhouette(blob, 1, false, 0.25, 0.30, "border-model");
+    var sound = new org.morphscout.indexer.silhouette.Silhouette(blob, 1, false, 0.25, 0.80, "border-model");
+    assertThat(doubtful.uncertain()).isTrue();
+    assertThat(org.morphscout.app.gui.inspector.InspectorViewModelAccess.uncertainNote(doubtful))
+        .startsWith("Uncertain silhouette: confidence 0.30 (below 0.45)");
+    assertThat(org.morphscout.app.gui.inspector.InspectorViewModelAccess.uncertainNote(sound)).isEmpty();
+    assertThat(org.morphscout.app.gui.service.CatalogFindings.of(doubtful))
+        .contains(org.morphscout.app.gui.service.ImageFinding.UNCERTAIN);
+    assertThat(org.morphscout.app.gui.service.CatalogFindings.of(sound))
+        .doesNotContain(org.morphscout.app.gui.service.ImageFinding.UNCERTAIN);
   }
 
   @Test
