@@ -121,6 +121,8 @@ class ViewModelsTest {
     assertThat(main.inspector().facts()).filteredOn(f -> f.label().equals("Modified")).singleElement()
         .satisfies(f -> assertThat(f.value()).matches("\\d{4}-\\d{2}-\\d{2} \\d{2}:\\d{2}"));
     assertThat(main.inspector().uncertainProperty().get()).isEmpty(); // a sound silhouette carries no marker
+    assertThat(main.inspector().facts()).filteredOn(f -> f.label().equals("Silhouette")).singleElement()
+        .satisfies(f -> assertThat(f.value()).endsWith("(classical)")); // the glossary's word for the border model
     assertThat(main.inspector().maskProperty().get()).isNotNull();
     assertThat(main.inspector().swatches()).hasSize(2).allMatch(s -> s.matches("#[0-9a-f]{6}"));
     main.session().selectedProperty().set(row("broken.jpg"));

@@ -122,7 +122,7 @@ public final class InspectorViewModel {
     List<String> findings = CatalogFindings.of(s).stream().map(ImageFinding::label).toList();
     f.add(new Fact("Findings", findings.isEmpty() ? "none" : String.join(", ", findings)));
     f.add(new Fact("Silhouette", String.format(Locale.ROOT, "%.0f%% of the frame, confidence %.2f, %d object%s (%s)",
-        s.coverage() * 100, s.confidence(), s.components(), s.components() == 1 ? "" : "s", s.source())));
+        s.coverage() * 100, s.confidence(), s.components(), s.components() == 1 ? "" : "s", sourceWord(s.source()))));
     f.add(new Fact("Shape", String.format(Locale.ROOT, "aspect %.2f, centroid (%.2f, %.2f), axis %.0f°",
         a.shape().aspect(), a.shape().centroidX(), a.shape().centroidY(), Math.toDegrees(a.shape().orientation()))));
     f.add(new Fact("Object colour", lab(a.colour().foregroundMean(), a.colour().foregroundStd())));
@@ -137,6 +137,14 @@ public final class InspectorViewModel {
     }
     return String.format(Locale.ROOT, "L* %.0f ± %.0f, a* %.0f ± %.0f, b* %.0f ± %.0f", mean[0], std[0], mean[1],
         std[1], mean[2], std[2]);
+  }
+
+  /**
+   * What made a silhouette, in the glossary's words: the stored name of the border model is shown as "classical"
+   * (the setting's name); "learned" and "alpha" as stored.
+   */
+  static String sourceWord(String stored) {
+    return "border-model".equals(stored) ? "classical" : stored;
   }
 
   static String humanBytes(long bytes) {
