@@ -39,6 +39,7 @@ import org.morphscout.app.bench.PairBenchmark;
 import org.morphscout.app.bench.PairStoreCost;
 import org.morphscout.app.bench.PeerVectors;
 import org.morphscout.app.bench.RescanBenchmark;
+import org.morphscout.app.bench.SilhouetteCost;
 import org.morphscout.app.bench.StoredPairsBenchmark;
 import org.morphscout.app.bench.VectorSearchBenchmark;
 import org.morphscout.app.bench.WalkBenchmark;
@@ -110,6 +111,11 @@ final class BenchCommand implements Callable<Integer> {
       + "--stored-pairs and --pair-cost.")
   Integer rescanFiles;
 
+  @Option(names = "--silhouette-cost", paramLabel = "<folder>", description = "Only measure what the per-image "
+      + "choice of silhouettes costs: index this folder with the classical extractor alone, then with the default "
+      + "choice, into scratch catalogs; and stop. Combines with --stored-pairs, --pair-cost and --rescan.")
+  Path silhouetteCostFolder;
+
   @Option(names = "--peers", paramLabel = "<folder>", description = "Only measure our vector search at the --vectors "
       + "sizes (default 100000) and both real dimensions (560 appearance, 1024 shape), float, and write the vectors, "
       + "queries and our figures to this folder for scripts/vector-peers, which runs other libraries on the same "
@@ -142,7 +148,7 @@ final class BenchCommand implements Callable<Integer> {
       err.println("wrote " + peersFolder + "; now run: scripts/vector-peers " + peersFolder);
       return ExitCodes.OK;
     }
-    if (storedPairSizes != null || pairCostFolder != null || rescanFiles != null) {
+    if (storedPairSizes != null || pairCostFolder != null || rescanFiles != null || silhouetteCostFolder != null) {
       if (rescanFiles != null) {
         check.between("--rescan", rescanFiles, 1, 10_000_000);
       }
@@ -236,6 +242,11 @@ final class BenchCommand implements Callable<Integer> {
         r.pairCost(pairCostFolder.toString(), PairStoreCost.run(pairCostFolder, scratch.resolve("cost"),
             AnalysisSetup.defaults().withSilhouettes(AnalysisSetup.SilhouetteMode.AUTO)
                 .withModels(ModelFolder.resolve(java.util.Optional.empty()))));
+      }
+      if (silhouetteCostFolder != null) {
+        status("indexing " + silhouetteCostFolder + " with classical silhouettes, then with the default choice");
+        r.silhouetteCost(silhouetteCostFolder.toString(), SilhouetteCost.run(silhouetteCostFolder,
+            scratch.resolve("silhouettes")));
       }
       if (rescanFiles != null) {
         status("re-scanning " + rescanFiles + " unchanged files, then adding 1,000");
@@ -614,6 +625,23 @@ final class BenchCommand implements Callable<Integer> {
           + x.pairs() + " pairs, " + x.bounded() + " of them stored without a warp): **"
           + f(100 * x.added(), 0) + "%** more than indexing without them (goal: under 25%, " + met(x.added() < 0.25)
           + ").");
+      line("");
+    }
+
+    void silhouetteCost(String folder, SilhouetteCost.Result x) {
+      line("## Silhouettes: classical only against the per-image choice");
+      line("");
+      line("`" + folder + "`, indexed twice into new catalogs, one run after the other, all cores:");
+      line("");
+      line("| silhouettes | wall | CPU | masks |");
+      line("|---|---|---|---|");
+      for (SilhouetteCost.Run run : List.of(x.classical(), x.auto())) {
+        line("| " + run.mode().name().toLowerCase(java.util.Locale.ROOT) + " | " + f(run.seconds(), 1) + " s | "
+            + f(run.cpuSeconds(), 1) + " s | " + run.masks().bySource() + "; " + run.masks().uncertain()
+            + " uncertain |");
+      }
+      line("| ratio | " + f(x.wallRatio(), 2) + "x | " + f(x.cpuRatio(), 2) + "x | goal <= 1.5x: "
+          + met(x.cpuRatio() <= 1.5) + " |");
       line("");
     }
 
