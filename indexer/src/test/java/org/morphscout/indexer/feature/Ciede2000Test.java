@@ -3,34 +3,24 @@ package org.morphscout.indexer.feature;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
+import org.morphscout.indexer.testing.CommentedCsv;
 
 class Ciede2000Test {
   /** Rows of L1 a1 b1 L2 a2 b2 dE00 from Sharma, Wu and Dalal (2005), Table 1 (source named in the CSV). */
   private static List<double[]> table() throws IOException {
     List<double[]> rows = new ArrayList<>();
-    try (InputStream in = Ciede2000Test.class.getResourceAsStream("ciede2000-sharma-2005.csv");
-        BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
-      String line;
-      while ((line = r.readLine()) != null) {
-        if (line.isBlank() || line.startsWith("#")) {
-          continue;
-        }
-        String[] f = line.split(",");
-        double[] row = new double[7];
-        for (int i = 0; i < 7; i++) {
-          row[i] = Double.parseDouble(f[i].trim());
-        }
-        rows.add(row);
+    for (String[] f : CommentedCsv.rows(Ciede2000Test.class, "ciede2000-sharma-2005.csv")) {
+      double[] row = new double[7];
+      for (int i = 0; i < 7; i++) {
+        row[i] = Double.parseDouble(f[i]);
       }
+      rows.add(row);
     }
     return rows;
   }

@@ -2,11 +2,7 @@ package org.morphscout.indexer.library;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -26,6 +22,7 @@ import org.morphscout.indexer.pairing.Verdict;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
+import org.morphscout.indexer.testing.CommentedCsv;
 import org.morphscout.indexer.testing.OutsideData;
 import org.morphscout.indexer.warp.WarpEstimator;
 
@@ -78,17 +75,9 @@ class MasksOnRealPhotosTest {
 
   static List<Drawn> drawn() throws IOException {
     List<Drawn> out = new ArrayList<>();
-    try (InputStream in = MasksOnRealPhotosTest.class.getResourceAsStream("real-photo-boxes.csv");
-        BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
-      String line;
-      while ((line = r.readLine()) != null) {
-        if (line.isBlank() || line.startsWith("#")) {
-          continue;
-        }
-        String[] f = line.split(",");
-        out.add(new Drawn(f[0], f[1], Double.parseDouble(f[2]), Double.parseDouble(f[3]), Double.parseDouble(f[4]),
-            Double.parseDouble(f[5])));
-      }
+    for (String[] f : CommentedCsv.rows(MasksOnRealPhotosTest.class, "real-photo-boxes.csv")) {
+      out.add(new Drawn(f[0], f[1], Double.parseDouble(f[2]), Double.parseDouble(f[3]), Double.parseDouble(f[4]),
+          Double.parseDouble(f[5])));
     }
     return out;
   }
