@@ -29,13 +29,17 @@ package org.morphscout.indexer.pairing;
  *     families t 1/7 apart (42 pairs) 0.987-0.9947, members t 0.2 apart (54 pairs) 0.973-0.991. 0.996 keeps every
  *     family member out with a little room; a copy whose window shifts a lot is then missed (it is listed as a pair
  *     instead), the safer of the two errors for a morph finder
+ * @param maxCentroidOffset largest distance between the objects' centroids, in picture fractions (default 0.03):
+ *     resizing, recompressing and light edits keep the object where it was in the frame (the demo's copies move it
+ *     by at most 0.002), while a second shot from a slightly moved viewpoint shifts it (the demo's shelf views,
+ *     0.055 between neighbours), and two such shots are not the same picture even when the object crops match
  */
 public record NearDuplicateConfig(double minCosine, double maxShapeDistance, double maxDeltaE, double maxAspectGap,
     double maxBackgroundDeltaE, double maxBackgroundStdGap, double maxObjectAspectGap,
-    double minFingerprintCorrelation) {
+    double minFingerprintCorrelation, double maxCentroidOffset) {
 
   public static final NearDuplicateConfig DEFAULTS =
-      new NearDuplicateConfig(0.98, 0.16, 4.0, 0.02, 4.0, 1.5, 0.03, 0.996);
+      new NearDuplicateConfig(0.98, 0.16, 4.0, 0.02, 4.0, 1.5, 0.03, 0.996, 0.03);
 
   public NearDuplicateConfig {
     if (!(minCosine >= 0 && minCosine <= 1)) {
@@ -58,6 +62,9 @@ public record NearDuplicateConfig(double minCosine, double maxShapeDistance, dou
     }
     if (!(maxAspectGap >= 0 && maxAspectGap <= 1)) {
       throw new IllegalArgumentException("maxAspectGap must be in [0, 1], got " + maxAspectGap);
+    }
+    if (!(maxCentroidOffset >= 0 && maxCentroidOffset <= 2)) {
+      throw new IllegalArgumentException("maxCentroidOffset must be in [0, 2], got " + maxCentroidOffset);
     }
     if (!(minFingerprintCorrelation >= -1 && minFingerprintCorrelation <= 1)) {
       throw new IllegalArgumentException(

@@ -6,7 +6,7 @@ import org.morphscout.indexer.feature.ColourStats;
 
 /**
  * Decides whether two analyses show the same picture, resized, recompressed or lightly edited: identical file
- * hashes, or appearance cosine, shape vector distance, foreground colour difference, aspect ratio and (when both
+ * hashes, or appearance cosine, shape vector distance, object placement, foreground colour difference, aspect ratio and (when both
  * images have one) the pixel fingerprint correlation all within {@link NearDuplicateConfig}. The fingerprint is what
  * tells an edited copy from a neighbouring member of a silhouette family (same glaze, backdrop and light, a slightly
  * different outline), which passes everything else; without fingerprints (features stored before catalog schema
@@ -54,6 +54,10 @@ public final class NearDuplicates {
     double tolerance = config.maxObjectAspectGap() + (objectPixels > 0 ? 4.0 / objectPixels : 1);
     if (!(oa > 0 && ob > 0) || Math.abs(oa / ob - 1) > tolerance) {
       return false;
+    }
+    if (Math.hypot(a.shape().centroidX() - b.shape().centroidX(), a.shape().centroidY() - b.shape().centroidY())
+        > config.maxCentroidOffset()) {
+      return false; // the object sits elsewhere in the frame: another shot, not the same picture
     }
     double ra = a.width() / (double) a.height();
     double rb = b.width() / (double) b.height();

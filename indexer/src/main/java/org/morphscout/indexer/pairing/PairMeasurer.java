@@ -14,7 +14,7 @@ public final class PairMeasurer {
    * it calls: warp estimation, colour difference, the analysis) would give other facts for the same pictures, so
    * catalogs know which stored pairs are stale.
    */
-  public static final int VERSION = 1;
+  public static final int VERSION = 2; // 2: near-duplicates also need the object in the same place
 
   private final ColourDifference colour;
   private final WarpEstimator warps;

@@ -26,6 +26,17 @@ class NearDuplicatesTest {
   }
 
   @Test
+  void theSameObjectElsewhereInTheFrameIsAnotherShotNotACopy() {
+    // A viewpoint moved sideways: the object matches to the pixel but sits 5 % of the width further right.
+    ImageAnalysis a = Analyses.builder(1).build();
+    ImageAnalysis moved = Analyses.builder(2).shift(0.05, 0).build();
+    assertThat(dup.areDuplicates(a, Analyses.builder(3).build())).as("unmoved copy").isTrue();
+    assertThat(dup.areDuplicates(a, moved)).isFalse();
+    // Within the limit (1 % of the width) it still counts as the same picture.
+    assertThat(dup.areDuplicates(a, Analyses.builder(4).shift(0.01, 0).build())).isTrue();
+  }
+
+  @Test
   void differentShapesAreNotDuplicates() {
     ImageAnalysis a = Analyses.builder(1).build();
     ImageAnalysis b = Analyses.builder(2).object(new Rectangle2D.Double(-10, -40, 20, 80)).build();
