@@ -125,7 +125,7 @@ final class IndexCommand implements Callable<Integer> {
   private void print(PrintWriter out, IndexReport r) {
     if (json) {
       Map<String, Object> doc = new LinkedHashMap<>();
-      doc.put("indexed", r.indexed());
+      doc.put("analysed", r.indexed());
       doc.put("unchanged", r.unchanged());
       doc.put("failed", r.failed());
       List<Map<String, String>> failures = new ArrayList<>();

@@ -36,11 +36,11 @@ class IndexStatusCommandTest {
 
   @Test
   void indexReportsCountsAndTheCorruptFileWithExitCodeOne() {
-    // Keys and exit code 1 as fixed by the index issue: {"indexed","unchanged","failed","failures":[{path,reason}]}.
+    // Keys and exit code 1: {"analysed","unchanged","failed","failures":[{path,reason}]} ("analysed" was "indexed").
     assertThat(first.code()).as("exit code with a corrupt file; stderr: %s", first.err())
         .isEqualTo(ExitCodes.FINISHED_WITH_FAILURES).isEqualTo(1);
     JsonNode doc = first.json();
-    assertThat(doc.get("indexed").asInt()).isEqualTo(lib.all().size());
+    assertThat(doc.get("analysed").asInt()).isEqualTo(lib.all().size());
     assertThat(doc.get("unchanged").asInt()).isZero();
     assertThat(doc.get("failed").asInt()).isEqualTo(1);
     assertThat(doc.get("failures")).hasSize(1);
@@ -54,7 +54,7 @@ class IndexStatusCommandTest {
   void rerunReportsEverythingUnchanged() {
     Cli.Run again = cli.run("index", tmp.resolve("library").toString(), "--json", "--threads", "2");
     JsonNode doc = again.json();
-    assertThat(doc.get("indexed").asInt()).as("stderr: %s", again.err()).isZero();
+    assertThat(doc.get("analysed").asInt()).as("stderr: %s", again.err()).isZero();
     // Every file seen before, the unreadable one included, is unchanged (the issue: "a rerun reports unchanged").
     assertThat(doc.get("unchanged").asInt()).isEqualTo(lib.all().size() + 1);
   }
@@ -76,7 +76,7 @@ class IndexStatusCommandTest {
     Files.copy(lib.family.get(3), folder.resolve("b.png"));
     Cli.Run run = new Cli(other.resolve("catalog")).run("index", folder.toString(), "--json", "--threads", "1");
     assertThat(run.code()).as("stderr: %s", run.err()).isEqualTo(ExitCodes.OK);
-    assertThat(run.json().get("indexed").asInt()).isEqualTo(2);
+    assertThat(run.json().get("analysed").asInt()).isEqualTo(2);
     assertThat(run.json().get("failed").asInt()).isZero();
     assertThat(run.json().get("failures")).isEmpty();
   }
@@ -128,6 +128,10 @@ class IndexStatusCommandTest {
       counted += n.asInt();
     }
     assertThat(counted).isEqualTo(doc.get("ready").asInt());
+    // In the glossary's words: the border model's silhouettes are counted as classical.
+    List<String> sources = new java.util.ArrayList<>();
+    silhouettes.get("bySource").fieldNames().forEachRemaining(sources::add);
+    assertThat(sources).isSubsetOf("alpha", "classical", "learned").contains("classical");
     int uncertain = 0;
     try (var c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + tmp.resolve("catalog/catalog.db"));
         var rs = c.createStatement().executeQuery("SELECT coverage, confidence FROM features")) {

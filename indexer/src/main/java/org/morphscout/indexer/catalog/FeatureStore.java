@@ -171,7 +171,7 @@ public final class FeatureStore {
   }
 
   /**
-   * Silhouettes of the ready images, counted by what made them ("alpha", "border-model", "learned"), and how many of
+   * Silhouettes of the ready images, counted by what made them ("alpha", "classical", "learned"), and how many of
    * them are uncertain (an object was found, with a confidence below
    * {@link org.morphscout.indexer.silhouette.Silhouette#UNCERTAIN_BELOW}).
    *
@@ -191,7 +191,8 @@ public final class FeatureStore {
         s.setDouble(1, org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW);
         try (ResultSet rs = s.executeQuery()) {
           while (rs.next()) {
-            bySource.put(rs.getString(1), rs.getInt(2));
+            bySource.merge(org.morphscout.indexer.silhouette.Silhouette.sourceWord(rs.getString(1)), rs.getInt(2),
+                Integer::sum);
             uncertain += rs.getInt(3);
           }
         }

@@ -29,6 +29,15 @@ public record Silhouette(
     return small == mask ? this : new Silhouette(small, components, touchesFrame, coverage, confidence, source);
   }
 
+  /**
+   * What made a silhouette, in the words people read: the border model's stored name ("border-model") is shown as
+   * "classical", the setting that picks it; "learned" and "alpha" as stored. One rule for the command line and the
+   * browser.
+   */
+  public static String sourceWord(String stored) {
+    return "border-model".equals(stored) ? "classical" : stored;
+  }
+
   /** Confidence under which a silhouette counts as uncertain: scores and verdicts that use it say so. */
   public static final double UNCERTAIN_BELOW = 0.45;
 

@@ -139,12 +139,9 @@ public final class InspectorViewModel {
         std[1], mean[2], std[2]);
   }
 
-  /**
-   * What made a silhouette, in the glossary's words: the stored name of the border model is shown as "classical"
-   * (the setting's name); "learned" and "alpha" as stored.
-   */
+  /** What made a silhouette, in the glossary's words (the library's one rule). */
   static String sourceWord(String stored) {
-    return "border-model".equals(stored) ? "classical" : stored;
+    return org.morphscout.indexer.silhouette.Silhouette.sourceWord(stored);
   }
 
   static String humanBytes(long bytes) {
