@@ -92,6 +92,14 @@ class RealServicesTest {
       assertThat(vm.pairs().rows()).allSatisfy(r -> assertThat(String.format(java.util.Locale.ROOT, "%.1f",
           r.suggestion().score())).isEqualTo(cliScores.get(vm.session().row(r.suggestion().b()).orElseThrow()
           .path())));
+      // Without up-to-date stored pairs the view still answers, scored live, and says so as the command line does.
+      try (org.morphscout.indexer.library.Library other = org.morphscout.indexer.library.Library.open(
+          tmp.resolve("catalog"))) {
+        other.pairs().clear();
+      }
+      vm.pairs().showFor(round);
+      assertThat(vm.pairs().messageProperty().get()).startsWith("scored live: ");
+      assertThat(vm.pairs().rows()).isNotEmpty();
       vm.pairs().approve(vm.pairs().rows().get(0));
       assertThat(vm.pairs().rows().get(0).decisionProperty().get()).isEqualTo("approved");
 

@@ -23,6 +23,7 @@ import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.service.AlignedMasks;
 import org.morphscout.app.gui.service.MaskAligner;
 import org.morphscout.app.gui.service.PairSuggestion;
+import org.morphscout.app.gui.service.PairsBackend;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
 import org.morphscout.indexer.MorphscoutException;
@@ -91,7 +92,8 @@ public final class PairsViewModel {
     refresh();
   }
 
-  private record Loaded(List<PairSuggestion> pairs, Map<String, DecisionStore.Decision> decisions) {}
+  private record Loaded(List<PairSuggestion> pairs, List<String> notes,
+      Map<String, DecisionStore.Decision> decisions) {}
 
   /** Runs the suggestion again with the current scope. */
   public void refresh() {
@@ -110,12 +112,12 @@ public final class PairsViewModel {
     message.set("");
     info.set("Scoring pairs…");
     pending = runner.submit("suggest pairs", token -> {
-      List<PairSuggestion> pairs = session.backends().pairs().suggest(image, max, token);
+      PairsBackend.Suggestions found = session.backends().pairs().suggest(image, max, token);
       Map<String, DecisionStore.Decision> decided = new HashMap<>();
       for (DecisionStore.Decision d : lib.decisions().all()) {
         decided.put(key(d.imageA(), d.imageB()), d);
       }
-      return new Loaded(pairs, decided);
+      return new Loaded(found.pairs(), found.notes(), decided);
     }, loaded -> {
       running.set(false);
       rows.setAll(loaded.pairs().stream().map(p -> {
@@ -127,7 +129,10 @@ public final class PairsViewModel {
         return r;
       }).toList());
       info.set(rows.size() + " pair" + (rows.size() == 1 ? "" : "s"));
-      if (rows.isEmpty()) {
+      if (!loaded.notes().isEmpty()) {
+        // How the library found them, as the command line says it (for example: scored live, index to speed up).
+        message.set(String.join(" ", loaded.notes()));
+      } else if (rows.isEmpty()) {
         message.set("No pairs to suggest here yet.");
       }
     }, e -> {

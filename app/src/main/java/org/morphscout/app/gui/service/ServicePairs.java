@@ -35,7 +35,7 @@ public final class ServicePairs implements PairsBackend {
   }
 
   @Override
-  public List<PairSuggestion> suggest(OptionalLong image, int limit, CancellationToken token) {
+  public Suggestions suggest(OptionalLong image, int limit, CancellationToken token) {
     PairQuery query = new PairQuery(CANDIDATES, limit, 0);
     PairSearchResult result = image.isPresent()
         ? service.partners(load(image.getAsLong()), query, ProgressListener.NONE, token)
@@ -48,7 +48,7 @@ public final class ServicePairs implements PairsBackend {
       out.add(new PairSuggestion(p.a(), p.b(), p.score().score(), shown(p.score().components()),
           PairVerdict.valueOf(p.score().verdict().name()), p.score().reasons()));
     }
-    return out;
+    return new Suggestions(out, result.notes());
   }
 
   static Map<String, Double> shown(Map<String, Double> components) {
