@@ -6,7 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Objects;
 import java.util.Optional;
-import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.Consumer;
 import org.opencv.core.Mat;
 import org.opencv.core.MatOfByte;
 import org.opencv.imgcodecs.Imgcodecs;
@@ -29,8 +29,8 @@ import org.slf4j.LoggerFactory;
  */
 public final class OpenCvJpegDecoder implements ImageDecoder {
   private static final Logger LOG = LoggerFactory.getLogger(OpenCvJpegDecoder.class);
-  private static final AtomicBoolean WARNED = new AtomicBoolean();
-  private static volatile Boolean loaded;
+  /** OpenCV's native library as packaged in the {@code org.openpnp:opencv} jar; tried once per run. */
+  private static final NativeLibrary OPENCV = new NativeLibrary(nu.pattern.OpenCV::loadLocally, LOG::warn);
 
   private final ImageIoDecoder fallback;
 
@@ -40,25 +40,52 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
 
   /** The fast decoder when OpenCV's native library loads here, else the ImageIO decoder (said once, in the log). */
   public static ImageDecoder create(DecodeOptions options) {
+    return create(options, OPENCV);
+  }
+
+  /** As {@link #create(DecodeOptions)}, with the native library given (tests simulate a machine where it fails). */
+  static ImageDecoder create(DecodeOptions options, NativeLibrary natives) {
     ImageIoDecoder fallback = new ImageIoDecoder(Objects.requireNonNull(options, "options"));
-    return available() ? new OpenCvJpegDecoder(fallback) : fallback;
+    return natives.available() ? new OpenCvJpegDecoder(fallback) : fallback;
   }
 
   /** Whether OpenCV's native library is loaded (tries once). */
-  public static synchronized boolean available() {
-    if (loaded == null) {
-      try {
-        nu.pattern.OpenCV.loadLocally();
-        loaded = true;
-      } catch (Throwable e) { // UnsatisfiedLinkError, or an unpacking failure: both mean "not here"
-        loaded = false;
-        if (WARNED.compareAndSet(false, true)) {
-          LOG.warn("the fast JPEG decoder is not available on this machine ({}); JPEGs are decoded with ImageIO, "
-              + "about three times slower", e.toString());
+  public static boolean available() {
+    return OPENCV.available();
+  }
+
+  /**
+   * A native library loaded at most once: the first {@link #available()} runs the loader; if it throws anything
+   * ({@link UnsatisfiedLinkError} where no native build fits the platform, an I/O error unpacking it from the jar),
+   * the library counts as absent and one warning says so; later calls answer from memory. Thread-safe.
+   */
+  static final class NativeLibrary {
+    private final Runnable loader;
+    private final Consumer<String> warning;
+    private Boolean loaded;
+
+    /**
+     * @param loader loads the library, throwing when it cannot
+     * @param warning receives the one message said when it cannot
+     */
+    NativeLibrary(Runnable loader, Consumer<String> warning) {
+      this.loader = Objects.requireNonNull(loader, "loader");
+      this.warning = Objects.requireNonNull(warning, "warning");
+    }
+
+    synchronized boolean available() {
+      if (loaded == null) {
+        try {
+          loader.run();
+          loaded = true;
+        } catch (Throwable e) { // UnsatisfiedLinkError, or an unpacking failure: both mean "not here"
+          loaded = false;
+          warning.accept("the fast JPEG decoder is not available on this machine (" + e
+              + "); JPEGs are decoded with ImageIO, about three times slower");
         }
       }
+      return loaded;
     }
-    return loaded;
   }
 
   /** The options this decoder applies. */

@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -107,6 +108,89 @@ class OpenCvJpegDecoderTest {
     // And the profile was applied: the linear-RGB picture reads lighter than the same pixels taken as sRGB.
     DecodedImage untagged = new ImageIoDecoder(DecodeOptions.defaults()).decode(big);
     assertThat(meanDeltaE00(a.analysis(), untagged.analysis())).isGreaterThan(5);
+  }
+
+  @Test
+  void whereTheNativeLibraryCannotLoadItSaysSoOnceAndEveryFileDecodesAsImageIoDoes() throws IOException {
+    // A machine without a fitting native build: the loader throws what System.load throws there.
+    AtomicInteger attempts = new AtomicInteger();
+    List<String> warnings = new ArrayList<>();
+    OpenCvJpegDecoder.NativeLibrary absent = new OpenCvJpegDecoder.NativeLibrary(() -> {
+      attempts.incrementAndGet();
+      throw new UnsatisfiedLinkError("no opencv_java in java.library.path");
+    }, warnings::add);
+    DecodedImage reference = new ImageIoDecoder(DecodeOptions.defaults()).decode(big);
+    for (int run = 0; run < 3; run++) { // three decoders of one run, as index, bench and the browser make them
+      ImageDecoder decoder = OpenCvJpegDecoder.create(DecodeOptions.defaults(), absent);
+      assertThat(decoder).isInstanceOf(ImageIoDecoder.class);
+      DecodedImage d = decoder.decode(big);
+      assertThat(d.width()).isEqualTo(reference.width());
+      assertThat(d.height()).isEqualTo(reference.height());
+      assertThat(d.orientation()).isEqualTo(reference.orientation());
+      assertThat(samePixels(d.analysis(), reference.analysis())).isTrue();
+    }
+    assertThat(attempts).hasValue(1);
+    assertThat(warnings).hasSize(1);
+    assertThat(warnings.getFirst()).contains("not available").contains("UnsatisfiedLinkError").contains("ImageIO");
+
+    // Any other failure of the loader (here an unpacking error) means the same.
+    List<String> more = new ArrayList<>();
+    OpenCvJpegDecoder.NativeLibrary unpackFails = new OpenCvJpegDecoder.NativeLibrary(() -> {
+      throw new IllegalStateException("cannot write the native library to the temporary folder");
+    }, more::add);
+    assertThat(OpenCvJpegDecoder.create(DecodeOptions.defaults(), unpackFails)).isInstanceOf(ImageIoDecoder.class);
+    assertThat(OpenCvJpegDecoder.create(DecodeOptions.defaults(), unpackFails)).isInstanceOf(ImageIoDecoder.class);
+    assertThat(more).hasSize(1);
+
+    // And a loader that works gives the fast decoder, silently.
+    List<String> none = new ArrayList<>();
+    OpenCvJpegDecoder.NativeLibrary present = new OpenCvJpegDecoder.NativeLibrary(() -> { }, none::add);
+    assertThat(OpenCvJpegDecoder.create(DecodeOptions.defaults(), present)).isInstanceOf(OpenCvJpegDecoder.class);
+    assertThat(none).isEmpty();
+  }
+
+  @Test
+  void aFileTheFastPathRefusesFallsBackForThatFileOnly() throws IOException, InterruptedException {
+    Path icc = tmp.resolve("linear-rgb-2.icc");
+    Files.write(icc, ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData());
+    Path tagged = tmp.resolve("squirrel-tagged.jpg"); // refused: an embedded profile
+    convert(big.toString(), "-profile", icc.toString(), tagged.toString());
+    Path png = tmp.resolve("squirrel.png"); // refused: not a JPEG
+    convert(big.toString(), "-resize", "1600x1600", png.toString());
+    Path cmyk = TestImages.write(tmp, "inks.jpg", AdobeJpegBuilder.build(48, 16, inks(48, 16), false)); // Adobe
+
+    ImageIoDecoder slow = new ImageIoDecoder(DecodeOptions.defaults());
+    ImageDecoder fast = OpenCvJpegDecoder.create(DecodeOptions.defaults());
+    DecodedImage fastAlone = OpenCvJpegDecoder.create(DecodeOptions.defaults()).decode(big);
+    // One decoder, refused and accepted files interleaved: each refused file is decoded exactly as ImageIO does it,
+    // and the plain JPEG after each one still takes the fast path (the same pixels as a fresh fast decoder gives,
+    // which differ from ImageIO's by the resampling).
+    for (Path refused : List.of(tagged, png, cmyk)) {
+      DecodedImage viaFast = fast.decode(refused);
+      DecodedImage viaSlow = slow.decode(refused);
+      assertThat(samePixels(viaFast.analysis(), viaSlow.analysis())).as("%s as ImageIO", refused).isTrue();
+      assertThat(viaFast.width()).isEqualTo(viaSlow.width());
+      DecodedImage next = fast.decode(big);
+      assertThat(samePixels(next.analysis(), fastAlone.analysis())).as("fast path after %s", refused).isTrue();
+      assertThat(samePixels(next.analysis(), slow.decode(big).analysis())).isFalse();
+    }
+  }
+
+  private static int[][] inks(int w, int h) {
+    int[][] inks = new int[w * h][];
+    for (int i = 0; i < inks.length; i++) {
+      inks[i] = (i % w) < w / 2 ? new int[] {255, 0, 0, 0} : new int[] {0, 0, 0, 0}; // cyan | paper white
+    }
+    return inks;
+  }
+
+  static boolean samePixels(BufferedImage a, BufferedImage b) {
+    if (a.getWidth() != b.getWidth() || a.getHeight() != b.getHeight()) {
+      return false;
+    }
+    int w = a.getWidth();
+    int h = a.getHeight();
+    return java.util.Arrays.equals(a.getRGB(0, 0, w, h, null, 0, w), b.getRGB(0, 0, w, h, null, 0, w));
   }
 
   @Test
