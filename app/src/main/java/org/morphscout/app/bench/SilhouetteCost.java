@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import org.morphscout.indexer.catalog.FeatureStore;
 import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.indexer.library.IndexOptions;
 import org.morphscout.indexer.library.Library;
@@ -12,6 +11,7 @@ import org.morphscout.indexer.library.LibraryIndexer;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.silhouette.ModelFolder;
+import org.morphscout.indexer.values.SilhouetteCounts;
 
 /**
  * What the per-image choice of silhouettes costs: the same folder indexed into two new catalogs, one after the other,
@@ -28,7 +28,7 @@ public final class SilhouetteCost {
    * @param masks silhouettes by what made them, and how many are uncertain
    */
   public record Run(AnalysisSetup.SilhouetteMode mode, double seconds, double cpuSeconds,
-      FeatureStore.SilhouetteCounts masks) {}
+      SilhouetteCounts masks) {}
 
   /** Both runs, classical first. */
   public record Result(Run classical, Run auto) {

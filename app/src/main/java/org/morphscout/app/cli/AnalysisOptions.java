@@ -5,7 +5,6 @@ import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.feature.ModelDescription;
-import org.morphscout.indexer.ingest.DecodeOptions;
 import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import picocli.CommandLine.Model.CommandSpec;
@@ -52,13 +51,13 @@ final class AnalysisOptions {
       description = "Refuse images larger than this before decoding (default: ${DEFAULT-VALUE}; at most 2147).")
   void maxMegapixels(double mp) {
     // Checked while parsing: a usage error before any catalog is opened.
-    OptionCheck.of(mixee).positive("--max-megapixels", mp, DecodeOptions.MAX_PIXEL_CAP / 1e6);
+    OptionCheck.of(mixee).positive("--max-megapixels", mp, AnalysisSetup.MAX_PIXEL_CAP / 1e6);
     maxMegapixels = mp;
   }
 
   AnalysisSetup setup() {
     AnalysisSetup s = AnalysisSetup.defaults()
-        .withDecode(DecodeOptions.defaults().withMaxPixels((long) (maxMegapixels * 1_000_000)))
+        .withMaxPixels((long) (maxMegapixels * 1_000_000))
         .withSilhouettes(silhouettes)
         .withModels(ModelFolder.resolve(java.util.Optional.ofNullable(models)));
     if (model != null) {

@@ -11,10 +11,10 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.chain.ChainQuery;
-import org.morphscout.indexer.library.ChainService;
 import org.morphscout.indexer.library.ChainService.ChainAnswer;
 import org.morphscout.indexer.library.ChainService.ChainDetail;
 import org.morphscout.indexer.library.ChainService.StepDetail;
+import org.morphscout.indexer.library.ChainService;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.OutputFile;
 import org.morphscout.indexer.library.PairService;
@@ -136,7 +136,7 @@ final class ChainCommand implements Callable<Integer> {
     if (answer.chains().isEmpty() && (format.json || format.csv)) {
       spec.commandLine().getErr().println("no chain: " + answer.reason()); // no silent nothing in machine output
     }
-    java.util.function.LongFunction<String> path = id -> context.library().images().byId(id).map(r -> r.path())
+    java.util.function.LongFunction<String> path = id -> context.library().image(id).map(r -> r.path())
         .orElse("#" + id);
     if (format.json) {
       Map<String, Object> doc = new LinkedHashMap<>();

@@ -3,9 +3,9 @@ package org.morphscout.app.cli;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import org.morphscout.indexer.catalog.DecisionStore.Verdict;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -46,9 +46,9 @@ final class DecideCommand implements Callable<Integer> {
   boolean json;
 
   /** The decision word as a usage error (exit 2) when it is neither approve(d) nor reject(ed). */
-  static Verdict decision(CommandSpec spec, String what, String word) {
+  static DecisionKind decision(CommandSpec spec, String what, String word) {
     try {
-      return Verdict.parse(word);
+      return DecisionKind.parse(word);
     } catch (org.morphscout.indexer.MorphscoutException e) {
       throw OptionCheck.of(spec).fail(what + " must be approve or reject, got '" + Terminal.safe(word) + "'");
     }
@@ -62,7 +62,7 @@ final class DecideCommand implements Callable<Integer> {
     if (!clear && decision == null) {
       throw OptionCheck.of(spec).fail("say approve or reject, or --clear to remove the decision");
     }
-    Verdict v = clear ? null : decision(spec, "approve|reject", decision);
+    DecisionKind v = clear ? null : decision(spec, "approve|reject", decision);
     try (Library library = Library.openExisting(root.catalogDir())) {
       ImageRow ra = library.require(first);
       ImageRow rb = library.require(second);

@@ -1,15 +1,12 @@
 package org.morphscout.app.cli;
 
 import java.io.PrintWriter;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.concurrent.Callable;
-import org.morphscout.indexer.catalog.DecisionStore.Decision;
-import org.morphscout.indexer.catalog.DecisionStore.Verdict;
 import org.morphscout.indexer.library.DecisionTable;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -37,7 +34,7 @@ final class DecisionsCommand implements Callable<Integer> {
 
   @Override
   public Integer call() throws Exception {
-    Verdict wanted = only == null ? null : DecideCommand.decision(spec, "--only", only);
+    DecisionKind wanted = only == null ? null : DecideCommand.decision(spec, "--only", only);
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openForReading(root.catalogDir())) {
       List<Decision> decisions = DecisionTable.only(library.decisions().all(), wanted);
@@ -54,7 +51,7 @@ final class DecisionsCommand implements Callable<Integer> {
         out.println(none);
       } else {
         for (Decision d : decisions) {
-          out.printf("%-8s %s%n         %s%s%n", d.verdict().word(), Terminal.safe(d.pathA()),
+          out.printf("%-8s %s%n         %s%s%n", d.kind().word(), Terminal.safe(d.pathA()),
               Terminal.safe(d.pathB()), d.note() == null ? "" : "\n         note: " + Terminal.safe(d.note()));
         }
       }

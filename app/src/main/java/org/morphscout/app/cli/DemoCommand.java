@@ -13,8 +13,6 @@ import org.morphscout.demo.DemoLibrary;
 import org.morphscout.demo.DemoOptions;
 import org.morphscout.demo.LibrarySummary;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.chain.ChainQuery;
 import org.morphscout.indexer.chain.StepCostModel;
 import org.morphscout.indexer.library.AnalysisSetup;
@@ -37,6 +35,8 @@ import org.morphscout.indexer.pairing.ScoredPair;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -236,7 +236,7 @@ final class DemoCommand implements Callable<Integer> {
   }
 
   private static String path(Library library, long id) {
-    return library.images().byId(id).map(ImageRow::path).orElse("#" + id);
+    return library.image(id).map(ImageRow::path).orElse("#" + id);
   }
 
   private static String rel(Path base, String path) {
@@ -252,7 +252,7 @@ final class DemoCommand implements Callable<Integer> {
   private static Optional<ImageAnalysis> firstOptional(Library library, QueryContext context, Path folder,
       String prefix) {
     String start = folder.resolve(prefix).toString();
-    for (ImageRow row : library.images().withStatus(ImageStatus.READY)) {
+    for (ImageRow row : library.imagesWith(ImageStatus.READY)) {
       if (row.path().startsWith(start) && !row.path().contains("-edit") && !row.path().contains("-web")
           && !row.path().contains("-small")) {
         return context.cache().get(row.id());

@@ -5,14 +5,14 @@ import java.io.UncheckedIOException;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.FileSystemException;
 import java.nio.file.NoSuchFileException;
+import org.morphscout.indexer.DiskSpace;
 import org.morphscout.indexer.MorphscoutException;
-import org.morphscout.indexer.catalog.DiskSpace;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
-import picocli.CommandLine;
 import picocli.CommandLine.IExecutionExceptionHandler;
 import picocli.CommandLine.ParseResult;
+import picocli.CommandLine;
 
 /**
  * Maps exceptions from commands to one message on stderr and an exit code. User errors never print a stack trace;

@@ -92,11 +92,11 @@ final class IndexCommand implements Callable<Integer> {
     }
     try (Library library = Library.open(root.catalogDir())) {
       // Without --int8/--no-int8 the catalog keeps the quantisation it has.
-      boolean keep = library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE").equals("INT8");
+      boolean keep = library.int8Vectors();
       options = options.withInt8(int8 != null ? int8 : keep);
       List<Path> roots = new ArrayList<>(folders);
       if (roots.isEmpty()) {
-        library.images().roots().forEach(r -> roots.add(Path.of(r.path())));
+        library.folders().forEach(r -> roots.add(Path.of(r.path())));
         if (roots.isEmpty()) {
           spec.commandLine().getErr().println("index: name at least one folder to index (the catalog has no roots "
               + "yet)");

@@ -70,10 +70,10 @@ final class ModelsCommand implements Callable<Integer> {
     public Integer call() throws Exception {
       MorphscoutCommand root = (MorphscoutCommand) spec.parent().parent().userObject();
       try (Library library = Library.openExisting(root.catalogDir())) {
-        String active = org.morphscout.indexer.library.LibrarySettings.activeModel(library.features())
+        String active = library.activeModel()
             .orElse("none yet");
         Optional<Path> salient = new SalientModelStore().find(ModelFolder.resolve(Optional.empty()),
-            library.catalog().dir());
+            library.dir());
         spec.commandLine().getOut().println("appearance model: " + active);
         spec.commandLine().getOut().println("learned silhouettes: "
             + salient.map(p -> "installed (" + p + ")").orElse("not installed (morphscout models add-salient)"));

@@ -3,13 +3,13 @@ package org.morphscout.app.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
-import org.morphscout.indexer.catalog.CatalogLocation;
-import picocli.CommandLine;
+import org.morphscout.indexer.library.CatalogLocation;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ScopeType;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine;
 
 /** The root command: global options and the list of subcommands. */
 @Command(

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.DecisionStore;
+import org.morphscout.indexer.library.Decisions;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.PairService;
 import org.morphscout.indexer.library.QueryContext;
@@ -102,7 +102,7 @@ final class PairsCommand implements Callable<Integer> {
       if (id < 0) {
         return outside;
       }
-      return context.library().images().byId(id).map(r -> r.path()).orElse("#" + id);
+      return context.library().image(id).map(r -> r.path()).orElse("#" + id);
     }
   }
 
@@ -126,14 +126,14 @@ final class PairsCommand implements Callable<Integer> {
         + (minScore > 0 ? "; try a lower --min-score" : ""));
   }
 
-  private void printPairs(PrintWriter out, PairSearchResult result, Paths paths, DecisionStore decisions) {
+  private void printPairs(PrintWriter out, PairSearchResult result, Paths paths, Decisions decisions) {
     List<String> notes = notes(result);
     notes.forEach(n -> spec.commandLine().getErr().println(n));
     if (format.json) {
       List<Map<String, Object>> rows = new ArrayList<>();
       for (ScoredPair p : result.pairs()) {
         Map<String, Object> row = PairRows.json(paths.of(p.a()), paths.of(p.b()), p.score());
-        decisions.find(p.a(), p.b()).ifPresent(d -> row.put("decision", d.verdict().word()));
+        decisions.find(p.a(), p.b()).ifPresent(d -> row.put("decision", d.kind().word()));
         rows.add(row);
       }
       Map<String, Object> doc = new LinkedHashMap<>();
@@ -149,14 +149,14 @@ final class PairsCommand implements Callable<Integer> {
         for (ScoredPair p : result.pairs()) {
           csv.row(paths.of(p.a()), paths.of(p.b()), PairRows.round(p.score().score(), 1), p.score().verdict().label(),
               PairRows.reasons(p.score().reasons()),
-              decisions.find(p.a(), p.b()).map(d -> d.verdict().word()).orElse(""));
+              decisions.find(p.a(), p.b()).map(d -> d.kind().word()).orElse(""));
         }
       }
       return;
     }
     int rank = 0;
     for (ScoredPair p : result.pairs()) {
-      String decided = decisions.find(p.a(), p.b()).map(d -> "  [" + d.verdict().word() + "]").orElse("");
+      String decided = decisions.find(p.a(), p.b()).map(d -> "  [" + d.kind().word() + "]").orElse("");
       out.printf("%2d. %5s %-4s %s%n             %s%s%n", ++rank, Text.num(p.score().score(), 1),
           p.score().verdict().label(), Terminal.safe(paths.of(p.a())), Terminal.safe(paths.of(p.b())), decided);
       if (!p.score().reasons().isEmpty()) {

@@ -59,7 +59,7 @@ final class SimilarCommand implements Callable<Integer> {
       List<SimilarityService.Hit> hits = new SimilarityService(context).similar(query, k, by);
       List<String> notes = new ArrayList<>();
       if (hits.isEmpty()) { // no silent nothing: say why
-        int ready = library.features().readyIds(context.modelId()).size();
+        int ready = library.readyCount(context.modelId());
         notes.add("no similar images: the catalog has " + ready + " ready image" + (ready == 1 ? "" : "s")
             + (ready <= 1 ? " (index more pictures; see status)" : " and none has a usable "
                 + by.name().toLowerCase(java.util.Locale.ROOT) + " vector"));

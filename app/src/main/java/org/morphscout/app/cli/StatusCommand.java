@@ -6,13 +6,15 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
-import org.morphscout.indexer.catalog.FeatureStore;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.library.CatalogCheck;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.LibrarySettings;
 import org.morphscout.indexer.library.StoredPairCounts;
+import org.morphscout.indexer.values.Folder;
+import org.morphscout.indexer.values.ImageFailure;
+import org.morphscout.indexer.values.ImageStatus;
+import org.morphscout.indexer.values.SilhouetteCounts;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -42,18 +44,17 @@ final class StatusCommand implements Callable<Integer> {
   public Integer call() throws Exception {
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openForReading(root.catalogDir())) {
-      ImageStore images = library.images();
-      Map<ImageStatus, Integer> counts = images.countsByStatus();
-      List<String> roots = images.roots().stream().map(ImageStore.Root::path).toList();
-      List<ImageStore.Failure> failures = images.failures();
-      String model = LibrarySettings.activeModel(library.features()).orElse("none yet");
-      long bytes = library.catalog().databaseBytes();
+      Map<ImageStatus, Integer> counts = library.countsByStatus();
+      List<String> roots = library.folders().stream().map(Folder::path).toList();
+      List<ImageFailure> failures = library.failures();
+      String model = library.activeModel().orElse("none yet");
+      long bytes = library.databaseBytes();
       CatalogCheck checked = check ? CatalogCheck.run(library) : null;
-      FeatureStore.SilhouetteCounts silhouettes = library.features().silhouetteCounts();
+      SilhouetteCounts silhouettes = library.silhouetteCounts();
       StoredPairCounts pairs = StoredPairCounts.of(library);
       if (json) {
         Map<String, Object> doc = new LinkedHashMap<>();
-        doc.put("catalog", library.catalog().dir().toString());
+        doc.put("catalog", library.dir().toString());
         doc.put("images", counts.values().stream().mapToInt(Integer::intValue).sum());
         doc.put("ready", counts.get(ImageStatus.READY));
         doc.put("pending", counts.get(ImageStatus.PENDING));
@@ -61,7 +62,7 @@ final class StatusCommand implements Callable<Integer> {
         doc.put("missing", counts.get(ImageStatus.MISSING));
         doc.put("roots", roots);
         List<Map<String, String>> fails = new ArrayList<>();
-        for (ImageStore.Failure f : failures) {
+        for (ImageFailure f : failures) {
           fails.add(Map.of("path", f.path(), "reason", f.reason()));
         }
         doc.put("failures", fails);
@@ -84,7 +85,7 @@ final class StatusCommand implements Callable<Integer> {
         JsonOut.write(out, doc);
         return checked == null || checked.ok() ? ExitCodes.OK : ExitCodes.ERROR;
       }
-      out.printf("catalog   %s (%s)%n", Terminal.safe(library.catalog().dir().toString()), Text.bytes(bytes));
+      out.printf("catalog   %s (%s)%n", Terminal.safe(library.dir().toString()), Text.bytes(bytes));
       out.printf("model     %s%n", model);
       out.printf("roots     %s%n",
           roots.isEmpty() ? "none" : String.join("\n          ", roots.stream().map(Terminal::safe).toList()));
@@ -105,7 +106,7 @@ final class StatusCommand implements Callable<Integer> {
       if (!failures.isEmpty()) {
         out.println();
         out.println("failures:");
-        for (ImageStore.Failure f : failures) {
+        for (ImageFailure f : failures) {
           out.printf("  %s%n    %s%n", Terminal.safe(f.path()), Terminal.safe(f.reason()));
         }
       }

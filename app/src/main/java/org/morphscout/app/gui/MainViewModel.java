@@ -96,8 +96,8 @@ public final class MainViewModel implements AutoCloseable {
       if (oldBackends != null) {
         oldBackends.close();
       }
-      catalogDir.set(opened.library().catalog().dir());
-      title.set("Morphscout — " + opened.library().catalog().dir());
+      catalogDir.set(opened.library().dir());
+      title.set("Morphscout — " + opened.library().dir());
       message.set("");
       if (old != null) {
         closeQuietly(old);

@@ -13,8 +13,8 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.morphscout.app.gui.service.Backends;
 import org.morphscout.app.gui.service.SimilarityMode;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * State shared by the panes: the open library and its backends, the selected image, the chain endpoints, and
@@ -78,7 +78,7 @@ public final class Session {
   /** The thumbnail file of an image; touches the disk, so call it off the UI thread. */
   public Optional<Path> thumbnail(long id) {
     Library lib = library.get();
-    return lib == null ? Optional.empty() : lib.catalog().thumbnail(id);
+    return lib == null ? Optional.empty() : lib.thumbnail(id);
   }
 
   public ReadOnlyObjectProperty<Library> libraryProperty() {

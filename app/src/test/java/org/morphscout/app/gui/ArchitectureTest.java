@@ -10,8 +10,8 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * Layering rules: the library knows nothing of the application, its packages form no cycles and it never prints;
- * view-models know nothing of scene graphs.
+ * Layering rules: the library knows nothing of the application, its packages form no cycles and it never prints; the
+ * application reaches the catalog only through the library's facade; view-models know nothing of scene graphs.
  */
 class ArchitectureTest {
   private static JavaClasses classes;
@@ -76,6 +76,19 @@ class ArchitectureTest {
         .orShould().dependOnClassesThat().haveFullyQualifiedName("org.morphscout.indexer.catalog.DecisionStore")
         .orShould().dependOnClassesThat().haveFullyQualifiedName("org.morphscout.indexer.catalog.Catalog")
         .orShould().dependOnClassesThat().haveSimpleNameEndingWith("Backend")
+        .check(classes);
+  }
+
+  @Test
+  void theApplicationReachesTheCatalogOnlyThroughTheLibraryFacade() {
+    // The command line and the browser call the same services of indexer.library (with the plain values of
+    // indexer.values); the stores, the vector index and the scanner are that facade's business. The benchmarks, and
+    // the bench command that sets them up, measure those internals on purpose.
+    noClasses().that().resideInAPackage("org.morphscout.app..")
+        .and().resideOutsideOfPackage("org.morphscout.app.bench..")
+        .and().haveNameNotMatching("org\\.morphscout\\.app\\.cli\\.BenchCommand(\\$.*)?")
+        .should().dependOnClassesThat().resideInAnyPackage("org.morphscout.indexer.catalog..",
+            "org.morphscout.indexer.vector..", "org.morphscout.indexer.ingest..")
         .check(classes);
   }
 }

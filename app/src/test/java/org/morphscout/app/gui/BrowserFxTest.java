@@ -19,9 +19,10 @@ import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.pairs.PairRow;
 import org.morphscout.app.gui.service.ChainCandidate;
 import org.morphscout.app.gui.task.FxTaskRunner;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -124,9 +125,9 @@ class BrowserFxTest {
     robot.type(KeyCode.A);
     waitUntil(() -> chosen.decisionProperty().get().equals("approved"));
     try (Library lib = Library.openExisting(catalog)) {
-      DecisionStore.Decision d = lib.decisions().find(chosen.suggestion().a(), chosen.suggestion().b())
+      Decision d = lib.decisions().find(chosen.suggestion().a(), chosen.suggestion().b())
           .orElseThrow();
-      assertThat(d.verdict()).isEqualTo(DecisionStore.Verdict.APPROVED);
+      assertThat(d.kind()).isEqualTo(DecisionKind.APPROVED);
       lib.decisions().clear(d.imageA(), d.imageB());
     }
   }

@@ -9,7 +9,6 @@ import java.util.Locale;
 import java.util.SplittableRandom;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.FeatureStore;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.ingest.DecodeOptions;
 import org.morphscout.indexer.ingest.Thumbnails;
@@ -17,6 +16,7 @@ import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ShapeDescriptor;
 import org.morphscout.indexer.silhouette.Silhouette;
+import org.morphscout.indexer.values.ImageStatus;
 
 /**
  * Writes a large catalog (tens of thousands of images) through the indexer's own stores, as the browser's scale

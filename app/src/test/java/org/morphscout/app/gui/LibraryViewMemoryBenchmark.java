@@ -19,13 +19,13 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.app.bench.HeapMeter;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.task.FxTaskRunner;
-import org.morphscout.app.bench.HeapMeter;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.testfx.api.FxToolkit;
 import org.testfx.util.WaitForAsyncUtils;
 

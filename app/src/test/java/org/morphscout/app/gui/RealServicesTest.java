@@ -14,7 +14,7 @@ import org.morphscout.app.gui.service.ServiceSimilarity;
 import org.morphscout.app.gui.service.ServiceWalk;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
-import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.values.ImageRow;
 
 /** The browser on the library's real services: a new catalog, indexing a folder, then a similarity search. */
 class RealServicesTest {

@@ -18,13 +18,13 @@ import java.util.List;
 import java.util.Random;
 import javax.imageio.ImageIO;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.LibrarySettings;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ShapeDescriptor;
 import org.morphscout.indexer.silhouette.Silhouette;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * Builds a small real catalog of invented pictures (plain shapes on a plain background) for tests and screenshots:

@@ -33,7 +33,7 @@ import org.morphscout.app.gui.task.FxTaskRunner;
 import org.morphscout.demo.DemoLibrary;
 import org.morphscout.demo.DemoOptions;
 import org.morphscout.demo.LibrarySummary;
-import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.values.ImageRow;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 import org.testfx.util.WaitForAsyncUtils;

@@ -23,8 +23,8 @@ import org.morphscout.app.gui.pairs.PairsViewModel;
 import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.ImageRow;
 
 /** The view-models against a real sample catalog, without the toolkit (synchronous task runner). */
 class ViewModelsTest {
@@ -220,7 +220,7 @@ class ViewModelsTest {
     assertThat(mapper.readTree(json.toFile()).get("decisions")).hasSize(1);
     // leave the shared catalog as found
     try (var lib = org.morphscout.indexer.library.Library.openExisting(catalog)) {
-      for (DecisionStore.Decision d : lib.decisions().all()) {
+      for (Decision d : lib.decisions().all()) {
         lib.decisions().clear(d.imageA(), d.imageB());
       }
     }

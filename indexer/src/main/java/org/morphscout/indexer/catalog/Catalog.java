@@ -11,6 +11,7 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.Arrays;
 import java.util.concurrent.locks.ReentrantLock;
+import org.morphscout.indexer.DiskSpace;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.schema.SchemaException;
 import org.morphscout.schema.SchemaMigrator;

@@ -5,9 +5,11 @@ import java.sql.ResultSet;
 import java.sql.Statement;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * The user's decisions on pairs (approve or reject). A decision belongs to the two pictures judged, named by their
@@ -22,34 +24,6 @@ public final class DecisionStore {
   public DecisionStore(Catalog catalog) {
     this.catalog = catalog;
   }
-
-  /** What the user decided about a pair. */
-  public enum Verdict {
-    APPROVED,
-    REJECTED;
-
-    public String word() {
-      return name().toLowerCase(Locale.ROOT);
-    }
-
-    /** Accepts the stored words and the command words ("approve", "reject"). */
-    public static Verdict parse(String word) {
-      return switch (word.toLowerCase(Locale.ROOT)) {
-        case "approve", "approved" -> APPROVED;
-        case "reject", "rejected" -> REJECTED;
-        default -> throw new MorphscoutException("unknown verdict '" + word + "': use approve or reject");
-      };
-    }
-  }
-
-  /**
-   * One decision, with the images that now hold its pictures.
-   *
-   * @param imageA the catalog image holding picture A (one not missing when there is one), or -1 when none does
-   * @param pathA that image's path, or A's path at decision time when no image holds the picture any more
-   */
-  public record Decision(long imageA, String pathA, long imageB, String pathB, Verdict verdict, String note,
-      String decidedAt) {}
 
   /** The stored names of a pair's two pictures, smaller first, with the paths in the same order. */
   private record Pictures(String a, String b, String pathA, String pathB) {}
@@ -69,14 +43,14 @@ public final class DecisionStore {
   }
 
   /** Records (or replaces) the decision on a pair. */
-  public void decide(long a, long b, Verdict verdict, String note) {
+  public void decide(long a, long b, DecisionKind kind, String note) {
     Pictures p = pictures(a, b);
     catalog.inTransaction(c -> {
       try (PreparedStatement s = c.prepareStatement("INSERT INTO decisions(picture_a, picture_b, path_a, path_b, "
           + "verdict, note, decided_at) VALUES (?, ?, ?, ?, ?, ?, ?) ON CONFLICT(picture_a, picture_b) DO UPDATE SET "
           + "path_a = excluded.path_a, path_b = excluded.path_b, verdict = excluded.verdict, note = excluded.note, "
           + "decided_at = excluded.decided_at")) {
-        ImageStore.bind(s, p.a(), p.b(), p.pathA(), p.pathB(), verdict.word(), note, ImageStore.now());
+        ImageStore.bind(s, p.a(), p.b(), p.pathA(), p.pathB(), kind.word(), note, ImageStore.now());
         return s.executeUpdate();
       }
     });
@@ -123,7 +97,7 @@ public final class DecisionStore {
           while (rs.next()) {
             Holder a = holder(holder, byId, rs.getString(1), rs.getString(2));
             Holder b = holder(holder, byId, rs.getString(3), rs.getString(4));
-            result.add(new Decision(a.id(), a.path(), b.id(), b.path(), Verdict.parse(rs.getString(5)),
+            result.add(new Decision(a.id(), a.path(), b.id(), b.path(), DecisionKind.parse(rs.getString(5)),
                 rs.getString(6), rs.getString(7)));
           }
         }

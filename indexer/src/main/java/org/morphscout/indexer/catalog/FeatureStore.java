@@ -16,6 +16,9 @@ import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.ShapeDescriptor;
 import org.morphscout.indexer.silhouette.Silhouette;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.SilhouetteCounts;
+import org.morphscout.indexer.values.SilhouetteTraits;
 
 /**
  * Per-image features. The silhouette mask is stored shrunk to {@link #MASK_LONG_SIDE} px (enough for warp estimation,
@@ -170,16 +173,6 @@ public final class FeatureStore {
     });
   }
 
-  /**
-   * Silhouettes of the ready images, counted by what made them ("alpha", "classical", "learned"), and how many of
-   * them are uncertain (an object was found, with a confidence below
-   * {@link org.morphscout.indexer.silhouette.Silhouette#UNCERTAIN_BELOW}).
-   *
-   * @param bySource counts by extractor, sorted by name
-   * @param uncertain how many are uncertain
-   */
-  public record SilhouetteCounts(java.util.SortedMap<String, Integer> bySource, int uncertain) {}
-
   public SilhouetteCounts silhouetteCounts() {
     return catalog.read(c -> {
       java.util.SortedMap<String, Integer> bySource = new java.util.TreeMap<>();
@@ -198,6 +191,29 @@ public final class FeatureStore {
         }
       }
       return new SilhouetteCounts(bySource, uncertain);
+    });
+  }
+
+  /**
+   * The stored silhouettes with something to report: several objects, cut off by the frame, or uncertain (an object
+   * found with a confidence below {@link org.morphscout.indexer.silhouette.Silhouette#UNCERTAIN_BELOW}, as
+   * {@link #silhouetteCounts} counts it). One query for the whole catalog: the browser filters 100,000 images by them.
+   */
+  public List<SilhouetteTraits> notableSilhouettes() {
+    return catalog.read(c -> {
+      List<SilhouetteTraits> result = new ArrayList<>();
+      try (PreparedStatement s = c.prepareStatement("SELECT image_id, components, touches_frame, "
+          + "CASE WHEN coverage > 0 AND confidence < ? THEN 1 ELSE 0 END AS uncertain FROM features "
+          + "WHERE components > 1 OR touches_frame = 1 OR (coverage > 0 AND confidence < ?)")) {
+        s.setDouble(1, org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW);
+        s.setDouble(2, org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW);
+        try (ResultSet rs = s.executeQuery()) {
+          while (rs.next()) {
+            result.add(new SilhouetteTraits(rs.getLong(1), rs.getInt(2), rs.getInt(3) == 1, rs.getInt(4) == 1));
+          }
+        }
+      }
+      return result;
     });
   }
 

@@ -11,6 +11,10 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import org.morphscout.indexer.values.Folder;
+import org.morphscout.indexer.values.ImageFailure;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 
 /**
  * Roots, images and per-file failures. Methods run on the catalog's connection; called inside
@@ -25,12 +29,6 @@ public final class ImageStore {
   public ImageStore(Catalog catalog) {
     this.catalog = catalog;
   }
-
-  /** A library root. */
-  public record Root(long id, String path) {}
-
-  /** A failed image with its reason. */
-  public record Failure(long imageId, String path, String reason, String failedAt) {}
 
   /** Registers a root (absolute, normalised) and returns its id; an existing root keeps its id. */
   public long ensureRoot(Path root) {
@@ -51,12 +49,12 @@ public final class ImageStore {
     });
   }
 
-  public List<Root> roots() {
+  public List<Folder> roots() {
     return catalog.read(c -> {
-      List<Root> roots = new ArrayList<>();
+      List<Folder> roots = new ArrayList<>();
       try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT id, path FROM roots ORDER BY path")) {
         while (rs.next()) {
-          roots.add(new Root(rs.getLong(1), rs.getString(2)));
+          roots.add(new Folder(rs.getLong(1), rs.getString(2)));
         }
       }
       return roots;
@@ -183,14 +181,14 @@ public final class ImageStore {
   }
 
   /** Failures with their reasons, by path. */
-  public List<Failure> failures() {
+  public List<ImageFailure> failures() {
     return catalog.read(c -> {
-      List<Failure> result = new ArrayList<>();
+      List<ImageFailure> result = new ArrayList<>();
       try (Statement s = c.createStatement();
           ResultSet rs = s.executeQuery("SELECT f.image_id, i.path, f.reason, f.failed_at FROM failures f "
               + "JOIN images i ON i.id = f.image_id WHERE i.status = 'failed' ORDER BY i.path")) {
         while (rs.next()) {
-          result.add(new Failure(rs.getLong(1), rs.getString(2), rs.getString(3), rs.getString(4)));
+          result.add(new ImageFailure(rs.getLong(1), rs.getString(2), rs.getString(3), rs.getString(4)));
         }
       }
       return result;

@@ -58,6 +58,14 @@ public record AnalysisSetup(
     return new AnalysisSetup(decode, mode, model, models);
   }
 
+  /** The largest picture, in pixels, any setup accepts (the decoder's cap). */
+  public static final long MAX_PIXEL_CAP = DecodeOptions.MAX_PIXEL_CAP;
+
+  /** Refuses pictures of more than {@code maxPixels} before decoding them ({@code --max-megapixels}). */
+  public AnalysisSetup withMaxPixels(long maxPixels) {
+    return withDecode(decode.withMaxPixels(maxPixels));
+  }
+
   public AnalysisSetup withDecode(DecodeOptions options) {
     return new AnalysisSetup(options, silhouettes, model, models);
   }

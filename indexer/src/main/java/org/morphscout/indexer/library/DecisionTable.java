@@ -11,9 +11,9 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.morphscout.indexer.catalog.DecisionStore.Decision;
-import org.morphscout.indexer.catalog.DecisionStore.Verdict;
 import org.morphscout.indexer.text.CsvCells;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
 
 /**
  * The one format of a list of decisions, written by {@code decisions --json|--csv} and by the browser's export of
@@ -33,15 +33,15 @@ public final class DecisionTable {
   private DecisionTable() {}
 
   /** The decisions with the given decision word, in the order given; all of them when {@code only} is null. */
-  public static List<Decision> only(List<Decision> decisions, Verdict only) {
-    return decisions.stream().filter(d -> only == null || d.verdict() == only).toList();
+  public static List<Decision> only(List<Decision> decisions, DecisionKind only) {
+    return decisions.stream().filter(d -> only == null || d.kind() == only).toList();
   }
 
   /** Writes the CSV form (header and one row a decision); does not close {@code out}. */
   public static void csv(Writer out, List<Decision> decisions) throws IOException {
     try (CsvCells.Printer csv = CsvCells.printer(out, CSV_COLUMNS.toArray(String[]::new))) {
       for (Decision d : decisions) {
-        csv.row(d.pathA(), d.pathB(), d.verdict().word(), d.note(), d.decidedAt());
+        csv.row(d.pathA(), d.pathB(), d.kind().word(), d.note(), d.decidedAt());
       }
     }
   }
@@ -53,7 +53,7 @@ public final class DecisionTable {
       Map<String, Object> row = new LinkedHashMap<>();
       row.put("first", d.pathA());
       row.put("second", d.pathB());
-      row.put("decision", d.verdict().word());
+      row.put("decision", d.kind().word());
       row.put("note", d.note());
       row.put("decidedAt", d.decidedAt());
       rows.add(row);

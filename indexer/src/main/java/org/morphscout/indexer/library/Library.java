@@ -3,18 +3,30 @@ package org.morphscout.indexer.library;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.catalog.Catalog;
 import org.morphscout.indexer.catalog.DecisionStore;
 import org.morphscout.indexer.catalog.FeatureStore;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.catalog.NeighbourStore;
 import org.morphscout.indexer.catalog.PairStore;
+import org.morphscout.indexer.values.Folder;
+import org.morphscout.indexer.values.ImageFailure;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
+import org.morphscout.indexer.values.SilhouetteCounts;
+import org.morphscout.indexer.values.SilhouetteTraits;
 
 /**
  * An open catalog and its stores. Thread-safe. Close it when done.
+ *
+ * <p>The application reads the catalog through the methods below and the services of this package, never through
+ * the stores (an architecture test holds it to that); the store accessors are for the library's own services and for
+ * the benchmarks that measure them.
  *
  * <p>Services that need more (the vector index, the appearance model) are built on top of it, so that a command that
  * only reads decisions never opens the vector index or loads a model.
@@ -23,7 +35,7 @@ public final class Library implements AutoCloseable {
   private final Catalog catalog;
   private final ImageStore images;
   private final FeatureStore features;
-  private final DecisionStore decisions;
+  private final Decisions decisions;
   private final NeighbourStore neighbours;
   private final PairStore pairs;
 
@@ -31,7 +43,7 @@ public final class Library implements AutoCloseable {
     this.catalog = catalog;
     this.images = new ImageStore(catalog);
     this.features = new FeatureStore(catalog);
-    this.decisions = new DecisionStore(catalog);
+    this.decisions = new Decisions(new DecisionStore(catalog));
     this.neighbours = new NeighbourStore(catalog);
     this.pairs = new PairStore(catalog);
   }
@@ -70,7 +82,8 @@ public final class Library implements AutoCloseable {
     return features;
   }
 
-  public DecisionStore decisions() {
+  /** The user's decisions on pairs. */
+  public Decisions decisions() {
     return decisions;
   }
 
@@ -81,6 +94,91 @@ public final class Library implements AutoCloseable {
   /** The stored pairs: candidates chosen by each ready image and the measures of every chosen pair. */
   public PairStore pairs() {
     return pairs;
+  }
+
+  /** The catalog folder. */
+  public Path dir() {
+    return catalog.dir();
+  }
+
+  /** Size of the catalog's database files on disk, in bytes. */
+  public long databaseBytes() throws IOException {
+    return catalog.databaseBytes();
+  }
+
+  /** The folders given to {@code index}, by path. */
+  public List<Folder> folders() {
+    return images.roots();
+  }
+
+  /** The image with this catalog id, when there is one. */
+  public Optional<ImageRow> image(long id) {
+    return images.byId(id);
+  }
+
+  /** Every image in the catalog, whatever its status. */
+  public List<ImageRow> allImages() {
+    return images.all();
+  }
+
+  /** The images with the given status. */
+  public List<ImageRow> imagesWith(ImageStatus status) {
+    return images.withStatus(status);
+  }
+
+  /** How many images have each status (every status present, zero when none). */
+  public Map<ImageStatus, Integer> countsByStatus() {
+    return images.countsByStatus();
+  }
+
+  /** The images that could not be read or analysed, with their reasons, by path. */
+  public List<ImageFailure> failures() {
+    return images.failures();
+  }
+
+  /** Why an image failed, when it did. */
+  public Optional<String> failureReason(long id) {
+    return images.failureReason(id);
+  }
+
+  /** The stored analysis of a ready image (vectors, silhouette, colour); empty when it has none. */
+  public Optional<ImageAnalysis> analysis(ImageRow row) {
+    return features.load(row);
+  }
+
+  /** Like {@link #analysis(ImageRow)}, by catalog id. */
+  public Optional<ImageAnalysis> analysis(long id) {
+    return images.byId(id).flatMap(features::load);
+  }
+
+  /** The cached thumbnail file of an image, when there is one. */
+  public Optional<Path> thumbnail(long id) {
+    return catalog.thumbnail(id);
+  }
+
+  /** The silhouettes of the ready images counted by what made them, and how many are uncertain. */
+  public SilhouetteCounts silhouetteCounts() {
+    return features.silhouetteCounts();
+  }
+
+  /** The stored silhouettes that have something to report (several objects, cut off by the frame, uncertain). */
+  public List<SilhouetteTraits> notableSilhouettes() {
+    return features.notableSilhouettes();
+  }
+
+  /** How many ready images have features made by the appearance model {@code modelId}. */
+  public int readyCount(String modelId) {
+    return features.readyIds(modelId).size();
+  }
+
+  /** The appearance model the catalog's vectors were made by; empty before the first index. */
+  public Optional<String> activeModel() {
+    return LibrarySettings.activeModel(features);
+  }
+
+  /** Whether the catalog keeps its vector index quantised to int8 (chosen by {@code index --int8}). */
+  public boolean int8Vectors() {
+    return features.setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE").equals("INT8");
   }
 
   /** The catalog row of an image given by path (relative to the working directory or absolute). */

@@ -11,9 +11,6 @@ import java.util.Map;
 import java.util.Set;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalyzer;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
-import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.ingest.FoundFile;
 import org.morphscout.indexer.ingest.LibraryScanner;
@@ -22,6 +19,9 @@ import org.morphscout.indexer.ingest.ScanProblem;
 import org.morphscout.indexer.ingest.ScanResult;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.ImageFailure;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.slf4j.Logger;
@@ -148,7 +148,7 @@ public final class LibraryIndexer {
   private void listKnownFailures(List<Path> roots, List<IndexReport.FileFailure> failures) {
     Set<String> listed = new java.util.HashSet<>();
     failures.forEach(f -> listed.add(f.path()));
-    for (ImageStore.Failure f : library.images().failures()) {
+    for (ImageFailure f : library.images().failures()) {
       if (listed.contains(f.path())) {
         continue;
       }

@@ -8,8 +8,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.Collection;
+import org.morphscout.indexer.DiskSpace;
 import org.morphscout.indexer.MorphscoutException;
-import org.morphscout.indexer.catalog.DiskSpace;
 
 /**
  * The rules for every file Morphscout writes at a place the user names (previews, contact sheets, exports): the place

@@ -9,11 +9,11 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.ingest.ContentHash;
 import org.morphscout.indexer.ingest.FoundFile;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 
 /**
  * Compares what a scan found with what the catalog holds and updates the catalog in one transaction: new files are

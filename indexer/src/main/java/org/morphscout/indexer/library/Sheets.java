@@ -8,12 +8,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import javax.imageio.ImageIO;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.ChainService.ChainAnswer;
 import org.morphscout.indexer.library.ChainService.ChainDetail;
 import org.morphscout.indexer.library.ChainService.StepDetail;
 import org.morphscout.indexer.preview.ContactSheet;
 import org.morphscout.indexer.preview.ContactSheetRow;
+import org.morphscout.indexer.values.ImageRow;
 
 /** Contact sheets of chains and walks, from the catalog's thumbnails, each with a legend for its arrows' numbers. */
 public final class Sheets {

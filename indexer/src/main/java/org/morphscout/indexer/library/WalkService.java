@@ -9,9 +9,9 @@ import java.util.OptionalInt;
 import java.util.Set;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.chain.StepCostModel;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.walk.WalkPlanner;
 import org.morphscout.indexer.walk.WalkResult;
 

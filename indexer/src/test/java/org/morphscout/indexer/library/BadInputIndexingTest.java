@@ -20,12 +20,12 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.testing.BadFiles;
 import org.morphscout.indexer.testing.CatalogChecks;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 
 /**
  * One folder holding every awkward file of the "bad input" list at once, next to good pictures, indexed end to end:

@@ -21,11 +21,12 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.testing.BadFiles;
 import org.morphscout.indexer.testing.CatalogChecks;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 
@@ -80,13 +81,13 @@ class CrashRecoveryIT {
     Process first = child(catalog, root);
     assertThat(first.waitFor(180, TimeUnit.SECONDS)).isTrue();
     assertThat(first.exitValue()).as(Files.readString(catalog.resolveSibling("child.err"))).isZero();
-    List<DecisionStore.Decision> decisions;
+    List<Decision> decisions;
     Set<String> decided;
     try (Library library = Library.open(catalog)) {
       List<ImageRow> ready = library.images().withStatus(ImageStatus.READY);
       assertThat(ready).hasSize(PER_FAMILY);
-      library.decisions().decide(ready.get(0).id(), ready.get(1).id(), DecisionStore.Verdict.APPROVED, "smooth");
-      library.decisions().decide(ready.get(2).id(), ready.get(9).id(), DecisionStore.Verdict.REJECTED, "too far");
+      library.decisions().decide(ready.get(0).id(), ready.get(1).id(), DecisionKind.APPROVED, "smooth");
+      library.decisions().decide(ready.get(2).id(), ready.get(9).id(), DecisionKind.REJECTED, "too far");
       decisions = library.decisions().all();
       // Decisions belong to the pictures judged: the runs below change some pictures, never these.
       decided = Set.of(ready.get(0).path(), ready.get(1).path(), ready.get(2).path(), ready.get(9).path());
@@ -182,7 +183,7 @@ class CrashRecoveryIT {
   }
 
   /** The checks that must hold at any moment a crash can leave behind. */
-  private void checkAfterCrash(Path catalog, List<DecisionStore.Decision> decisions, String context)
+  private void checkAfterCrash(Path catalog, List<Decision> decisions, String context)
       throws IOException {
     try (Library library = Library.open(catalog)) {
       assertThat(CatalogChecks.integrityCheck(library)).as(context).isEqualTo("ok");

@@ -17,9 +17,9 @@ import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.MorphscoutException;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 
 /**

@@ -12,10 +12,10 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
 
 /** A decision belongs to the pictures judged (content hashes), never to the path a picture happened to have. */
 class DecisionsFollowPicturesTest {
@@ -35,7 +35,7 @@ class DecisionsFollowPicturesTest {
       index(library);
       long ia = row(library, a).id();
       long ic = row(library, c).id();
-      library.decisions().decide(ia, ic, DecisionStore.Verdict.APPROVED, "smooth");
+      library.decisions().decide(ia, ic, DecisionKind.APPROVED, "smooth");
 
       // The trial from the report: delete a, rename d to a, index.
       Files.delete(a);

@@ -20,10 +20,11 @@ import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.analysis.PixelFingerprint;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * A catalog made before pixel fingerprints existed (schema version 3: no {@code features.fingerprint} column) is
@@ -50,7 +51,7 @@ class FingerprintUpgradeTest {
       index(library, root);
       library.images().all().forEach(r -> idsBefore.put(r.path(), r.id()));
       List<Long> ids = List.copyOf(idsBefore.values());
-      library.decisions().decide(ids.get(0), ids.get(1), DecisionStore.Verdict.APPROVED, "keep this one");
+      library.decisions().decide(ids.get(0), ids.get(1), DecisionKind.APPROVED, "keep this one");
     }
     assertThat(idsBefore).as("seed %d", SEED).hasSize(4);
 
@@ -80,8 +81,8 @@ class FingerprintUpgradeTest {
         assertThat(a.fingerprint()).hasSize(PixelFingerprint.LENGTH);
       }
       List<Long> ids = List.copyOf(idsBefore.values());
-      DecisionStore.Decision kept = library.decisions().find(ids.get(0), ids.get(1)).orElseThrow();
-      assertThat(kept.verdict()).isEqualTo(DecisionStore.Verdict.APPROVED);
+      Decision kept = library.decisions().find(ids.get(0), ids.get(1)).orElseThrow();
+      assertThat(kept.kind()).isEqualTo(DecisionKind.APPROVED);
       assertThat(kept.note()).isEqualTo("keep this one");
 
       IndexReport again = index(library, root);

@@ -11,20 +11,20 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import javax.imageio.ImageIO;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.MorphscoutException;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
-import org.junit.jupiter.api.BeforeEach;
-import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /** Indexing end to end on generated files: new, unchanged, changed, moved, deleted and unreadable files. */
 class LibraryIndexerTest {
@@ -78,7 +78,7 @@ class LibraryIndexerTest {
 
       ImageRow v0 = library.require(root.resolve("vessel-0.png").toString());
       ImageRow v1 = library.require(root.resolve("vessel-1.png").toString());
-      library.decisions().decide(v0.id(), v1.id(), DecisionStore.Verdict.APPROVED, "keep these");
+      library.decisions().decide(v0.id(), v1.id(), DecisionKind.APPROVED, "keep these");
 
       // Move and rename one file inside the root: same identity, decision follows it.
       Path moved = Files.createDirectories(root.resolve("renamed")).resolve("first-vessel.png");

@@ -23,8 +23,6 @@ import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.chain.Chain;
 import org.morphscout.indexer.chain.ChainQuery;
 import org.morphscout.indexer.chain.Edge;
@@ -32,6 +30,8 @@ import org.morphscout.indexer.pairing.ScoreConfig;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.testing.CatalogChecks;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 
 /**
  * Queries ({@code similar}, {@code chain}, partners of an image) while an indexing run adds, changes and re-analyses images: every answer is

@@ -13,10 +13,10 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.ingest.DecodeOptions;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.ImageStatus;
 
 /** A lower pixel cap's refusals are retried when the cap is raised; undecodable file names are reported, not lost. */
 class RetriesAndNamesTest {

@@ -8,8 +8,8 @@ import java.sql.ResultSet;
 import java.sql.Statement;
 import java.util.HashSet;
 import java.util.Set;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 
 /** Checks of a catalog's consistency shared by the reliability tests. */

@@ -32,7 +32,7 @@ import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.ChainCandidate;
 import org.morphscout.app.gui.service.ChainStep;
-import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.values.ImageRow;
 
 /** Endpoints, options, candidate chains as filmstrips, and a preview player. */
 public final class ChainsView extends BorderPane {

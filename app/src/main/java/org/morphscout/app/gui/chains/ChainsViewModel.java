@@ -27,8 +27,8 @@ import org.morphscout.app.gui.service.ChainCandidate;
 import org.morphscout.app.gui.service.ChainRequest;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * Chains between two endpoints: the endpoints (shared with the inspector through the session), the search options,

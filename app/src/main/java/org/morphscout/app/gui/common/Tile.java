@@ -6,8 +6,8 @@ import javafx.scene.control.Label;
 import javafx.scene.image.ImageView;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 
 /**
  * One thumbnail with a caption, reused by the grid, filmstrips and the walk strip. It remembers which image it shows

@@ -15,8 +15,8 @@ import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import javafx.stage.DirectoryChooser;
 import org.morphscout.app.gui.common.MessageLine;
-import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.text.HumanTime;
+import org.morphscout.indexer.values.ImageFailure;
 
 /** Add a folder, watch progress, cancel; failures with their reasons below. */
 public final class IndexingView extends BorderPane {
@@ -67,16 +67,16 @@ public final class IndexingView extends BorderPane {
     top.setPadding(new Insets(12));
     setTop(top);
 
-    TableView<ImageStore.Failure> failures = new TableView<>(vm.failures());
+    TableView<ImageFailure> failures = new TableView<>(vm.failures());
     failures.setId("failures");
     failures.setPlaceholder(new Label("No failures: every file found so far could be read."));
-    TableColumn<ImageStore.Failure, String> path = new TableColumn<>("File");
+    TableColumn<ImageFailure, String> path = new TableColumn<>("File");
     path.setCellValueFactory(c -> new ReadOnlyStringWrapper(c.getValue().path()));
     path.setPrefWidth(420);
-    TableColumn<ImageStore.Failure, String> reason = new TableColumn<>("Why it failed");
+    TableColumn<ImageFailure, String> reason = new TableColumn<>("Why it failed");
     reason.setCellValueFactory(c -> new ReadOnlyStringWrapper(c.getValue().reason()));
     reason.setPrefWidth(420);
-    TableColumn<ImageStore.Failure, String> when = new TableColumn<>("When");
+    TableColumn<ImageFailure, String> when = new TableColumn<>("When");
     when.setCellValueFactory(c -> new ReadOnlyStringWrapper(HumanTime.localIso(c.getValue().failedAt())));
     when.setPrefWidth(130);
     failures.getColumns().setAll(java.util.List.of(path, reason, when));

@@ -16,9 +16,9 @@ import org.morphscout.app.gui.Messages;
 import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
-import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.ImageFailure;
 
 /** Adding a folder to the catalog: progress, cancel, and the failures with their reasons. */
 public final class IndexingViewModel {
@@ -33,7 +33,7 @@ public final class IndexingViewModel {
   private final ReadOnlyStringWrapper item = new ReadOnlyStringWrapper(this, "item", "");
   private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
   private final ReadOnlyStringWrapper summary = new ReadOnlyStringWrapper(this, "summary", "");
-  private final ObservableList<ImageStore.Failure> failures = FXCollections.observableArrayList();
+  private final ObservableList<ImageFailure> failures = FXCollections.observableArrayList();
 
   /** @param afterIndexing runs on the UI thread after a run that changed the catalog (reloads the grid) */
   public IndexingViewModel(Session session, TaskRunner runner, Runnable afterIndexing) {
@@ -100,7 +100,7 @@ public final class IndexingViewModel {
       failures.clear();
       return;
     }
-    runner.submit("load failures", token -> lib.images().failures(), failures::setAll,
+    runner.submit("load failures", token -> lib.failures(), failures::setAll,
         e -> message.set(Messages.of(e)));
   }
 
@@ -180,12 +180,12 @@ public final class IndexingViewModel {
     return summary.getReadOnlyProperty();
   }
 
-  public ObservableList<ImageStore.Failure> failures() {
+  public ObservableList<ImageFailure> failures() {
     return failures;
   }
 
   /** Shows a failed image in the inspector (the failures table's selection). */
-  public void inspect(ImageStore.Failure failure) {
+  public void inspect(ImageFailure failure) {
     if (failure != null) {
       session.row(failure.imageId()).ifPresent(session.selectedProperty()::set);
     }

@@ -22,7 +22,7 @@ import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.common.MaskImages;
 import org.morphscout.app.gui.common.MessageLine;
 import org.morphscout.app.gui.service.SimilarityMode;
-import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.values.ImageRow;
 
 /** The selected image, larger, with its silhouette overlay, facts and actions. */
 public final class InspectorView extends ScrollPane {

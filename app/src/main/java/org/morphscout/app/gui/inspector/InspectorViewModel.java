@@ -21,12 +21,12 @@ import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.feature.ColourStats;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.silhouette.Mask;
 import org.morphscout.indexer.silhouette.Silhouette;
 import org.morphscout.indexer.text.HumanTime;
+import org.morphscout.indexer.values.ImageRow;
 
 /** The selected image's details and the actions on it. Follows the session's selection. */
 public final class InspectorViewModel {
@@ -76,8 +76,8 @@ public final class InspectorViewModel {
     if (lib == null) {
       return;
     }
-    pending = runner.submit("inspect image", token -> new Details(lib.features().load(row),
-        lib.images().failureReason(row.id()), lib.catalog().thumbnail(row.id())), d -> {
+    pending = runner.submit("inspect image", token -> new Details(lib.analysis(row),
+        lib.failureReason(row.id()), lib.thumbnail(row.id())), d -> {
           thumbnail.set(d.thumbnail().orElse(null));
           List<Fact> all = new ArrayList<>(basicFacts(row));
           d.failure().ifPresent(reason -> all.add(new Fact("Failed", reason)));

@@ -4,7 +4,7 @@ import java.nio.file.Path;
 import java.util.Comparator;
 import java.util.Locale;
 import java.util.Map;
-import org.morphscout.indexer.catalog.ImageRow;
+import org.morphscout.indexer.values.ImageRow;
 
 /** Comparators for the grid's sort keys; ties fall back to the path, so the order is total and stable. */
 final class ImageOrdering {

@@ -35,8 +35,8 @@ import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.service.SimilarityMode;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStore;
+import org.morphscout.indexer.values.Folder;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * The thumbnail grid. Virtualised: a {@link ListView} whose items are rows of images, so only the rows on screen
@@ -86,32 +86,32 @@ public final class LibraryView extends BorderPane {
   }
 
   private VBox toolbar() {
-    ComboBox<ImageStore.Root> root = new ComboBox<>();
+    ComboBox<Folder> root = new ComboBox<>();
     root.setId("root-filter");
-    ObservableList<ImageStore.Root> items = FXCollections.observableArrayList();
+    ObservableList<Folder> items = FXCollections.observableArrayList();
     Runnable fill = () -> {
-      List<ImageStore.Root> all = new ArrayList<>();
+      List<Folder> all = new ArrayList<>();
       all.add(null);
       all.addAll(vm.roots());
       items.setAll(all);
     };
-    vm.roots().addListener((ListChangeListener<ImageStore.Root>) c -> fill.run());
+    vm.roots().addListener((ListChangeListener<Folder>) c -> fill.run());
     fill.run();
     root.setItems(items);
     root.setConverter(new StringConverter<>() {
       @Override
-      public String toString(ImageStore.Root r) {
+      public String toString(Folder r) {
         return LibraryViewModel.rootLabel(r);
       }
 
       @Override
-      public ImageStore.Root fromString(String s) {
+      public Folder fromString(String s) {
         return null;
       }
     });
     root.setButtonCell(new ListCell<>() {
       @Override
-      protected void updateItem(ImageStore.Root r, boolean empty) {
+      protected void updateItem(Folder r, boolean empty) {
         super.updateItem(r, empty);
         setText(LibraryViewModel.rootLabel(r));
       }

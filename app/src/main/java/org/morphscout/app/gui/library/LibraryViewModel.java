@@ -28,9 +28,9 @@ import org.morphscout.app.gui.service.Match;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.Folder;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * The library grid's state: every image of the catalog, the filters and sort, and an optional similarity search
@@ -50,8 +50,8 @@ public final class LibraryViewModel {
   private TaskHandle pending;
 
   private final ObservableList<ImageRow> visible = FXCollections.observableArrayList();
-  private final ObservableList<ImageStore.Root> roots = FXCollections.observableArrayList();
-  private final ObjectProperty<ImageStore.Root> root = new SimpleObjectProperty<>(this, "root");
+  private final ObservableList<Folder> roots = FXCollections.observableArrayList();
+  private final ObjectProperty<Folder> root = new SimpleObjectProperty<>(this, "root");
   private final StringProperty folder = new SimpleStringProperty(this, "folder", "");
   private final Map<ImageFinding, BooleanProperty> findingFilters = new EnumMap<>(ImageFinding.class);
   private final ObjectProperty<SortKey> sort = new SimpleObjectProperty<>(this, "sort", SortKey.NAME);
@@ -80,7 +80,7 @@ public final class LibraryViewModel {
     });
   }
 
-  private record Loaded(List<ImageRow> rows, List<ImageStore.Root> roots, Map<Long, Set<ImageFinding>> findings) {}
+  private record Loaded(List<ImageRow> rows, List<Folder> roots, Map<Long, Set<ImageFinding>> findings) {}
 
   /** Reloads every row and finding from the catalog (after opening it, or after indexing). */
   public void reload() {
@@ -98,8 +98,8 @@ public final class LibraryViewModel {
     message.set("");
     summary.set("Loading images…");
     runner.submit("load images", token -> {
-      List<ImageRow> rows = lib.images().all();
-      return new Loaded(rows, lib.images().roots(), CatalogFindings.load(lib, rows));
+      List<ImageRow> rows = lib.allImages();
+      return new Loaded(rows, lib.folders(), CatalogFindings.load(lib, rows));
     }, loaded -> {
       busy.set(false);
       show(loaded.rows(), loaded.roots(), loaded.findings());
@@ -111,7 +111,7 @@ public final class LibraryViewModel {
   }
 
   /** Installs loaded rows (package-private so the grid's scale test can feed 100,000 rows without a catalog). */
-  void show(List<ImageRow> rows, List<ImageStore.Root> rootList, Map<Long, Set<ImageFinding>> findingMap) {
+  void show(List<ImageRow> rows, List<Folder> rootList, Map<Long, Set<ImageFinding>> findingMap) {
     all = List.copyOf(rows);
     findings = findingMap;
     session.rows(all);
@@ -212,7 +212,7 @@ public final class LibraryViewModel {
         session.row(m.id()).ifPresent(source::add);
       }
     }
-    ImageStore.Root r = root.get();
+    Folder r = root.get();
     String f = folder.get() == null ? "" : folder.get().trim().toLowerCase(Locale.ROOT);
     List<ImageFinding> wanted = new ArrayList<>();
     findingFilters.forEach((finding, p) -> {
@@ -253,7 +253,7 @@ public final class LibraryViewModel {
   }
 
   /** The root a row belongs to, as shown in the root filter. */
-  public static String rootLabel(ImageStore.Root root) {
+  public static String rootLabel(Folder root) {
     return root == null ? "All folders" : Path.of(root.path()).getFileName() + "  (" + root.path() + ")";
   }
 
@@ -261,12 +261,12 @@ public final class LibraryViewModel {
     return visible;
   }
 
-  public ObservableList<ImageStore.Root> roots() {
+  public ObservableList<Folder> roots() {
     return roots;
   }
 
   /** The root to show, or null for all. */
-  public ObjectProperty<ImageStore.Root> rootProperty() {
+  public ObjectProperty<Folder> rootProperty() {
     return root;
   }
 

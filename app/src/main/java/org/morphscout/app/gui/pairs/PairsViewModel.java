@@ -28,10 +28,11 @@ import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.DecisionStore;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.DecisionTable;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.values.Decision;
+import org.morphscout.indexer.values.DecisionKind;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * Suggested pairs for the library or one image, the user's decisions on them (stored in the catalog's decision store,
@@ -93,7 +94,7 @@ public final class PairsViewModel {
   }
 
   private record Loaded(List<PairSuggestion> pairs, List<String> notes,
-      Map<String, DecisionStore.Decision> decisions) {}
+      Map<String, Decision> decisions) {}
 
   /** Runs the suggestion again with the current scope. */
   public void refresh() {
@@ -113,8 +114,8 @@ public final class PairsViewModel {
     info.set("Scoring pairs…");
     pending = runner.submit("suggest pairs", token -> {
       PairsBackend.Suggestions found = session.backends().pairs().suggest(image, max, token);
-      Map<String, DecisionStore.Decision> decided = new HashMap<>();
-      for (DecisionStore.Decision d : lib.decisions().all()) {
+      Map<String, Decision> decided = new HashMap<>();
+      for (Decision d : lib.decisions().all()) {
         decided.put(key(d.imageA(), d.imageB()), d);
       }
       return new Loaded(found.pairs(), found.notes(), decided);
@@ -122,9 +123,9 @@ public final class PairsViewModel {
       running.set(false);
       rows.setAll(loaded.pairs().stream().map(p -> {
         PairRow r = new PairRow(p, session.name(p.a()), session.name(p.b()));
-        DecisionStore.Decision d = loaded.decisions().get(key(p.a(), p.b()));
+        Decision d = loaded.decisions().get(key(p.a(), p.b()));
         if (d != null) {
-          r.decided(d.verdict().word(), d.note());
+          r.decided(d.kind().word(), d.note());
         }
         return r;
       }).toList());
@@ -152,11 +153,11 @@ public final class PairsViewModel {
   }
 
   public void approve(PairRow row) {
-    decide(row, DecisionStore.Verdict.APPROVED, row == null ? "" : row.noteProperty().get());
+    decide(row, DecisionKind.APPROVED, row == null ? "" : row.noteProperty().get());
   }
 
   public void reject(PairRow row) {
-    decide(row, DecisionStore.Verdict.REJECTED, row == null ? "" : row.noteProperty().get());
+    decide(row, DecisionKind.REJECTED, row == null ? "" : row.noteProperty().get());
   }
 
   /** Stores a note with the pair; an undecided pair keeps no note (the catalog stores notes with decisions). */
@@ -170,7 +171,7 @@ public final class PairsViewModel {
       message.set("Approve or reject the pair first; the note is kept with the decision.");
       return;
     }
-    decide(row, DecisionStore.Verdict.parse(verdict), text);
+    decide(row, DecisionKind.parse(verdict), text);
   }
 
   /** Clears the decision on a pair (the library call {@code decide --clear} makes). */
@@ -184,7 +185,7 @@ public final class PairsViewModel {
         e -> message.set(Messages.of(e)));
   }
 
-  private void decide(PairRow row, DecisionStore.Verdict verdict, String note) {
+  private void decide(PairRow row, DecisionKind verdict, String note) {
     Library lib = session.library();
     if (row == null) {
       message.set("Choose a pair first.");
@@ -218,7 +219,7 @@ public final class PairsViewModel {
       return;
     }
     runner.submit("export approved pairs", token -> {
-      List<DecisionStore.Decision> approved = DecisionTable.only(lib.decisions().all(), DecisionStore.Verdict.APPROVED);
+      List<Decision> approved = DecisionTable.only(lib.decisions().all(), DecisionKind.APPROVED);
       DecisionTable.write(file, approved);
       return approved.size();
     }, n -> {
@@ -245,7 +246,7 @@ public final class PairsViewModel {
   }
 
   private static ImageAnalysis analysis(Library lib, long id) {
-    Optional<ImageAnalysis> a = lib.images().byId(id).flatMap(lib.features()::load);
+    Optional<ImageAnalysis> a = lib.analysis(id);
     return a.orElseThrow(() -> new MorphscoutException("image " + id + " has no stored silhouette"));
   }
 

@@ -1,19 +1,18 @@
 package org.morphscout.app.gui.service;
 
-import java.sql.ResultSet;
-import java.sql.Statement;
 import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Set;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.silhouette.Silhouette;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
+import org.morphscout.indexer.values.SilhouetteTraits;
 
 /**
  * Reads every image's findings in one query (the grid filters 100,000 images, so loading each analysis would be far too
- * slow). Reads the {@code features} columns directly because the feature store has no bulk finding query yet.
+ * slow): the library's notable silhouettes, plus the failed and missing images.
  */
 public final class CatalogFindings {
   private CatalogFindings() {}
@@ -43,20 +42,9 @@ public final class CatalogFindings {
    */
   public static Map<Long, Set<ImageFinding>> load(Library library, Iterable<ImageRow> rows) {
     Map<Long, Set<ImageFinding>> result = new HashMap<>();
-    library.catalog().read(c -> {
-      try (Statement s = c.createStatement();
-          ResultSet rs = s.executeQuery("SELECT image_id, components, touches_frame, confidence, coverage FROM features")) {
-        while (rs.next()) {
-          // Silhouette.uncertain(), as status counts it: an object found, confidence below the library's threshold
-          Set<ImageFinding> f = of(rs.getInt(2), rs.getInt(3) == 1, rs.getDouble(5) > 0
-              && rs.getDouble(4) < Silhouette.UNCERTAIN_BELOW);
-          if (!f.isEmpty()) {
-            result.put(rs.getLong(1), f);
-          }
-        }
-      }
-      return null;
-    });
+    for (SilhouetteTraits t : library.notableSilhouettes()) {
+      result.put(t.imageId(), of(t.components(), t.touchesFrame(), t.uncertain()));
+    }
     for (ImageRow r : rows) {
       if (r.status() == ImageStatus.FAILED) {
         result.computeIfAbsent(r.id(), k -> EnumSet.noneOf(ImageFinding.class)).add(ImageFinding.FAILED);

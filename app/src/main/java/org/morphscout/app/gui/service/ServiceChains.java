@@ -67,7 +67,7 @@ public final class ServiceChains implements ChainsBackend {
   }
 
   private String name(long id) {
-    return context.library().images().byId(id).map(r -> java.nio.file.Path.of(r.path()).getFileName().toString())
+    return context.library().image(id).map(r -> java.nio.file.Path.of(r.path()).getFileName().toString())
         .orElse("image " + id);
   }
 }

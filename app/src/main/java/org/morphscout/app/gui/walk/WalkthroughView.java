@@ -25,8 +25,8 @@ import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.common.MessageLine;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.text.Figures;
+import org.morphscout.indexer.values.ImageRow;
 
 /** The walk strip: images in order with the size of each step drawn as a bar; drag to reorder. */
 public final class WalkthroughView extends BorderPane {

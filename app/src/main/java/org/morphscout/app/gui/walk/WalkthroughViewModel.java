@@ -14,8 +14,8 @@ import org.morphscout.app.gui.Messages;
 import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.task.TaskHandle;
 import org.morphscout.app.gui.task.TaskRunner;
-import org.morphscout.indexer.catalog.ImageRow;
 import org.morphscout.indexer.library.WalkTable;
+import org.morphscout.indexer.values.ImageRow;
 
 /**
  * A walk: a set of images (the grid's selection, or a folder), ordered smoothly, with the size of each step;
@@ -64,7 +64,7 @@ public final class WalkthroughViewModel {
     for (ImageRow r : candidates) {
       Path parent = Path.of(r.path()).getParent();
       if (parent != null && parent.toString().equals(dir)
-          && r.status() == org.morphscout.indexer.catalog.ImageStatus.READY) {
+          && r.status() == org.morphscout.indexer.values.ImageStatus.READY) {
         in.add(r);
       }
     }

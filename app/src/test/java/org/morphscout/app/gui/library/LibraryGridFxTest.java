@@ -22,9 +22,9 @@ import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.ImageFinding;
 import org.morphscout.app.gui.task.DirectTaskRunner;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
-import org.morphscout.indexer.catalog.ImageStore;
+import org.morphscout.indexer.values.Folder;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -68,7 +68,7 @@ class LibraryGridFxTest {
         findings.put((long) i, EnumSet.of(ImageFinding.CUT_OFF));
       }
     }
-    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), findings)).get();
+    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new Folder(1, "/photos")), findings)).get();
     WaitForAsyncUtils.waitForFxEvents();
     assertThat(vm.visible()).hasSize(N);
     // a virtualised list creates cells for the visible rows only: a screenful of tiles, not 100,000
@@ -97,7 +97,7 @@ class LibraryGridFxTest {
         new ImageRow(3, 1, "/photos/fine.jpg", 1000, 0, "h3", 640, 480, 1, "jpeg", ImageStatus.READY));
     Map<Long, Set<ImageFinding>> findings = Map.of(1L, EnumSet.of(ImageFinding.MISSING), 2L,
         EnumSet.of(ImageFinding.UNCERTAIN, ImageFinding.CUT_OFF));
-    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new ImageStore.Root(1, "/photos")), findings)).get();
+    WaitForAsyncUtils.asyncFx(() -> vm.show(rows, List.of(new Folder(1, "/photos")), findings)).get();
     WaitForAsyncUtils.waitForFxEvents();
     Map<Long, Tile> byId = new HashMap<>();
     robot.lookup(".tile").queryAllAs(Tile.class).forEach(t -> byId.put(t.shownId(), t));

@@ -1,4 +1,4 @@
-package org.morphscout.indexer.catalog;
+package org.morphscout.indexer.values;
 
 import java.util.Locale;
 

@@ -1,4 +1,4 @@
-package org.morphscout.indexer.catalog;
+package org.morphscout.indexer.library;
 
 import java.nio.file.Path;
 import java.util.Map;

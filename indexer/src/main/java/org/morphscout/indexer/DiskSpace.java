@@ -1,4 +1,4 @@
-package org.morphscout.indexer.catalog;
+package org.morphscout.indexer;
 
 import java.io.IOException;
 import java.nio.file.AccessDeniedException;

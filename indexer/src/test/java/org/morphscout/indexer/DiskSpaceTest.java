@@ -1,4 +1,4 @@
-package org.morphscout.indexer.catalog;
+package org.morphscout.indexer;
 
 import static org.assertj.core.api.Assertions.assertThat;
 

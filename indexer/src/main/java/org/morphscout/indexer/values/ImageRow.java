@@ -1,4 +1,4 @@
-package org.morphscout.indexer.catalog;
+package org.morphscout.indexer.values;
 
 /**
  * One image as the catalog knows it.
