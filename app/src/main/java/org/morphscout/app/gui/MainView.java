@@ -24,6 +24,8 @@ import javafx.scene.layout.Region;
 import javafx.stage.DirectoryChooser;
 import org.morphscout.app.gui.chains.ChainsView;
 import org.morphscout.app.gui.common.MessageLine;
+import org.morphscout.app.gui.common.Pane;
+import org.morphscout.app.gui.common.Session;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.indexing.IndexingView;
 import org.morphscout.app.gui.inspector.InspectorView;

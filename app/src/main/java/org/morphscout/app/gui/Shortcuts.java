@@ -5,6 +5,7 @@ import javafx.scene.Scene;
 import javafx.scene.control.TextInputControl;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
+import org.morphscout.app.gui.common.Pane;
 
 /**
  * The browser's keyboard shortcuts: the one list shown under Help and the handler that acts on them. Single-letter

@@ -1,5 +1,7 @@
 package org.morphscout.app.gui;
 
+import org.morphscout.app.gui.common.Pane;
+
 /**
  * What the window remembers between runs.
  *

@@ -6,8 +6,9 @@
  * (only properties and collections), so they are tested without the toolkit.
  *
  * <p>{@link org.morphscout.app.gui.MorphscoutApp} starts the window; {@link org.morphscout.app.gui.MainView} holds
- * the panes (Images, Chains, Pairs, Walk, Indexing) beside the Inspector;
- * {@link org.morphscout.app.gui.Session} is the state they share; {@link org.morphscout.app.gui.SettingsStore}
+ * the panes (Images, Chains, Pairs, Walk, Indexing) beside the Inspector, each in its own package;
+ * {@link org.morphscout.app.gui.common.Session} is the state they share (the panes depend on {@code gui.common},
+ * {@code gui.service} and {@code gui.task}, never on this package, which assembles them); {@link org.morphscout.app.gui.SettingsStore}
  * remembers the last catalog and the layout in {@code browser.json} in the user's configuration folder;
  * {@link org.morphscout.app.gui.Shortcuts} lists the keyboard shortcuts (F1 shows them).
  */

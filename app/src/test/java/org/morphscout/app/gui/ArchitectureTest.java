@@ -91,4 +91,11 @@ class ArchitectureTest {
             "org.morphscout.indexer.vector..", "org.morphscout.indexer.ingest..")
         .check(classes);
   }
+
+  @Test
+  void applicationPackagesDependOnEachOtherWithoutCycles() {
+    // Each pane of the browser, the command line and the benchmarks can be read from the packages below it: the main
+    // window assembles the panes, the panes share gui.common, gui.service and gui.task, never the window.
+    slices().matching("org.morphscout.app.(**)").should().beFreeOfCycles().check(classes);
+  }
 }

@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.app.gui.common.Pane;
 
 class SettingsStoreTest {
   @TempDir Path tmp;

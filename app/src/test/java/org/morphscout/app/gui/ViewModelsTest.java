@@ -16,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.Main;
 import org.morphscout.app.gui.chains.ChainsViewModel;
+import org.morphscout.app.gui.common.Pane;
 import org.morphscout.app.gui.library.LibraryViewModel;
 import org.morphscout.app.gui.library.SortKey;
 import org.morphscout.app.gui.pairs.PairRow;

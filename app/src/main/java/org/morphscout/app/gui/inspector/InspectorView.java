@@ -18,9 +18,9 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import javafx.scene.paint.Color;
-import org.morphscout.app.gui.Session;
 import org.morphscout.app.gui.common.MaskImages;
 import org.morphscout.app.gui.common.MessageLine;
+import org.morphscout.app.gui.common.Session;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.indexer.values.ImageRow;
 

@@ -1,4 +1,4 @@
-package org.morphscout.app.gui;
+package org.morphscout.app.gui.common;
 
 /**
  * The browser's panes, in tab order (the constants' names are stored in the window settings, so they stay; the

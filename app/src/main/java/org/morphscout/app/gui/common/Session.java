@@ -1,4 +1,4 @@
-package org.morphscout.app.gui;
+package org.morphscout.app.gui.common;
 
 import java.nio.file.Path;
 import java.util.HashMap;
