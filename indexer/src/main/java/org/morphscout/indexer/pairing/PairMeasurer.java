@@ -14,7 +14,8 @@ public final class PairMeasurer {
    * it calls: warp estimation, colour difference, the analysis) would give other facts for the same pictures, so
    * catalogs know which stored pairs are stale.
    */
-  public static final int VERSION = 2; // 2: near-duplicates also need the object in the same place
+  public static final int VERSION = 3; // 2: near-duplicates also need the object in the same place; 3: fewer demons
+  // iterations at the finer levels (DemonsConfig.DEFAULT)
 
   private final ColourDifference colour;
   private final WarpEstimator warps;

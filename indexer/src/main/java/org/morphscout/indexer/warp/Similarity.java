@@ -76,8 +76,22 @@ public record Similarity(double scale, double rotation, boolean mirror, double t
     return new double[] {a, b, -(a * tx + b * ty), d, e, -(d * tx + e * ty)};
   }
 
+  /**
+   * The angle in (-pi, pi]. Angles met here lie within a few turns of zero, so the common cases take a shortcut
+   * that gives exactly {@code Math.IEEEremainder(angle, 2 pi)}, which is slow on this JDK: within [-pi, pi] the
+   * remainder is the angle itself, and within 2.5 pi one subtraction of 2 pi is exact (Sterbenz's lemma).
+   */
   static double normalise(double angle) {
-    double a = Math.IEEEremainder(angle, 2 * Math.PI);
-    return a <= -Math.PI ? a + 2 * Math.PI : a;
+    double twoPi = 2 * Math.PI;
+    double abs = Math.abs(angle);
+    double a;
+    if (abs <= Math.PI) {
+      a = angle;
+    } else if (abs <= 2.5 * Math.PI) {
+      a = angle - Math.copySign(twoPi, angle);
+    } else {
+      a = Math.IEEEremainder(angle, twoPi);
+    }
+    return a <= -Math.PI ? a + twoPi : a;
   }
 }

@@ -105,19 +105,26 @@ public final class SimilarityAlignment {
       }
     }
     // Prefer upright and unflipped: photographs are mostly taken upright, and symmetric outlines (an egg, a bottle)
-    // give near-equal overlaps for several candidates that differ only by pixel noise.
-    candidates.sort(java.util.Comparator.comparingDouble(
-        (Similarity c) -> Math.abs(normalised(c.rotation())) + (c.mirror() ? MIRROR_COST : 0)));
+    // give near-equal overlaps for several candidates that differ only by pixel noise. Each candidate's turn is
+    // computed once (the sort would otherwise normalise angles at every comparison).
+    List<Turn> ordered = new ArrayList<>();
+    for (Similarity sim : candidates) {
+      ordered.add(new Turn(sim, Math.abs(normalised(sim.rotation()))));
+    }
+    ordered.sort(java.util.Comparator.comparingDouble((Turn t) -> t.turn() + (t.sim().mirror() ? MIRROR_COST : 0)));
     Similarity best = null;
+    double bestTurn = 0;
     float[] bestB = null;
     double bestIou = -1;
-    for (Similarity sim : candidates) {
+    for (Turn t : ordered) {
+      Similarity sim = t.sim();
       float[] gridB = Grids.rasterise(b, canvas, sim);
       double iou = Grids.iou(gridA, gridB);
-      double needed = best != null && Math.abs(normalised(sim.rotation())) > LARGE_ROTATION
-          && Math.abs(normalised(best.rotation())) <= LARGE_ROTATION ? LARGE_ROTATION_MARGIN : TIE_MARGIN;
+      double needed = best != null && t.turn() > LARGE_ROTATION && bestTurn <= LARGE_ROTATION
+          ? LARGE_ROTATION_MARGIN : TIE_MARGIN;
       if (iou > bestIou + needed) {
         best = sim;
+        bestTurn = t.turn();
         bestB = gridB;
         bestIou = iou;
       }
@@ -134,10 +141,12 @@ public final class SimilarityAlignment {
     return new Alignment(best, canvas, gridA, bestB, bestIou, turnedIou, turnedRotation);
   }
 
+  /** A candidate transform and how far it turns B, in radians in [0, pi]. */
+  private record Turn(Similarity sim, double turn) {}
+
   /** An angle in (-pi, pi]. */
   static double normalised(double angle) {
-    double a = Math.IEEEremainder(angle, 2 * Math.PI);
-    return a <= -Math.PI ? a + 2 * Math.PI : a;
+    return Similarity.normalise(angle);
   }
 
   /** A canvas over A's mask, with B placed on A's centroid by any rotation; no transform. */

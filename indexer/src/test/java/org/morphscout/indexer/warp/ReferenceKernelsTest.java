@@ -39,9 +39,32 @@ class ReferenceKernelsTest {
 
   @Test
   void gaussianMatchesPlainConvolutionAndKeepsConstants() {
+    gaussianMatchesPlainConvolution(20, 1.3);
+  }
+
+  @Test
+  void gaussianOnGridsNarrowerThanItsKernel() {
+    // No pixel of a 6-pixel row has the whole 9-tap kernel inside: every one takes the renormalised border path.
+    gaussianMatchesPlainConvolution(6, 1.3);
+    gaussianMatchesPlainConvolution(9, 1.3);
+  }
+
+  @Test
+  void angleNormalisationEqualsTheIeeeRemainder() {
     Random r = new Random(SEED);
-    int n = 20;
-    double sigma = 1.3;
+    double[] edges = {0, -0.0, Math.PI, -Math.PI, 2 * Math.PI, -2 * Math.PI, 2.5 * Math.PI, -2.5 * Math.PI,
+        3 * Math.PI, -3 * Math.PI, Math.nextUp(Math.PI), Math.nextDown(-Math.PI), 1e-300, 40};
+    for (int i = 0; i < 20_000 + edges.length; i++) {
+      double angle = i < edges.length ? edges[i] : (r.nextDouble() - 0.5) * 12 * Math.PI;
+      double plain = Math.IEEEremainder(angle, 2 * Math.PI);
+      plain = plain <= -Math.PI ? plain + 2 * Math.PI : plain;
+      // Equal in value (a zero's sign may differ, which no caller can tell apart).
+      assertThat(Similarity.normalise(angle)).as("angle %s, seed %s", angle, SEED).isCloseTo(plain, within(0.0));
+    }
+  }
+
+  private static void gaussianMatchesPlainConvolution(int n, double sigma) {
+    Random r = new Random(SEED);
     float[] img = new float[n * n];
     for (int i = 0; i < img.length; i++) {
       img[i] = (float) r.nextGaussian();
