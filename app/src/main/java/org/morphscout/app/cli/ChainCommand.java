@@ -155,7 +155,7 @@ final class ChainCommand implements Callable<Integer> {
         c.put("maxStep", PairRows.round(d.chain().maxStep(), 4));
         c.put("unevenness", PairRows.round(d.chain().evenness(), 4));
         c.put("total", PairRows.round(d.chain().total(), 4));
-        c.put("sharedImages", PairRows.round(d.chain().overlap(), 4));
+        c.put("sharedImages", PairRows.round(d.chain().sharedImages(), 4));
         chains.add(c);
       }
       doc.put("chains", chains);
@@ -198,7 +198,7 @@ final class ChainCommand implements Callable<Integer> {
     for (ChainDetail d : answer.chains()) {
       out.printf("%nchain %d: %d steps, largest step %s, unevenness %s, images shared with earlier chains %s%n", ++n,
           d.steps().size(), Text.num(d.chain().maxStep(), 3), Text.num(d.chain().evenness(), 2),
-          Text.num(d.chain().overlap(), 2));
+          Text.num(d.chain().sharedImages(), 2));
       out.printf("  %s%n", Terminal.safe(path.apply(d.chain().images().get(0))));
       for (StepDetail s : d.steps()) {
         Map<String, Object> st = step(s, path);

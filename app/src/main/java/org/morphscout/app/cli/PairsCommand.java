@@ -29,7 +29,7 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     header = "List the most morph-friendly pairs in the library, or the best partners of one image.",
     description = "Candidates come from the vector index (similar outline or appearance) and are scored exactly: "
-        + "silhouette overlap after alignment, warp effort and fold risk, appearance and colour gaps, framing. "
+        + "how well the silhouettes match after alignment (aligned IoU), warp effort and fold risk, appearance and colour gaps, framing. "
         + "index stores every candidate pair's measures, so the answer is read from the catalog and scored under the "
         + "current settings (--set, --score-config) in seconds; when the stored pairs are not up to date, or "
         + "--candidates differs from the stored 20, pairs are measured live and a note says so. "

@@ -14,7 +14,7 @@ final class ScoreOptions {
   Path file;
 
   @Option(names = "--set", paramLabel = "<key>=<value>",
-      description = "Override one score setting, e.g. --set passScore=70 --set overlapWeight=3. Repeatable.")
+      description = "Override one score setting, e.g. --set passScore=70 --set silhouetteMatchWeight=3. Repeatable.")
   Map<String, String> overrides = new LinkedHashMap<>();
 
   ScoreConfig config() throws IOException {

@@ -73,13 +73,13 @@ class RealServicesTest {
       assertThat(vm.pairs().rows()).isNotEmpty().allSatisfy(r -> {
         assertThat(r.suggestion().score()).isBetween(0.0, 100.0);
         assertThat(r.suggestion().a()).isEqualTo(round.id());
-        assertThat(r.suggestion().components()).containsKeys("overlap", "warpEffort");
+        assertThat(r.suggestion().components()).containsKeys("silhouetteMatch", "warpEffort");
       });
-      // a disc against a disc overlaps fully once aligned; against a star it cannot (overlap sub-score in [0, 1])
+      // a disc against a disc covers it fully once aligned; against a star it cannot (silhouette match in [0, 1])
       double discs = vm.pairs().rows().stream().filter(r -> r.nameB().startsWith("round-"))
-          .mapToDouble(r -> r.suggestion().components().get("overlap")).min().orElseThrow();
+          .mapToDouble(r -> r.suggestion().components().get("silhouetteMatch")).min().orElseThrow();
       double stars = vm.pairs().rows().stream().filter(r -> r.nameB().startsWith("star-"))
-          .mapToDouble(r -> r.suggestion().components().get("overlap")).max().orElseThrow();
+          .mapToDouble(r -> r.suggestion().components().get("silhouetteMatch")).max().orElseThrow();
       assertThat(discs).isGreaterThan(stars);
       // the same numbers as the command line prints for the same catalog (pairs --for, CSV scores to one decimal)
       java.io.StringWriter cli = new java.io.StringWriter();

@@ -11,11 +11,11 @@ import java.util.List;
  * @param maxStep the largest step cost
  * @param evenness coefficient of variation of the step costs (population standard deviation / mean); 0 = all
  *     steps equal, and 0 for a single step
- * @param overlap largest Jaccard index of this chain's intermediate images (waypoints excluded) with those of any
+ * @param sharedImages largest Jaccard index of this chain's intermediate images (waypoints excluded) with those of any
  *     earlier chain in the same result, in [0, 1]; 0 for the first chain
  */
 public record Chain(
-    List<Long> images, List<Edge> steps, double total, double maxStep, double evenness, double overlap) {
+    List<Long> images, List<Edge> steps, double total, double maxStep, double evenness, double sharedImages) {
 
   public Chain {
     images = List.copyOf(images);
@@ -26,7 +26,7 @@ public record Chain(
   }
 
   /** Builds the summary numbers from the steps. */
-  public static Chain of(List<Long> images, List<Edge> steps, double overlap) {
+  public static Chain of(List<Long> images, List<Edge> steps, double sharedImages) {
     double sum = 0;
     double sumSq = 0;
     double max = 0;
@@ -39,7 +39,7 @@ public record Chain(
     double mean = sum / n;
     double var = Math.max(0, sumSq / n - mean * mean);
     double cv = mean > 0 ? Math.sqrt(var) / mean : 0;
-    return new Chain(images, steps, sumSq, max, cv, overlap);
+    return new Chain(images, steps, sumSq, max, cv, sharedImages);
   }
 
   /** Number of steps. */

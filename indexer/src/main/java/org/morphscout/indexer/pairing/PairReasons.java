@@ -39,7 +39,7 @@ final class PairReasons {
   }
 
   /**
-   * Silhouettes too doubtful to judge a shape by: the overlap, warp and framing figures of such a pair may describe
+   * Silhouettes too doubtful to judge a shape by: the silhouette match, warp and framing figures of such a pair may describe
    * the background or a part of the object rather than the object.
    */
   static List<String> uncertainSilhouettes(ImageFacts a, ImageFacts b) {
@@ -54,6 +54,9 @@ final class PairReasons {
     return out;
   }
 
+  /** How the reason for a poor silhouette match begins (the scorer lists it first). */
+  static final String POOR_SILHOUETTE_MATCH = "silhouettes match poorly after alignment";
+
   /** All other findings, from the measures. */
   static List<String> measured(PairFacts f, ScoreConfig cfg) {
     List<String> out = new ArrayList<>();
@@ -62,7 +65,7 @@ final class PairReasons {
     PairMeasures m = f.measures();
     WarpMeasures w = f.warp();
     if (w.iouAligned() < cfg.reasonIou()) {
-      out.add(fmt("silhouettes overlap poorly after alignment (IoU %.2f)", w.iouAligned()));
+      out.add(fmt(POOR_SILHOUETTE_MATCH + " (aligned IoU %.2f)", w.iouAligned()));
     }
     if (w.turnedIou() - w.iouAligned() > cfg.reasonTurnGain()) { // false when no turned pose was tried (NaN)
       out.add(fmt("B matches A's outline only when turned by %.0f degrees (IoU %.2f vs %.2f), which a morph of "

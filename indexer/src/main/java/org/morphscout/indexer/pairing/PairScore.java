@@ -10,8 +10,8 @@ import org.morphscout.indexer.warp.WarpResult;
  *
  * @param score 0..100, higher is better
  * @param verdict pass, warn or fail from the score thresholds and framing faults
- * @param components sub-scores in [0, 1] (1 best), in a fixed order: overlap, warpEffort, foldSafety, appearance,
- *     colour, lightness, contrast, aspect, resolution, objectScale, placement, background (a sub-score whose inputs
+ * @param components sub-scores in [0, 1] (1 best), in a fixed order: silhouetteMatch, warpEffort, foldSafety,
+ *     appearance, colour, lightness, contrast, aspect, resolution, objectScale, placement, background (a sub-score whose inputs
  *     are missing, e.g. no colour statistics, is left out)
  * @param measures the raw measures behind them, in a fixed order: iouBefore, alignedIou, warpedIou,
  *     meanDisplacement, maxDisplacement, foldFraction, appearanceDistance, deltaE00, lightnessGap, stdRatio,

@@ -14,7 +14,7 @@ import org.morphscout.indexer.warp.WarpResult;
  *
  * <p>Combination: each available sub-score {@code c_i} in [0, 1] (the {@link PairComponent}s; see
  * {@link ScoreConfig} for how each is derived) enters a weighted geometric mean,
- * {@code exp(sum w_i ln max(c_i, 0.01) / sum w_i)}, so one very poor aspect (no overlap, a huge colour gap) drags the
+ * {@code exp(sum w_i ln max(c_i, 0.01) / sum w_i)}, so one very poor aspect (silhouettes that do not match, a huge colour gap) drags the
  * whole score down instead of being averaged away; the floor of 0.01 keeps a single zero from erasing every other
  * difference. The mean is multiplied by a penalty factor for each framing fault (object cut off by the frame, several
  * objects, a tiny image; per image), then by 100. The verdict comes from {@link ScoreConfig#passScore()} and
@@ -119,8 +119,8 @@ public final class PairScorer {
     }
     List<String> reasons = new ArrayList<>(doubts);
     List<String> measured = PairReasons.measured(f, config);
-    // Overlap first: it is the main reason a morph fails; then framing faults, then the rest.
-    if (!measured.isEmpty() && measured.get(0).startsWith("silhouettes overlap")) {
+    // A poor silhouette match first: it is the main reason a morph fails; then framing faults, then the rest.
+    if (!measured.isEmpty() && measured.get(0).startsWith(PairReasons.POOR_SILHOUETTE_MATCH)) {
       reasons.add(measured.remove(0));
     }
     reasons.addAll(faults);

@@ -2,7 +2,9 @@ package org.morphscout.indexer.pairing;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.Map;
+import org.morphscout.indexer.MorphscoutException;
 
 /**
  * Every weight, scale and threshold of the pair score. Immutable; validated on construction (weights &gt;= 0 with a
@@ -12,8 +14,10 @@ import java.util.Map;
  * <p>Sub-scores, each in [0, 1] (1 best), and their weights (defaults in brackets):
  *
  * <ul>
- *   <li>overlap [3.0]: aligned IoU mapped linearly from {@code iouZero} [0.3] (scores 0) to {@code iouFull} [0.95]
- *       (scores 1). The most telling single measure of a morph.
+ *   <li>silhouetteMatch [3.0]: the aligned IoU (how much the silhouettes cover each other after a similarity
+ *       alignment) mapped linearly from {@code iouZero} [0.3] (scores 0) to {@code iouFull} [0.95] (scores 1). The
+ *       most telling single measure of a morph. Its weight was called {@code overlapWeight} before; that key is
+ *       still read, so earlier settings files load unchanged.
  *   <li>warpEffort [1.5]: exp(-meanDisplacement / {@code effortScale} [0.15]); displacement as a fraction of object
  *       size.
  *   <li>foldSafety [1.0]: 1 - foldFraction / {@code foldTolerance} [0.05], floored at 0.
@@ -45,7 +49,7 @@ import java.util.Map;
  * exposure difference, which a morph shows as a fade through a brightness change).
  */
 public record ScoreConfig(
-    double overlapWeight,
+    double silhouetteMatchWeight,
     double warpEffortWeight,
     double foldSafetyWeight,
     double appearanceWeight,
@@ -100,7 +104,7 @@ public record ScoreConfig(
       30, 0.2);
 
   public ScoreConfig {
-    double[] weights = {overlapWeight, warpEffortWeight, foldSafetyWeight, appearanceWeight, colourWeight,
+    double[] weights = {silhouetteMatchWeight, warpEffortWeight, foldSafetyWeight, appearanceWeight, colourWeight,
         lightnessWeight, contrastWeight, aspectWeight, resolutionWeight, objectScaleWeight, placementWeight,
         backgroundWeight};
     double sum = 0;
@@ -155,12 +159,12 @@ public record ScoreConfig(
   }
 
   /**
-   * These settings with some replaced, e.g. from command-line options {@code overlapWeight=2}.
+   * These settings with some replaced, e.g. from command-line options {@code silhouetteMatchWeight=2}.
    *
    * @throws org.morphscout.indexer.MorphscoutException naming the unknown key or the invalid value
    */
   public ScoreConfig withOverrides(Map<String, String> overrides) {
-    return RecordSettings.apply(this, overrides, "command-line options");
+    return RecordSettings.apply(this, renamed(overrides, "command-line options"), "command-line options");
   }
 
   /**
@@ -169,7 +173,29 @@ public record ScoreConfig(
    * @throws org.morphscout.indexer.MorphscoutException for unknown keys or invalid values, naming the file
    */
   public static ScoreConfig load(Path file) throws IOException {
-    return RecordSettings.apply(DEFAULTS, SettingsFiles.read(file), file.toString());
+    return RecordSettings.apply(DEFAULTS, renamed(SettingsFiles.read(file), file.toString()), file.toString());
+  }
+
+  /**
+   * Earlier names of settings, still read (never listed among the known settings), with the name they have now.
+   * {@code overlapWeight}: the silhouette match sub-score was called overlap, a word that also
+   * named the images two chains share.
+   */
+  static final Map<String, String> EARLIER_NAMES = Map.of("overlapWeight", "silhouetteMatchWeight");
+
+  /** The settings with earlier names replaced by the current ones; giving both names of one setting is an error. */
+  private static Map<String, String> renamed(Map<String, String> settings, String source) {
+    Map<String, String> out = new LinkedHashMap<>(settings);
+    EARLIER_NAMES.forEach((earlier, now) -> {
+      if (out.containsKey(earlier)) {
+        if (out.containsKey(now)) {
+          throw new MorphscoutException("settings " + earlier + " and " + now + " in " + source + " are one setting "
+              + "(" + earlier + " is its earlier name): give only " + now);
+        }
+        out.put(now, out.remove(earlier));
+      }
+    });
+    return out;
   }
 
   private static void positive(String name, double v) {

@@ -2,7 +2,7 @@
  * Pair scoring: how well one image morphs into another, in a 0..100 score with a pass/warn/fail verdict and
  * plain-language reasons, and the search for the best pairs of a library.
  *
- * <p>{@link org.morphscout.indexer.pairing.PairScorer} combines shape (overlap after similarity alignment, warp
+ * <p>{@link org.morphscout.indexer.pairing.PairScorer} combines shape (silhouette match: the IoU after a similarity alignment; warp
  * effort and fold risk from {@link org.morphscout.indexer.warp}), appearance (cosine distance of appearance
  * vectors), colour and style (colour difference of the foreground means — CIEDE2000 in production, Sharma, Wu and
  * Dalal 2005, Color Research and Application 30(1) — lightness gap, ratio of standard deviations) and framing

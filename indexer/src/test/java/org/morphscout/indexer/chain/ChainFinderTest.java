@@ -142,7 +142,7 @@ class ChainFinderTest {
     assertThat(res.chains()).as("seed %d", SEED + 3).hasSize(3);
     Chain only = finder.find(ChainQuery.between(0, 1).withAlternatives(1), id -> 0).best();
     assertThat(res.best().images()).isEqualTo(only.images());
-    assertThat(res.best().overlap()).isZero();
+    assertThat(res.best().sharedImages()).isZero();
     List<Set<Long>> seen = new ArrayList<>();
     for (Chain c : res.chains()) {
       Set<Long> inner = new HashSet<>(c.images().subList(1, c.images().size() - 1));
@@ -154,7 +154,7 @@ class ChainFinderTest {
         union.addAll(inner);
         max = Math.max(max, union.isEmpty() ? 0 : (double) common.size() / union.size());
       }
-      assertThat(c.overlap()).isCloseTo(max, within(1e-12)).isLessThanOrEqualTo(bound);
+      assertThat(c.sharedImages()).isCloseTo(max, within(1e-12)).isLessThanOrEqualTo(bound);
       assertThat(c.total()).isGreaterThanOrEqualTo(res.best().total());
       seen.add(inner);
     }

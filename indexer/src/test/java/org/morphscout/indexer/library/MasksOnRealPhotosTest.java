@@ -148,9 +148,9 @@ class MasksOnRealPhotosTest {
         OutsideData.SKIMAGE_DATA.resolve("motorcycle_left.png"), "python3-skimage"));
     PairScore fruit = scorer.score(apple, orange);
     PairScore unlike = scorer.score(apple, motorcycle);
-    assertThat(fruit.reasons()).noneMatch(r -> r.startsWith("silhouettes overlap poorly"));
+    assertThat(fruit.reasons()).noneMatch(r -> r.startsWith("silhouettes match poorly"));
     assertThat(fruit.verdict()).isNotEqualTo(Verdict.FAIL);
-    assertThat(unlike.reasons()).anyMatch(r -> r.startsWith("silhouettes overlap poorly"));
+    assertThat(unlike.reasons()).anyMatch(r -> r.startsWith("silhouettes match poorly"));
     assertThat(unlike.verdict()).isEqualTo(Verdict.FAIL);
     assertThat(fruit.score()).isGreaterThan(unlike.score() + 20);
   }

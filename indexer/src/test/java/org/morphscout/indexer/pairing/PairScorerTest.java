@@ -23,7 +23,7 @@ class PairScorerTest {
     assertThat(s.reasons()).isEmpty();
     assertThat(s.verdict()).isEqualTo(Verdict.PASS);
     assertThat(s.score()).isGreaterThan(90);
-    assertThat(s.components().keySet()).startsWith("overlap", "warpEffort", "foldSafety", "appearance");
+    assertThat(s.components().keySet()).startsWith("silhouetteMatch", "warpEffort", "foldSafety", "appearance");
     assertThat(s.components().values()).allSatisfy(v -> assertThat(v).isBetween(0.0, 1.0));
     assertThat(s.measures()).containsKeys("alignedIou", "warpedIou", "meanDisplacement", "foldFraction",
         "appearanceDistance", "deltaE00", "lightnessGap", "stdRatio", "aspectRatioGap", "resolutionRatio",
@@ -110,12 +110,12 @@ class PairScorerTest {
   }
 
   @Test
-  void poorOverlapIsReported() {
+  void poorSilhouetteMatchIsReported() {
     // A tall thin bar against a disc: after alignment the IoU is far below 0.6 by geometry.
     ImageAnalysis a = Analyses.builder(1).object(new java.awt.geom.Rectangle2D.Double(-5, -40, 10, 80)).build();
     ImageAnalysis b = Analyses.builder(2).object(new java.awt.geom.Ellipse2D.Double(-20, -20, 40, 40)).build();
     PairScore s = scorer.score(a, b);
-    assertThat(s.reasons().get(0)).startsWith("silhouettes overlap poorly after alignment (IoU 0.");
+    assertThat(s.reasons().get(0)).startsWith("silhouettes match poorly after alignment (aligned IoU 0.");
     assertThat(s.verdict()).isNotEqualTo(Verdict.PASS);
   }
 

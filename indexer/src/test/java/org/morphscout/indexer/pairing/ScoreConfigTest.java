@@ -16,7 +16,7 @@ class ScoreConfigTest {
 
   @Test
   void rejectsBadValuesWithClearMessages() {
-    assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("overlapWeight", "-1")))
+    assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatchWeight", "-1")))
         .isInstanceOf(MorphscoutException.class).hasMessageContaining("weights must be >= 0");
     assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("iouZero", "0.99")))
         .hasMessageContaining("iouZero < iouFull");
@@ -44,16 +44,37 @@ class ScoreConfigTest {
 
   @Test
   void unknownKeysAreRejectedByName() {
-    assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("overlapWieght", "2")))
+    assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatchWieght", "2")))
         .isInstanceOf(MorphscoutException.class)
-        .hasMessageContaining("unknown setting overlapWieght")
-        .hasMessageContaining("overlapWeight");
+        .hasMessageContaining("unknown setting silhouetteMatchWieght")
+        .hasMessageContaining("silhouetteMatchWeight")
+        .hasMessageNotContaining("overlapWeight"); // the earlier name is read, never offered
+  }
+
+  @Test
+  void theEarlierNameOfTheSilhouetteMatchWeightStillLoads() throws IOException {
+    // Settings files written before the sub-score was renamed say overlapWeight; they load with the same meaning.
+    Path props = dir.resolve("earlier.properties");
+    Files.writeString(props, "overlapWeight = 4.5\npassScore = 70\n");
+    ScoreConfig p = ScoreConfig.load(props);
+    assertThat(p.silhouetteMatchWeight()).isEqualTo(4.5);
+    assertThat(p.passScore()).isEqualTo(70);
+    Path json = dir.resolve("earlier.json");
+    Files.writeString(json, "{\"overlapWeight\": 0.5}");
+    assertThat(ScoreConfig.load(json).silhouetteMatchWeight()).isEqualTo(0.5);
+    assertThat(ScoreConfig.DEFAULTS.withOverrides(Map.of("overlapWeight", "2")).silhouetteMatchWeight())
+        .isEqualTo(2);
+    assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("overlapWeight", "2",
+        "silhouetteMatchWeight", "3")))
+        .isInstanceOf(MorphscoutException.class).hasMessageContaining("give only silhouetteMatchWeight");
+    assertThatThrownBy(() -> ScoreConfig.DEFAULTS.withOverrides(Map.of("overlapWeight", "-1")))
+        .hasMessageContaining("weights must be >= 0");
   }
 
   @Test
   void overridesReplaceOnlyTheNamedValues() {
-    ScoreConfig c = ScoreConfig.DEFAULTS.withOverrides(Map.of("overlapWeight", "2.5", "passScore", "70"));
-    assertThat(c.overlapWeight()).isEqualTo(2.5);
+    ScoreConfig c = ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatchWeight", "2.5", "passScore", "70"));
+    assertThat(c.silhouetteMatchWeight()).isEqualTo(2.5);
     assertThat(c.passScore()).isEqualTo(70);
     assertThat(c.colourWeight()).isEqualTo(ScoreConfig.DEFAULTS.colourWeight());
   }

@@ -33,6 +33,7 @@ import org.morphscout.app.gui.common.Session;
 import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.PairVerdict;
+import org.morphscout.indexer.pairing.PairComponent;
 
 /** Suggested pairs in a sortable table beside the chosen pair's images and aligned silhouettes. */
 public final class PairsView extends BorderPane {
@@ -202,20 +203,12 @@ public final class PairsView extends BorderPane {
     return c;
   }
 
-  /** Short column headers for the components shown as numbers; the full name goes in the tooltip. */
+  /** Column headers of the sub-scores shown as numbers: each component's own title (see {@link PairComponent}). */
   static String header(String component) {
-    return switch (component) {
-      case "appearance" -> "Appearance";
-      case "shape" -> "Shape";
-      case "overlap" -> "Overlap";
-      case "warpEffort" -> "Warp";
-      case "foldSafety" -> "Folds";
-      case "aspect" -> "Aspect";
-      default -> {
-        String h = component.length() > 10 ? component.substring(0, 10) : component;
-        yield h.isEmpty() ? h : Character.toUpperCase(h.charAt(0)) + h.substring(1);
-      }
-    };
+    return PairComponent.byKey(component).map(PairComponent::title).orElseGet(() -> {
+      String h = component.length() > 10 ? component.substring(0, 10) : component;
+      return h.isEmpty() ? h : Character.toUpperCase(h.charAt(0)) + h.substring(1);
+    });
   }
 
   /** Shows the first (or second) image of {@code pair} in the inspector. */

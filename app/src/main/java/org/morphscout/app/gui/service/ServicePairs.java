@@ -9,6 +9,7 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.library.PairService;
 import org.morphscout.indexer.library.QueryContext;
+import org.morphscout.indexer.pairing.PairComponent;
 import org.morphscout.indexer.pairing.PairQuery;
 import org.morphscout.indexer.pairing.PairSearchResult;
 import org.morphscout.indexer.pairing.ScoredPair;
@@ -22,7 +23,8 @@ import org.morphscout.indexer.progress.ProgressListener;
  */
 public final class ServicePairs implements PairsBackend {
   /** Sub-scores shown as columns, in this order (each in [0, 1], 1 best). */
-  static final List<String> SHOWN = List.of("overlap", "warpEffort", "foldSafety", "appearance", "colour", "aspect");
+  static final List<PairComponent> SHOWN = List.of(PairComponent.SILHOUETTE_MATCH, PairComponent.WARP_EFFORT,
+      PairComponent.FOLD_SAFETY, PairComponent.APPEARANCE, PairComponent.COLOUR, PairComponent.ASPECT);
   /** Candidates per image, as the command line's default. */
   static final int CANDIDATES = 20;
 
@@ -53,9 +55,9 @@ public final class ServicePairs implements PairsBackend {
 
   static Map<String, Double> shown(Map<String, Double> components) {
     Map<String, Double> shown = new LinkedHashMap<>();
-    for (String k : SHOWN) {
-      Double v = components.get(k);
-      shown.put(k, v == null ? Double.NaN : v);
+    for (PairComponent c : SHOWN) {
+      Double v = components.get(c.key());
+      shown.put(c.key(), v == null ? Double.NaN : v);
     }
     return shown;
   }
