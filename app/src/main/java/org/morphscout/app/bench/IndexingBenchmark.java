@@ -33,6 +33,7 @@ public final class IndexingBenchmark {
   /**
    * @param images photos indexed
    * @param threads worker threads of both passes
+   * @param silhouettes the silhouette extractor of the indexing run
    * @param decodeOnlyPerSecond images per second of the decode-only pass
    * @param indexPerSecond images per second of the full indexing run
    * @param decodeCpuSecondsPerImage process CPU seconds per image of the decode-only pass
@@ -40,7 +41,7 @@ public final class IndexingBenchmark {
    * @param peakHeapBytes peak heap during the indexing run (sum of the heap pools' peaks)
    * @param failures files the indexer could not index (should be 0)
    */
-  public record Result(int images, int threads, double decodeOnlyPerSecond, double indexPerSecond,
+  public record Result(int images, int threads, AnalysisSetup.SilhouetteMode silhouettes, double decodeOnlyPerSecond, double indexPerSecond,
       double decodeCpuSecondsPerImage, double indexCpuSecondsPerImage, long peakHeapBytes, int failures) {
     /** Indexing throughput as a fraction of the decode-only floor. */
     public double ratio() {
@@ -59,10 +60,39 @@ public final class IndexingBenchmark {
   private IndexingBenchmark() {}
 
   /**
+   * Indexing with the library's default analysis (classical silhouettes) on the default number of threads.
+   *
    * @param photoDir a folder holding only the photos to index
    * @param workDir an empty scratch folder (catalogs are made in it)
    */
   public static Result run(Path photoDir, Path workDir) throws IOException {
+    return run(photoDir, workDir, IndexOptions.defaults().threads(), AnalysisSetup.defaults());
+  }
+
+  /**
+   * The decode-only floor and indexing at every thread count of {@code threadCounts}, once per silhouette extractor
+   * of {@code silhouettes}, in that order (so the photos are read from the page cache after the first pass).
+   */
+  public static List<Result> scaling(Path photoDir, Path workDir, List<Integer> threadCounts,
+      List<AnalysisSetup.SilhouetteMode> silhouettes) throws IOException {
+    List<Result> results = new ArrayList<>();
+    for (AnalysisSetup.SilhouetteMode mode : silhouettes) {
+      for (int threads : threadCounts) {
+        Path dir = Files.createDirectories(workDir.resolve(mode.name().toLowerCase(java.util.Locale.ROOT) + "-"
+            + threads));
+        results.add(run(photoDir, dir, threads, AnalysisSetup.defaults().withSilhouettes(mode)));
+      }
+    }
+    return results;
+  }
+
+  /**
+   * @param photoDir a folder holding only the photos to index
+   * @param workDir an empty scratch folder (catalogs are made in it)
+   * @param threads worker threads of both passes
+   * @param setup the analysis of the indexing run
+   */
+  public static Result run(Path photoDir, Path workDir, int threads, AnalysisSetup setup) throws IOException {
     List<Path> photos;
     try (var files = Files.list(photoDir)) {
       photos = files.filter(Files::isRegularFile).sorted().toList();
@@ -70,14 +100,13 @@ public final class IndexingBenchmark {
     if (photos.isEmpty()) {
       throw new MorphscoutException("No photos to index in " + photoDir);
     }
-    IndexOptions options = IndexOptions.defaults();
-    int threads = options.threads();
+    IndexOptions options = IndexOptions.defaults().withThreads(threads);
 
     Path warmRoot = Files.createDirectories(workDir.resolve("warm-up-photos"));
     for (Path p : photos.subList(0, Math.min(6, photos.size()))) {
       Files.copy(p, warmRoot.resolve(p.getFileName()));
     }
-    index(warmRoot, workDir.resolve("warm-up-catalog"), options);
+    index(warmRoot, workDir.resolve("warm-up-catalog"), options, setup);
     decodeAll(photos.subList(0, Math.min(6, photos.size())), threads);
 
     long c0 = CpuClock.processNanos();
@@ -90,18 +119,18 @@ public final class IndexingBenchmark {
     HeapMeter.resetPeak();
     c0 = CpuClock.processNanos();
     t0 = System.nanoTime();
-    IndexReport report = index(photoDir, workDir.resolve("catalog"), options);
+    IndexReport report = index(photoDir, workDir.resolve("catalog"), options, setup);
     double indexSeconds = (System.nanoTime() - t0) / 1e9;
     double indexCpu = (CpuClock.processNanos() - c0) / 1e9;
     long peak = HeapMeter.peakSinceReset();
-    return new Result(photos.size(), threads, photos.size() / decodeSeconds, photos.size() / indexSeconds,
-        decodeCpu / photos.size(), indexCpu / photos.size(), peak,
-        report.failed());
+    return new Result(photos.size(), threads, setup.silhouettes(), photos.size() / decodeSeconds,
+        photos.size() / indexSeconds, decodeCpu / photos.size(), indexCpu / photos.size(), peak, report.failed());
   }
 
-  private static IndexReport index(Path root, Path catalogDir, IndexOptions options) throws IOException {
+  private static IndexReport index(Path root, Path catalogDir, IndexOptions options, AnalysisSetup setup)
+      throws IOException {
     try (Library library = Library.open(catalogDir)) {
-      return new LibraryIndexer(library, AnalysisSetup.defaults(), options)
+      return new LibraryIndexer(library, setup, options)
           .index(List.of(root), ProgressListener.NONE, CancellationToken.none());
     }
   }

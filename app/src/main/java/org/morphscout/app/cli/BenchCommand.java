@@ -12,6 +12,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.SplittableRandom;
 import java.util.concurrent.Callable;
 import java.util.concurrent.ExecutorService;
@@ -29,6 +30,7 @@ import org.morphscout.demo.Shot;
 import org.morphscout.demo.VesselRenderer;
 import org.morphscout.app.bench.CatalogVolumes;
 import org.morphscout.indexer.silhouette.ModelFolder;
+import org.morphscout.indexer.silhouette.SalientModelStore;
 import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.app.bench.ChainBenchmark;
 import org.morphscout.app.bench.FeatureBenchmark;
@@ -72,6 +74,8 @@ final class BenchCommand implements Callable<Integer> {
   private static final int DIMENSION = 560; // the built-in appearance descriptor
   /** Candidate counts measured on every built vector index besides the default. */
   private static final List<Integer> CANDIDATE_SWEEP = List.of(50, 100, 200);
+  /** With --peers, also the small counts where native libraries reach recall 0.95. */
+  private static final List<Integer> PEER_SWEEP = List.of(10, 20, 30, 50, 100, 200);
 
   @Spec CommandSpec spec;
 
@@ -119,8 +123,19 @@ final class BenchCommand implements Callable<Integer> {
   @Option(names = "--peers", paramLabel = "<folder>", description = "Only measure our vector search at the --vectors "
       + "sizes (default 100000) and both real dimensions (560 appearance, 1024 shape), float, and write the vectors, "
       + "queries and our figures to this folder for scripts/vector-peers, which runs other libraries on the same "
-      + "data; then stop.")
+      + "data; then stop. Each index is kept in that folder (index-N-D) and searched again without rebuilding by the "
+      + "next run into the same folder; delete it to rebuild.")
   Path peersFolder;
+
+  @Option(names = "--decode-floor", description = "Only measure indexing against its floor (decoding alone, with the "
+      + "same decoder) on generated 12-megapixel photos (4000x3000 JPEG, quality 90; --photos of them, default 30), at "
+      + "1 to N threads (N = cores), with classical silhouettes and then with the learned model for every image when "
+      + "it is installed; and stop.")
+  boolean decodeFloor;
+
+  @Option(names = "--dimensions", paramLabel = "<d>", split = ",", description = "With --peers: the vector "
+      + "dimensions to measure (default 560,1024).")
+  List<Integer> peerDimensions;
 
   private PrintWriter err;
 
@@ -130,23 +145,26 @@ final class BenchCommand implements Callable<Integer> {
     if (vectorSizes != null) {
       vectorSizes.forEach(n -> check.between("--vectors", n, 1, 100_000_000));
     }
+    if (peerDimensions != null) {
+      peerDimensions.forEach(d -> check.between("--dimensions", d, 2, 1024));
+    }
     err = spec.commandLine().getErr();
     if (peersFolder != null) {
       for (int n : vectorSizes != null ? vectorSizes : List.of(100_000)) {
-        for (int dimension : List.of(DIMENSION, 1024)) {
+        for (int dimension : peerDimensions != null ? peerDimensions : List.of(DIMENSION, 1024)) {
           status("vector search for peers, " + n + " x " + dimension);
           VectorSearchBenchmark.Config config = new VectorSearchBenchmark.Config(n, dimension, Quantization.NONE,
-              200, 10, SEED, CANDIDATE_SWEEP);
-          Path scratchIndex = Files.createTempDirectory("morphscout-peers-");
-          try {
-            PeerVectors.export(peersFolder, config, VectorSearchBenchmark.run(config, scratchIndex.resolve("index")));
-          } finally {
-            deleteTree(scratchIndex);
-          }
+              200, 10, SEED, PEER_SWEEP);
+          Files.createDirectories(peersFolder);
+          PeerVectors.export(peersFolder, config,
+              VectorSearchBenchmark.run(config, peersFolder.resolve("index-" + n + "-" + dimension)));
         }
       }
       err.println("wrote " + peersFolder + "; now run: scripts/vector-peers " + peersFolder);
       return ExitCodes.OK;
+    }
+    if (decodeFloor) {
+      return decodeFloorOnly();
     }
     if (storedPairSizes != null || pairCostFolder != null || rescanFiles != null || silhouetteCostFolder != null) {
       if (rescanFiles != null) {
@@ -211,6 +229,52 @@ final class BenchCommand implements Callable<Integer> {
       if (volumesCatalog != null) {
         r.volumes(volumesCatalog.toString(), CatalogVolumes.measure(volumesCatalog));
       }
+      r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
+    } finally {
+      deleteTree(scratch);
+    }
+    return emit(r);
+  }
+
+  /** A catalog folder that holds no model (the learned model is looked up in the per-user folder only). */
+  private static Path scratchCatalogFolder(Path base) {
+    return base.resolve("no-catalog");
+  }
+
+  /** Indexing against decoding alone on 12-megapixel photos, at 1 to N threads: the decode-floor table alone. */
+  private int decodeFloorOnly() throws Exception {
+    int photoCount = photos != null ? photos : 30;
+    Path base = work != null ? work : Path.of(System.getProperty("java.io.tmpdir"), "morphscout-bench");
+    Path cache = PhotoCache.ensure(base.resolve("photos-4000x3000-q90"), photoCount, PhotoCache.LARGE_WIDTH,
+        PhotoCache.LARGE_HEIGHT, err);
+    Path scratch = Files.createTempDirectory(Files.createDirectories(base), "run-");
+    Path photoDir = Files.createDirectories(scratch.resolve("photos"));
+    long photoBytes = 0;
+    for (int i = 0; i < photoCount; i++) {
+      Path cached = PhotoCache.file(cache, i);
+      Files.createLink(photoDir.resolve(cached.getFileName()), cached);
+      photoBytes += Files.size(cached);
+    }
+    List<Integer> threads = new ArrayList<>();
+    for (int t = 1; t <= Runtime.getRuntime().availableProcessors(); t++) {
+      threads.add(t);
+    }
+    List<AnalysisSetup.SilhouetteMode> modes = new ArrayList<>(List.of(AnalysisSetup.SilhouetteMode.CLASSICAL));
+    boolean learned = new SalientModelStore().find(ModelFolder.resolve(Optional.empty()), scratchCatalogFolder(base))
+        .isPresent();
+    if (learned) {
+      modes.add(AnalysisSetup.SilhouetteMode.LEARNED);
+    }
+    String loadBefore = MachineInfo.currentLoadAverage();
+    long start = System.nanoTime();
+    Report r = new Report();
+    try {
+      String args = String.join(" ", spec.commandLine().getParseResult().originalArgs());
+      r.header(MachineInfo.current(), "./morphscout " + (args.startsWith("bench") ? args : "bench " + args), false);
+      status("indexing " + photoCount + " photos of 12 megapixels against decoding alone, 1 to "
+          + threads.getLast() + " threads");
+      r.decodeFloor(IndexingBenchmark.scaling(photoDir, scratch.resolve("indexing"), threads, modes),
+          photoBytes / photoCount, learned);
       r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
     } finally {
       deleteTree(scratch);
@@ -286,10 +350,13 @@ final class BenchCommand implements Callable<Integer> {
     }
   }
 
-  /** Renders demo-style product photos at 3000x2000 and caches them as quality-90 JPEGs. */
+  /** Renders demo-style product photos (3000x2000, or 4000x3000 for the decode floor) as quality-90 JPEGs. */
   static final class PhotoCache {
     static final int WIDTH = 3000;
     static final int HEIGHT = 2000;
+    /** The decode floor's 12-megapixel photos. */
+    static final int LARGE_WIDTH = 4000;
+    static final int LARGE_HEIGHT = 3000;
     /** Distinct rendered scenes; larger photo sets reuse them as variants. */
     static final int SCENES = 60;
     /** Sensor-like noise, 8-bit levels (a clean base-ISO camera file shows about 1.5-3). */
@@ -298,6 +365,10 @@ final class BenchCommand implements Callable<Integer> {
     private PhotoCache() {}
 
     static Path ensure(Path dir, int count, PrintWriter err) throws Exception {
+      return ensure(dir, count, WIDTH, HEIGHT, err);
+    }
+
+    static Path ensure(Path dir, int count, int width, int height, PrintWriter err) throws Exception {
       Files.createDirectories(dir);
       List<Integer> missing = new ArrayList<>();
       for (int i = 0; i < count; i++) {
@@ -308,8 +379,8 @@ final class BenchCommand implements Callable<Integer> {
       if (missing.isEmpty()) {
         return dir;
       }
-      err.printf("bench: rendering %d photos of %dx%d into %s (cached for later runs)%n", missing.size(), WIDTH,
-          HEIGHT, dir);
+      err.printf("bench: rendering %d photos of %dx%d into %s (cached for later runs)%n", missing.size(), width,
+          height, dir);
       err.flush();
       VesselRenderer renderer = new VesselRenderer();
       ExecutorService pool = Executors.newFixedThreadPool(Runtime.getRuntime().availableProcessors(), r -> {
@@ -333,7 +404,7 @@ final class BenchCommand implements Callable<Integer> {
           }
           int sceneId = scene;
           done.add(pool.submit(() -> {
-            BufferedImage image = renderer.render(shot(sceneId)).image();
+            BufferedImage image = renderer.render(shot(sceneId, width, height)).image();
             for (int i : todo) {
               Path tmp = dir.resolve("photo-" + i + ".tmp");
               Files.write(tmp, ImageCodec.jpeg(variant(image, i, (i / SCENES) % 2 == 1), 0.9f));
@@ -387,7 +458,7 @@ final class BenchCommand implements Callable<Integer> {
     }
 
     /** Photo {@code i}: a random vessel, glaze, backdrop and light, like the demo library's product shots. */
-    static Shot shot(int i) {
+    static Shot shot(int i, int width, int height) {
       SplittableRandom rnd = new SplittableRandom(SEED + 7919L * i);
       Archetype[] all = Archetype.values();
       BackdropKind[] kinds = {BackdropKind.STUDIO_SWEEP, BackdropKind.GRADIENT, BackdropKind.LINEN,
@@ -400,8 +471,8 @@ final class BenchCommand implements Callable<Integer> {
           0.85 + 0.3 * rnd.nextDouble(), 0.22 + 0.16 * rnd.nextDouble(), -0.4 + 0.9 * rnd.nextDouble(), 1.0);
       double tilt = 0.10 + 0.12 * rnd.nextDouble();
       Placement p = Placement.fitted(all[rnd.nextInt(all.length)].profile().varied(rnd.nextLong(), 0.08),
-          Glazes.pick(rnd), WIDTH, HEIGHT, 0.55 + 0.25 * rnd.nextDouble(), tilt, 0.15 * (rnd.nextDouble() - 0.5));
-      return new Shot(WIDTH, HEIGHT, backdrop, light, tilt, List.of(p));
+          Glazes.pick(rnd), width, height, 0.55 + 0.25 * rnd.nextDouble(), tilt, 0.15 * (rnd.nextDouble() - 0.5));
+      return new Shot(width, height, backdrop, light, tilt, List.of(p));
     }
   }
 
@@ -442,6 +513,39 @@ final class BenchCommand implements Callable<Integer> {
       if (r.failures() > 0) {
         line("");
         line("**" + r.failures() + " photos failed to index.**");
+      }
+      line("");
+    }
+
+    void decodeFloor(List<IndexingBenchmark.Result> rs, long meanFileBytes, boolean learnedInstalled) {
+      line("## Indexing against the decode floor, 1 to N threads");
+      line("");
+      line(rs.getFirst().images() + " generated product photos, " + PhotoCache.LARGE_WIDTH + "x"
+          + PhotoCache.LARGE_HEIGHT + " JPEG quality 90 (12 megapixels; vessel, glaze texture, backdrop, light, "
+          + "sensor-like noise of sd 2.5 levels), mean file size " + Text.bytes(meanFileBytes) + ". Decode-only = the "
+          + "indexer's decoder (the fast JPEG path) and options on the same threads, nothing else. Full indexing = "
+          + "scan, SHA-256, decode, silhouette, shape, colour, descriptor, thumbnail, catalog, vector index, "
+          + "neighbour graph, stored pairs. Throughput is wall-clock; CPU is the whole process's CPU time.");
+      line("");
+      line("| silhouettes | threads | decode-only | full indexing | ratio (wall) | CPU s per image: decode-only / "
+          + "indexing | ratio (CPU) | target >= 0.8x | peak heap |");
+      line("|---|---|---|---|---|---|---|---|---|");
+      for (IndexingBenchmark.Result r : rs) {
+        line("| " + r.silhouettes().name().toLowerCase(Locale.ROOT) + " | " + r.threads() + " | "
+            + f(r.decodeOnlyPerSecond(), 2) + " images/s | " + f(r.indexPerSecond(), 2) + " images/s | "
+            + f(r.ratio(), 2) + "x | " + f(r.decodeCpuSecondsPerImage(), 3) + " / " + f(r.indexCpuSecondsPerImage(), 3)
+            + " | " + f(r.cpuRatio(), 2) + "x | "
+            + (r.silhouettes() == AnalysisSetup.SilhouetteMode.CLASSICAL ? met(r.ratio() >= 0.8) : "(stated)")
+            + " | " + Text.bytes(r.peakHeapBytes()) + " |");
+      }
+      if (!learnedInstalled) {
+        line("");
+        line("The learned silhouette model is not installed (morphscout models add-salient), so only the classical "
+            + "extractor was measured.");
+      }
+      if (rs.stream().anyMatch(r -> r.failures() > 0)) {
+        line("");
+        line("**Some photos failed to index.**");
       }
       line("");
     }
