@@ -30,6 +30,7 @@ import picocli.CommandLine;
       CommandLine.HelpCommand.class,
       DemoCommand.class,
       IndexCommand.class,
+      ImportCommand.class,
       StatusCommand.class,
       SimilarCommand.class,
       PairsCommand.class,

@@ -32,7 +32,14 @@ public final class ImageStore {
 
   /** Registers a root (absolute, normalised) and returns its id; an existing root keeps its id. */
   public long ensureRoot(Path root) {
-    String p = root.toAbsolutePath().normalize().toString();
+    return ensureRoot(root.toAbsolutePath().normalize().toString());
+  }
+
+  /**
+   * Registers a root given as it is named (an absolute local path, or a URI of a file system this machine may not
+   * reach, for analyses imported from a cluster) and returns its id.
+   */
+  public long ensureRoot(String p) {
     return catalog.read(c -> {
       try (PreparedStatement s = c.prepareStatement("INSERT OR IGNORE INTO roots(path, added_at) VALUES (?, ?)")) {
         s.setString(1, p);

@@ -131,7 +131,7 @@ public final class LibraryScanner {
 
   private boolean isImageName(Path file) {
     Path name = file.getFileName();
-    return name != null && options.extensions().contains(FormatSniffer.extension(name.toString()));
+    return name != null && options.countsAsImage(name.toString());
   }
 
   private final class Visitor extends SimpleFileVisitor<Path> {

@@ -57,6 +57,11 @@ public record ScanOptions(
     }
   }
 
+  /** Whether a file of this name counts as an image (its extension, in any case, is one of {@link #extensions}). */
+  public boolean countsAsImage(String fileName) {
+    return extensions.contains(FormatSniffer.extension(fileName));
+  }
+
   /** No links followed, hidden entries skipped, nothing excluded, {@link #IMAGE_EXTENSIONS}. */
   public static ScanOptions defaults() {
     return new ScanOptions(LinkPolicy.NONE, false, Set.of(), IMAGE_EXTENSIONS);

@@ -35,24 +35,33 @@ public final class AnalyzerFactory {
 
   /** The analyser for {@code setup}; the caller closes its embedder ({@code analyzer.embedder().close()}). */
   public static ImageAnalyzer create(Library library, AnalysisSetup setup) throws IOException {
+    return create(setup, library.catalog().modelDir(), learnedModel(library, setup));
+  }
+
+  /**
+   * The analyser for {@code setup} outside a catalog (for example on a cluster's worker): the generated appearance
+   * model is written to {@code appearanceModelDir}, and {@code learnedModel} is the salient-object model file, when
+   * there is one. The caller closes its embedder.
+   */
+  public static ImageAnalyzer create(AnalysisSetup setup, Path appearanceModelDir, Optional<Path> learnedModel)
+      throws IOException {
     SilhouetteExtractor silhouettes = switch (setup.silhouettes()) {
       case CLASSICAL -> new DefaultSilhouettes();
-      case LEARNED -> new SalientModelSilhouettes(learnedModel(library, setup)
+      case LEARNED -> new SalientModelSilhouettes(learnedModel
           .orElseThrow(() -> new MorphscoutException("the learned silhouette model is not installed in "
               + setup.models().dir() + ": run 'morphscout models add-salient' first")));
       case AUTO -> {
-        Optional<Path> model = learnedModel(library, setup);
-        if (model.isEmpty()) {
+        if (learnedModel.isEmpty()) {
           warnOnce(setup.models());
           yield new DefaultSilhouettes();
         }
-        yield new ConfidenceChoiceSilhouettes(new DefaultSilhouettes(), loadedOnFirstUse(model.get()),
+        yield new ConfidenceChoiceSilhouettes(new DefaultSilhouettes(), loadedOnFirstUse(learnedModel.get()),
             ConfidenceChoiceSilhouettes.Options.DEFAULTS);
       }
     };
     AppearanceEmbedder embedder = setup.model().isPresent()
         ? OnnxAppearanceEmbedder.custom(setup.model().get())
-        : OnnxAppearanceEmbedder.builtIn(library.catalog().modelDir());
+        : OnnxAppearanceEmbedder.builtIn(appearanceModelDir);
     return new ImageAnalyzer(OpenCvJpegDecoder.create(setup.decode()), silhouettes, new ShapeDescriptors(),
         new ColourStatistics(), embedder);
   }
@@ -62,7 +71,12 @@ public final class AnalyzerFactory {
    * "classical" while the learned model is missing, so that installing it later analyses the library again.
    */
   public static String effectiveSilhouettes(Library library, AnalysisSetup setup) throws IOException {
-    if (setup.silhouettes() == AnalysisSetup.SilhouetteMode.AUTO && learnedModel(library, setup).isEmpty()) {
+    return effectiveSilhouettes(setup, learnedModel(library, setup));
+  }
+
+  /** As {@link #effectiveSilhouettes(Library, AnalysisSetup)}, given the learned model file found (if any). */
+  public static String effectiveSilhouettes(AnalysisSetup setup, Optional<Path> learnedModel) {
+    if (setup.silhouettes() == AnalysisSetup.SilhouetteMode.AUTO && learnedModel.isEmpty()) {
       return "classical";
     }
     return setup.silhouettes().name().toLowerCase(Locale.ROOT);

@@ -107,27 +107,11 @@ public final class LibraryIndexer {
         }
         index.commit();
         if (!cancelled) {
-          AnalysisCache cache = new AnalysisCache(library, 10_000); // about 20 KB an image: at most ~200 MB
           List<Long> removed = new ArrayList<>(plan.nowMissing());
           for (IndexReport.FileFailure f : failures) {
             library.images().byPath(f.path()).ifPresent(r -> removed.add(r.id()));
           }
-          // Also images that are ready but have no neighbour list (returned files, an interrupted earlier run).
-          Set<Long> linked = library.neighbours().idsWithLinks();
-          List<Long> changed = new ArrayList<>(analysed);
-          Set<Long> analysedIds = new java.util.HashSet<>(analysed); // a set: this loop runs over the whole library
-          for (long id : library.features().readyIds(modelId)) {
-            if (!linked.contains(id) && !analysedIds.contains(id)) {
-              changed.add(id);
-            }
-          }
-          try {
-            new NeighbourGraphUpdater(library, index, cache, options.neighbours())
-                .update(changed, removed, progress, cancel);
-            new PairStoreUpdater(library, index, cache, options.threads()).update(modelId, progress, cancel);
-          } catch (CancellationToken.CancelledException e) {
-            cancelled = true;
-          }
+          cancelled = !GraphAndPairs.update(library, index, modelId, analysed, removed, options, progress, cancel);
         }
         listKnownFailures(roots, failures);
         progress.finished();

@@ -57,7 +57,7 @@ public final class VectorSync {
     return added;
   }
 
-  static boolean finite(float[] v) {
+  public static boolean finite(float[] v) {
     for (float x : v) {
       if (!Float.isFinite(x)) {
         return false;

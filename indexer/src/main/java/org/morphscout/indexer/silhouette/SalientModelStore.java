@@ -67,6 +67,15 @@ public final class SalientModelStore {
     return shared.isPresent() ? shared : verified(modelPath(catalogDir));
   }
 
+  /**
+   * The model in {@code folder} only, verified (a worker that received the file with its job has no catalog).
+   *
+   * @throws MorphscoutException when a file is there but its checksum differs
+   */
+  public Optional<Path> findIn(ModelFolder folder) throws IOException {
+    return verified(folder.salientModel());
+  }
+
   /** Installs the model into the per-user model folder (see {@link #install(Path, Optional)} for the sources). */
   public Path install(ModelFolder folder, Optional<Path> from) throws IOException {
     return installAt(folder.salientModel(), from);
