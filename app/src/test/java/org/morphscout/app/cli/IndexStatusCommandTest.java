@@ -163,7 +163,7 @@ class IndexStatusCommandTest {
   }
 
   @ParameterizedTest
-  @ValueSource(strings = {"index", "status", "similar", "pairs", "screen", "decide", "decisions", "chain", "walk",
+  @ValueSource(strings = {"index", "import", "status", "similar", "pairs", "screen", "decide", "decisions", "chain", "walk",
       "preview", "models", "demo"})
   void everyHelpHasAOneLineHeaderAndTheExitCodes(String command) {
     Cli.Run run = Cli.runRaw(command, "--help");

@@ -75,10 +75,13 @@ public final class AnalyseJob implements Callable<Integer> {
     }
     SparkSession spark = SparkSession.builder().config(conf).getOrCreate();
     try {
+      long start = System.nanoTime();
       Outcome o = run(spark, inputs, Optional.ofNullable(list), out, silhouettes,
           ModelFolder.resolve(Optional.ofNullable(models)), partitions);
-      System.out.printf("analysed %d files, %d failed (%s silhouettes); wrote %s%n", o.analysed(), o.failed(),
-          o.silhouettes(), out);
+      double seconds = (System.nanoTime() - start) / 1e9;
+      System.out.printf(java.util.Locale.ROOT, "analysed %d files, %d failed (%s silhouettes) in %.1f s on %s "
+          + "(%.1f files/s); wrote %s%n", o.analysed(), o.failed(), o.silhouettes(), seconds, spark.sparkContext()
+          .master(), (o.analysed() + o.failed()) / seconds, out);
       return 0;
     } catch (MorphscoutException e) {
       System.err.println("analyse-job: " + e.getMessage());

@@ -22,8 +22,8 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.DemoLibrary;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
-import org.morphscout.indexer.catalog.ImageRow;
-import org.morphscout.indexer.catalog.ImageStatus;
+import org.morphscout.indexer.values.ImageRow;
+import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.chain.ChainQuery;
 import org.morphscout.indexer.library.AnalysisImporter;
 import org.morphscout.indexer.library.AnalysisSetup;
@@ -162,7 +162,7 @@ class SparkImportTest {
       ImageRow first = library.images().withStatus(ImageStatus.READY).get(0);
       ImageRow second = library.images().withStatus(ImageStatus.READY).get(1);
       library.decisions().decide(first.id(), second.id(),
-          org.morphscout.indexer.catalog.DecisionStore.Verdict.APPROVED, "kept across imports");
+          org.morphscout.indexer.values.DecisionKind.APPROVED, "kept across imports");
       ImportReport report = importInto(library);
       assertThat(report.added()).isZero();
       assertThat(report.replaced()).isZero();
