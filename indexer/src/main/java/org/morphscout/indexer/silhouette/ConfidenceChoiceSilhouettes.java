@@ -13,6 +13,13 @@ import java.util.function.Supplier;
  *       decisive, that is how bimodal, the learned map is);
  *   <li>lowered when the mask touches the frame, when it is in several pieces, and when it covers almost nothing or
  *       almost everything;
+ *   <li>raised when the mask is in one piece, clear of the frame and left-right mirror-symmetric
+ *       ({@link Mask#mirrorSymmetry()}): a mask that found only part of an object (its lit side, one glaze, the
+ *       body without the neck) is rarely symmetric, while whole vessels, bottles, fruit and most product shots are.
+ *       On the demo library every classical mask raised so (17 of the 88 that reached the model before) agreed with
+ *       the learned one (IoU 0.81 to 0.99, most above 0.95), and on the real photographs of the test suite the two
+ *       wrong classical masks the model must replace (an orange's lit half, a blurred clock's core) are below the
+ *       symmetry limit (0.81 and 0.77);
  *   <li>raised for both when the two masks agree (IoU), lowered for both when they disagree.
  * </ul>
  *
@@ -28,12 +35,17 @@ public final class ConfidenceChoiceSilhouettes implements SilhouetteExtractor {
    * @param framePenalty factor on the trust of a mask touching the frame, in [0, 1]
    * @param piecesPenalty factor on the trust of a mask in several pieces, in [0, 1]
    * @param extremeCoverage a mask covering less than this fraction, or more than 1 minus it, gets half the trust
+   * @param symmetricAbove mirror symmetry from which a mask in one piece and clear of the frame counts as whole, in
+   *     [0, 1] (default 0.9)
+   * @param symmetryBonus trust added to such a mask, in [0, 1] (default 0.15: lifts the classical masks of trust 0.6
+   *     and more over {@code learnedBelow})
    */
-  public record Options(double learnedBelow, double framePenalty, double piecesPenalty, double extremeCoverage) {
-    public static final Options DEFAULTS = new Options(0.75, 0.75, 0.85, 0.02);
+  public record Options(double learnedBelow, double framePenalty, double piecesPenalty, double extremeCoverage,
+      double symmetricAbove, double symmetryBonus) {
+    public static final Options DEFAULTS = new Options(0.75, 0.75, 0.85, 0.02, 0.9, 0.15);
 
     public Options {
-      for (double v : new double[] {learnedBelow, framePenalty, piecesPenalty}) {
+      for (double v : new double[] {learnedBelow, framePenalty, piecesPenalty, symmetricAbove, symmetryBonus}) {
         if (!(v >= 0 && v <= 1)) {
           throw new IllegalArgumentException("silhouette choice factors must be in [0, 1], got " + v);
         }
@@ -92,6 +104,8 @@ public final class ConfidenceChoiceSilhouettes implements SilhouetteExtractor {
     }
     if (s.coverage() < options.extremeCoverage() || s.coverage() > 1 - options.extremeCoverage()) {
       t *= 0.5;
+    } else if (!s.touchesFrame() && s.components() == 1 && s.mask().mirrorSymmetry() >= options.symmetricAbove()) {
+      t += options.symmetryBonus();
     }
     return clamp(t);
   }

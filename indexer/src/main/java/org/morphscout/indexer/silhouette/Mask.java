@@ -116,6 +116,40 @@ public final class Mask {
     return union == 0 ? 1.0 : inter / (double) union;
   }
 
+  /**
+   * Left-right mirror symmetry: the IoU of the mask with its mirror image about the vertical line through its
+   * centroid (pixel centres, the mirrored column rounded to the nearest), in [0, 1]; 0 for an empty mask.
+   */
+  public double mirrorSymmetry() {
+    long sumX = 0;
+    int n = 0;
+    for (int y = 0, i = 0; y < height; y++) {
+      for (int x = 0; x < width; x++, i++) {
+        if (data[i] != 0) {
+          sumX += x;
+          n++;
+        }
+      }
+    }
+    if (n == 0) {
+      return 0;
+    }
+    double twiceCx = 2.0 * sumX / n;
+    int inter = 0;
+    int union = 0;
+    for (int y = 0; y < height; y++) {
+      int row = y * width;
+      for (int x = 0; x < width; x++) {
+        int mx = (int) Math.round(twiceCx - x);
+        int v = data[row + x];
+        int w = mx >= 0 && mx < width ? data[row + mx] : 0;
+        inter += v & w;
+        union += v | w;
+      }
+    }
+    return union == 0 ? 0 : inter / (double) union;
+  }
+
   @Override
   public boolean equals(Object o) {
     return o instanceof Mask m && m.width == width && m.height == height && Arrays.equals(m.data, data);

@@ -51,12 +51,54 @@ class ConfidenceChoiceSilhouettesTest {
 
   @Test
   void aConfidentClassicalSilhouetteIsKeptWithoutRunningTheModel() {
+    // The box is in one piece, clear of the frame and mirror-symmetric, so the symmetry bonus lifts it too.
     Fixed classical = new Fixed(box(20, 10, 44, 40, 0.9, false, "border-model"));
     Fixed learned = new Fixed(box(0, 0, 64, 48, 0.99, false, "learned"));
     Silhouette s = choice(classical, learned).extract(IMAGE);
     assertThat(s.source()).isEqualTo("border-model");
-    assertThat(s.confidence()).isEqualTo(0.9);
+    assertThat(s.confidence()).isEqualTo(1.0); // 0.9 + the symmetry bonus, clamped
     assertThat(learned.calls).hasValue(0);
+  }
+
+  @Test
+  void aSymmetricWholeMaskSkipsTheModelAndAnAsymmetricOneDoesNot() {
+    // Trust 0.65: below the 0.75 at which the model runs, unless the mask looks whole (one piece, off the frame,
+    // mirror-symmetric).
+    Fixed whole = new Fixed(box(20, 10, 44, 40, 0.65, false, "border-model"));
+    Fixed learned = new Fixed(box(20, 10, 44, 40, 0.99, false, "learned"));
+    Silhouette s = choice(whole, learned).extract(IMAGE);
+    assertThat(learned.calls).hasValue(0);
+    assertThat(s.confidence()).isCloseTo(0.80, org.assertj.core.api.Assertions.within(1e-9));
+    // An L-shaped mask (a lit side and the base, say) of the same trust is not symmetric: the model is asked.
+    byte[] data = new byte[64 * 48];
+    for (int y = 10; y < 40; y++) {
+      for (int x = 20; x < (y >= 32 ? 44 : 28); x++) {
+        data[y * 64 + x] = 1;
+      }
+    }
+    Mask ell = new Mask(64, 48, data);
+    assertThat(ell.mirrorSymmetry()).isLessThan(0.9);
+    Fixed part = new Fixed(new Silhouette(ell, 1, false, ell.coverage(), 0.65, "border-model"));
+    choice(part, learned).extract(IMAGE);
+    assertThat(learned.calls).hasValue(1);
+    // Cut by the frame, the same symmetric box gets no bonus either.
+    Fixed cut = new Fixed(box(20, 10, 44, 40, 0.65, true, "border-model"));
+    choice(cut, learned).extract(IMAGE);
+    assertThat(learned.calls).hasValue(2);
+  }
+
+  @Test
+  void mirrorSymmetryOfMasks() {
+    assertThat(box(20, 10, 44, 40, 0.5, false, "x").mask().mirrorSymmetry()).isEqualTo(1.0);
+    assertThat(Mask.empty(8, 8).mirrorSymmetry()).isZero();
+    // A right triangle: its mirror image about the centroid's vertical overlaps it only in part.
+    byte[] data = new byte[32 * 32];
+    for (int y = 0; y < 32; y++) {
+      for (int x = 0; x <= y; x++) {
+        data[y * 32 + x] = 1;
+      }
+    }
+    assertThat(new Mask(32, 32, data).mirrorSymmetry()).isBetween(0.2, 0.8);
   }
 
   @Test
@@ -92,9 +134,9 @@ class ConfidenceChoiceSilhouettesTest {
 
   @Test
   void optionsAreValidated() {
-    assertThatThrownBy(() -> new ConfidenceChoiceSilhouettes.Options(1.5, 0.75, 0.85, 0.02))
+    assertThatThrownBy(() -> new ConfidenceChoiceSilhouettes.Options(1.5, 0.75, 0.85, 0.02, 0.9, 0.15))
         .isInstanceOf(IllegalArgumentException.class);
-    assertThatThrownBy(() -> new ConfidenceChoiceSilhouettes.Options(0.5, 0.75, 0.85, 0.6))
+    assertThatThrownBy(() -> new ConfidenceChoiceSilhouettes.Options(0.5, 0.75, 0.85, 0.6, 0.9, 0.15))
         .isInstanceOf(IllegalArgumentException.class);
   }
 
