@@ -12,6 +12,7 @@ import org.apache.spark.sql.Dataset;
 import org.apache.spark.sql.Encoders;
 import org.apache.spark.sql.Row;
 import org.apache.spark.sql.SparkSession;
+import org.apache.spark.storage.StorageLevel;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.indexer.library.AnalysisSetup.SilhouetteMode;
@@ -115,7 +116,13 @@ public final class AnalyseJob implements Callable<Integer> {
     }
     Dataset<Row> analysed = files.mapPartitions(new PartitionAnalysis(settings, root),
         Encoders.row(AnalysisColumn.schema()));
-    analysed.orderBy(AnalysisColumn.PATH.key).write().parquet(out);
+    // Sorting by path samples the analysed rows first: kept (memory, else local disk), the files are analysed once.
+    analysed = analysed.persist(StorageLevel.MEMORY_AND_DISK());
+    try {
+      analysed.orderBy(AnalysisColumn.PATH.key).write().parquet(out);
+    } finally {
+      analysed.unpersist();
+    }
     Dataset<Row> written = spark.read().parquet(out);
     long failed = written.filter(written.col(AnalysisColumn.FAILURE_KIND.key).isNotNull()).count();
     return new Outcome(written.count() - failed, failed, settings.silhouettes());
