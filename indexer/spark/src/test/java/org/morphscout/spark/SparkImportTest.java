@@ -204,6 +204,47 @@ class SparkImportTest {
     }
   }
 
+  @Test
+  void picturesMovedBeforeTheJobKeepTheirIdentityAndDecisions() throws IOException {
+    Path before = Files.createDirectories(tmp.resolve("shelf-before"));
+    List<Path> pictures;
+    try (Stream<Path> s = Files.walk(demo)) {
+      pictures = s.filter(p -> p.getFileName().toString().endsWith(".jpg")).sorted().limit(4).toList();
+    }
+    for (int i = 0; i < pictures.size(); i++) {
+      Files.copy(pictures.get(i), before.resolve("view-" + i + ".jpg"));
+    }
+    Path catalog = tmp.resolve("moves");
+    try (Library library = Library.open(catalog)) {
+      new LibraryIndexer(library, SETUP, IndexOptions.defaults())
+          .index(List.of(before), ProgressListener.NONE, CancellationToken.none());
+      long a = library.require(before.resolve("view-0.jpg").toString()).id();
+      long b = library.require(before.resolve("view-1.jpg").toString()).id();
+      library.decisions().decide(a, b, org.morphscout.indexer.values.DecisionKind.REJECTED, "moved later");
+
+      Path after = tmp.resolve("shelf-after");
+      Files.move(before, after);
+      Path list = tmp.resolve("moved-files.txt"); // the job's --list input: one path a line
+      try (Stream<Path> s = Files.list(after)) {
+        Files.write(list, s.sorted().map(Path::toString).toList());
+      }
+      Path out = tmp.resolve("moved-parquet");
+      AnalyseJob.Outcome outcome = AnalyseJob.run(spark, List.of(), Optional.of(list.toString()), out.toString(),
+          AnalysisSetup.SilhouetteMode.CLASSICAL, new ModelFolder(tmp.resolve("no-models")), 0);
+      assertThat(outcome.analysed()).isEqualTo(4);
+
+      ImportReport report = new AnalysisImporter(library, IndexOptions.defaults())
+          .importFrom(new ParquetAnalyses(), out, ProgressListener.NONE, CancellationToken.none());
+      assertThat(report.moved()).isEqualTo(4);
+      assertThat(report.added()).isZero();
+      assertThat(library.require(after.resolve("view-0.jpg").toString()).id()).isEqualTo(a);
+      assertThat(library.decisions().find(a, b)).hasValueSatisfying(d -> {
+        assertThat(d.kind()).isEqualTo(org.morphscout.indexer.values.DecisionKind.REJECTED);
+        assertThat(d.note()).isEqualTo("moved later");
+      });
+    }
+  }
+
   private static Map<String, ImageRow> byPath(Library library) {
     Map<String, ImageRow> rows = new TreeMap<>();
     library.images().all().forEach(r -> rows.put(r.path(), r));
