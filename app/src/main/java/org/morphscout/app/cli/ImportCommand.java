@@ -13,7 +13,6 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.library.AnalysisImporter;
 import org.morphscout.indexer.library.ImportReport;
 import org.morphscout.indexer.library.IndexOptions;
-import org.morphscout.indexer.library.IndexReport;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.library.OutsideAnalyses;
 import org.morphscout.indexer.progress.CancellationToken;
@@ -102,15 +101,7 @@ final class ImportCommand implements Callable<Integer> {
     out.printf("%s %d added, %d unchanged, %d moved, %d failed in %s s%n",
         r.cancelled() ? "cancelled after" : "done:", r.added(), r.unchanged(), r.moved(), r.failures().size(),
         Text.num(r.elapsed().toMillis() / 1000.0, 1));
-    if (r.replaced() > 0) {
-      out.printf("%d paths now hold a different picture; decisions stay with the pictures judged, not the paths%n",
-          r.replaced());
-    }
-    if (!r.failures().isEmpty()) {
-      out.println("failures (as the job reported them):");
-      for (IndexReport.FileFailure f : r.failures()) {
-        out.printf("  %s%n    %s%n", Terminal.safe(f.path()), Terminal.safe(f.reason()));
-      }
-    }
+    IndexCommand.printReplaced(out, r.replaced());
+    IndexCommand.printFailures(out, "failures (as the job reported them):", r.failures());
   }
 }

@@ -144,16 +144,26 @@ final class IndexCommand implements Callable<Integer> {
     out.printf("%s %d indexed, %d unchanged, %d moved, %d missing, %d failed in %s s%n",
         r.cancelled() ? "cancelled after" : "done:", r.indexed(), r.unchanged(), r.moved(), r.missing(), r.failed(),
         Text.num(r.elapsed().toMillis() / 1000.0, 1));
-    if (r.replaced() > 0) {
-      out.printf("%d paths now hold a different picture; decisions stay with the pictures judged, not the paths%n",
-          r.replaced());
-    }
+    printReplaced(out, r.replaced());
     if (r.vectorsRestored() > 0) {
       out.printf("vector index: %d images restored from the catalog%n", r.vectorsRestored());
     }
-    if (!r.failures().isEmpty()) {
-      out.println("failures:");
-      for (IndexReport.FileFailure f : r.failures()) {
+    printFailures(out, "failures:", r.failures());
+  }
+
+  /** The line both index and import print when paths now hold other pictures. */
+  static void printReplaced(PrintWriter out, int replaced) {
+    if (replaced > 0) {
+      out.printf("%d paths now hold a different picture; decisions stay with the pictures judged, not the paths%n",
+          replaced);
+    }
+  }
+
+  /** Failed files under a title, each path then its reason, escaped for the terminal. */
+  static void printFailures(PrintWriter out, String title, List<IndexReport.FileFailure> failures) {
+    if (!failures.isEmpty()) {
+      out.println(title);
+      for (IndexReport.FileFailure f : failures) {
         out.printf("  %s%n    %s%n", Terminal.safe(f.path()), Terminal.safe(f.reason()));
       }
     }
