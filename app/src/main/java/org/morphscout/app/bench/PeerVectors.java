@@ -12,7 +12,8 @@ import java.util.Locale;
  * Writes the vectors and queries of one {@link VectorSearchBenchmark} configuration, and our own figures on them, for
  * the script that runs other HNSW and exact-search libraries on exactly the same data ({@code scripts/vector-peers}).
  * Files in {@code dir}: {@code base-N-D.f32} and {@code queries-N-D.f32} (row-major little-endian float32, N x D and
- * Q x D) and {@code ours-N-D.json} (recall@k and single-thread latency per candidate count).
+ * Q x D) and {@code ours-N-D.json} (recall@k, single-thread latency and the querying thread's CPU time per candidate
+ * count).
  */
 public final class PeerVectors {
   private PeerVectors() {}
@@ -31,8 +32,8 @@ public final class PeerVectors {
     for (int i = 0; i < result.probes().size(); i++) {
       VectorSearchBenchmark.Probe p = result.probes().get(i);
       json.append(i == 0 ? "" : ", ").append(String.format(Locale.ROOT,
-          "{\"candidates\": %d, \"recall\": %.4f, \"p50Ms\": %.4f, \"p99Ms\": %.4f}", p.candidates(), p.recall(),
-          p.knn().p50Ms(), p.knn().p99Ms()));
+          "{\"candidates\": %d, \"recall\": %.4f, \"p50Ms\": %.4f, \"p99Ms\": %.4f, \"cpuP50Ms\": %.4f}",
+          p.candidates(), p.recall(), p.knn().p50Ms(), p.knn().p99Ms(), p.knnCpu().p50Ms()));
     }
     json.append(String.format(Locale.ROOT, "], \"scanP50Ms\": %.4f}%n", result.scan().p50Ms()));
     Files.writeString(dir.resolve("ours-" + tag + ".json"), json);

@@ -15,9 +15,13 @@ import org.apache.lucene.document.StringField;
 import org.apache.lucene.index.DocValues;
 import org.apache.lucene.index.FieldInfo;
 import org.apache.lucene.index.IndexReader;
+import org.apache.lucene.index.LeafReader;
 import org.apache.lucene.index.LeafReaderContext;
 import org.apache.lucene.index.NumericDocValues;
+import org.apache.lucene.index.PostingsEnum;
 import org.apache.lucene.index.Term;
+import org.apache.lucene.index.Terms;
+import org.apache.lucene.index.TermsEnum;
 import org.apache.lucene.index.VectorSimilarityFunction;
 import org.apache.lucene.search.BooleanClause.Occur;
 import org.apache.lucene.search.BooleanQuery;
@@ -27,6 +31,7 @@ import org.apache.lucene.search.Query;
 import org.apache.lucene.search.TermInSetQuery;
 import org.apache.lucene.util.Bits;
 import org.apache.lucene.util.BytesRef;
+import org.apache.lucene.util.FixedBitSet;
 import org.morphscout.indexer.vector.VectorIndex.Field;
 
 /**
@@ -56,6 +61,43 @@ final class LuceneSchema {
       terms.add(new BytesRef(Long.toString(id)));
     }
     return terms;
+  }
+
+  /**
+   * The documents of {@code leaf} a search may return: the live ones minus those of the {@code exclude} ids, or null
+   * (Lucene's "all") when nothing is deleted or excluded. One term look-up per excluded id, so meant for a few ids.
+   */
+  static Bits acceptDocs(LeafReader leaf, Set<Long> exclude) throws IOException {
+    Bits live = leaf.getLiveDocs();
+    Terms terms = exclude.isEmpty() ? null : leaf.terms(ID_TERM);
+    if (terms == null) {
+      return live;
+    }
+    FixedBitSet excluded = new FixedBitSet(leaf.maxDoc());
+    TermsEnum ids = terms.iterator();
+    PostingsEnum docs = null;
+    for (BytesRef id : idTerms(exclude)) {
+      if (ids.seekExact(id)) {
+        docs = ids.postings(docs, PostingsEnum.NONE);
+        for (int d = docs.nextDoc(); d != DocIdSetIterator.NO_MORE_DOCS; d = docs.nextDoc()) {
+          excluded.set(d);
+        }
+      }
+    }
+    if (excluded.cardinality() == 0) {
+      return live;
+    }
+    return new Bits() {
+      @Override
+      public boolean get(int doc) {
+        return !excluded.get(doc) && (live == null || live.get(doc));
+      }
+
+      @Override
+      public int length() {
+        return excluded.length();
+      }
+    };
   }
 
   /**

@@ -11,9 +11,13 @@ import org.apache.lucene.codecs.KnnVectorsFormat;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
+import org.apache.lucene.index.LeafReader;
+import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.search.AcceptDocs;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.KnnFloatVectorQuery;
 import org.apache.lucene.search.Query;
+import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.store.Directory;
@@ -206,8 +210,24 @@ public final class LuceneVectorIndex implements VectorIndex {
     }
   }
 
+  /**
+   * Up to this many excluded ids, a search asks each segment's graph directly; beyond, it goes through Lucene's
+   * {@link KnnFloatVectorQuery}, which switches to an exact scan by itself when a filter leaves few documents.
+   */
+  static final int DIRECT_EXCLUDE_LIMIT = 64;
+
   @Override
   public List<Hit> search(Field field, float[] query, int k, Set<Long> exclude) throws IOException {
+    return search(field, query, k, exclude, exclude.size() <= DIRECT_EXCLUDE_LIMIT);
+  }
+
+  /**
+   * @param direct whether to search each segment's graph directly ({@link #graphCandidates}) rather than through
+   *     Lucene's query machinery ({@link #queryCandidates}); both give the same candidates, the direct way without
+   *     a query rewrite, weight, scorer and collector per search (about a tenth of a query's CPU time at small
+   *     candidate counts: docs/BENCHMARKS.md, "Where a query's time goes")
+   */
+  List<Hit> search(Field field, float[] query, int k, Set<Long> exclude, boolean direct) throws IOException {
     Objects.requireNonNull(field, "field");
     int candidates = options.candidates(k);
     IndexSearcher searcher = searchers.acquire();
@@ -221,12 +241,42 @@ public final class LuceneVectorIndex implements VectorIndex {
       }
       float[] unitQuery = VectorMath.unitCopy(query, "The " + FieldDimensions.label(field) + " query vector");
       String name = LuceneSchema.fieldName(field);
-      Query knn = new KnnFloatVectorQuery(name, unitQuery, candidates, LuceneSchema.excludeFilter(exclude));
-      TopDocs top = searcher.search(knn, candidates);
-      return ExactRescorer.rescore(searcher, top.scoreDocs, name, unitQuery, k);
+      ScoreDoc[] found = direct
+          ? graphCandidates(searcher, name, unitQuery, candidates, exclude)
+          : queryCandidates(searcher, name, unitQuery, candidates, exclude);
+      return ExactRescorer.rescore(searcher, found, name, unitQuery, k);
     } finally {
       searchers.release(searcher);
     }
+  }
+
+  /** The best {@code candidates} by Lucene's {@link KnnFloatVectorQuery} with the exclusions as a filter. */
+  private static ScoreDoc[] queryCandidates(IndexSearcher searcher, String name, float[] unitQuery, int candidates,
+      Set<Long> exclude) throws IOException {
+    Query knn = new KnnFloatVectorQuery(name, unitQuery, candidates, LuceneSchema.excludeFilter(exclude));
+    return searcher.search(knn, candidates).scoreDocs;
+  }
+
+  /**
+   * The best {@code candidates}: each segment's HNSW graph searched for {@code candidates} (live, not excluded)
+   * documents, the segments' lists merged by score. What the query does for a handful of segments, without its
+   * per-search objects.
+   */
+  private static ScoreDoc[] graphCandidates(IndexSearcher searcher, String name, float[] unitQuery, int candidates,
+      Set<Long> exclude) throws IOException {
+    List<LeafReaderContext> leaves = searcher.getIndexReader().leaves();
+    TopDocs[] perLeaf = new TopDocs[leaves.size()];
+    for (int i = 0; i < perLeaf.length; i++) {
+      LeafReaderContext leaf = leaves.get(i);
+      LeafReader reader = leaf.reader();
+      TopDocs top = reader.searchNearestVectors(name, unitQuery, candidates,
+          AcceptDocs.fromLiveDocs(LuceneSchema.acceptDocs(reader, exclude), reader.maxDoc()), Integer.MAX_VALUE);
+      for (ScoreDoc sd : top.scoreDocs) {
+        sd.doc += leaf.docBase;
+      }
+      perLeaf[i] = top;
+    }
+    return perLeaf.length == 1 ? perLeaf[0].scoreDocs : TopDocs.merge(candidates, perLeaf).scoreDocs;
   }
 
   @Override

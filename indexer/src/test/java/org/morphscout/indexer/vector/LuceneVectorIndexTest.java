@@ -41,6 +41,37 @@ class LuceneVectorIndexTest extends VectorIndexContractTest {
   }
 
   @Test
+  void theDirectGraphSearchFindsWhatTheQueryFinds() throws IOException {
+    // The direct per-segment search against the plain reference (Lucene's KnnFloatVectorQuery), on four segments
+    // with replaced and deleted images, with and without exclusions. Per segment both run the same graph search, so
+    // the answers agree exactly; only the merging of segments' lists differs in code.
+    float[][] vectors = new float[800][];
+    for (int batch = 0; batch < 4; batch++) {
+      float[][] part = fill(batch * 200L, 200); // each commit writes a segment
+      System.arraycopy(part, 0, vectors, batch * 200, 200);
+    }
+    for (long id = 5; id < 800; id += 37) {
+      index.delete(id);
+    }
+    for (long id = 11; id < 800; id += 53) {
+      vectors[(int) id] = TestVectors.randomUnit(random, APPEARANCE_DIM);
+      index.upsert(id, vectors[(int) id], TestVectors.randomUnit(random, SHAPE_DIM));
+    }
+    index.commit();
+    LuceneVectorIndex lucene = (LuceneVectorIndex) index;
+    for (int q = 0; q < 40; q++) {
+      float[] query = TestVectors.randomUnit(random, APPEARANCE_DIM);
+      int k = 1 + q % 25;
+      Set<Long> exclude = q % 2 == 0 ? Set.of() : Set.of((long) q, (long) q + 100, 999L, (long) q * 7 % 800);
+      List<Hit> direct = lucene.search(Field.APPEARANCE, query, k, exclude, true);
+      List<Hit> reference = lucene.search(Field.APPEARANCE, query, k, exclude, false);
+      assertThat(direct).as(seed() + ", query " + q).isEqualTo(reference).hasSize(k);
+      assertThat(direct).extracting(Hit::id).noneMatch(exclude::contains).noneMatch(id -> id % 37 == 5);
+    }
+    assertThat(lucene.search(Field.APPEARANCE, vectors[11], 1, Set.of())).extracting(Hit::id).containsExactly(11L);
+  }
+
+  @Test
   void aSecondWriterOnTheSameFolderIsToldTheCatalogIsInUse() {
     assertThatThrownBy(() -> LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults()))
         .isInstanceOf(MorphscoutException.class)
