@@ -108,13 +108,13 @@ public final class AnalyseJob implements Callable<Integer> {
       throw new MorphscoutException("nothing to analyse: give a folder, files, or --list FILE");
     }
     JobSettings settings = settings(spark, mode, models);
-    String root = commonFolder(paths);
+    String folder = commonFolder(paths);
     Dataset<Row> files = spark.read().format("binaryFile").option("recursiveFileLookup", "true")
         .load(paths.toArray(String[]::new));
     if (partitions > 0) {
       files = files.repartition(partitions);
     }
-    Dataset<Row> analysed = files.mapPartitions(new PartitionAnalysis(settings, root),
+    Dataset<Row> analysed = files.mapPartitions(new PartitionAnalysis(settings, folder),
         Encoders.row(AnalysisColumn.schema()));
     // Sorting by path samples the analysed rows first: kept (memory, else local disk), the files are analysed once.
     analysed = analysed.persist(StorageLevel.MEMORY_AND_DISK());
@@ -144,7 +144,7 @@ public final class AnalyseJob implements Callable<Integer> {
   }
 
   /**
-   * The folder the catalog records as the images' root: the one folder given, else the deepest folder all inputs share.
+   * The folder the catalog records as the images' folder: the one folder given, else the deepest folder all inputs share.
    */
   static String commonFolder(List<String> paths) {
     List<String> names = paths.stream().map(PartitionAnalysis::localPathOrUri).toList();

@@ -15,7 +15,7 @@ enum AnalysisColumn {
   /** The file: a local absolute path, or the URI of a file system the importing machine may not reach. */
   PATH("path", DataTypes.StringType),
   /** The folder the job read (or the common folder of the files it was given). */
-  ROOT("root", DataTypes.StringType),
+  FOLDER("folder", DataTypes.StringType),
   SIZE("size", DataTypes.LongType),
   MTIME_MS("mtimeMs", DataTypes.LongType),
   CONTENT_HASH("contentHash", DataTypes.StringType),

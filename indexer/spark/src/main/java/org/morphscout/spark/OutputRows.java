@@ -18,9 +18,9 @@ final class OutputRows {
   /** An encoded thumbnail and its extension ({@code jpg} or {@code png}). */
   record Thumbnail(byte[] bytes, String extension) {}
 
-  static Row analysed(PartitionAnalysis.FileFacts f, String root, JobSettings settings, ImageAnalysis a,
+  static Row analysed(PartitionAnalysis.FileFacts f, String folder, JobSettings settings, ImageAnalysis a,
       int orientation, Thumbnail thumbnail) {
-    Object[] v = common(f, root, settings, a.modelId(), a.appearance().length);
+    Object[] v = common(f, folder, settings, a.modelId(), a.appearance().length);
     v[AnalysisColumn.WIDTH.ordinal()] = a.width();
     v[AnalysisColumn.HEIGHT.ordinal()] = a.height();
     v[AnalysisColumn.ORIENTATION.ordinal()] = orientation;
@@ -70,19 +70,19 @@ final class OutputRows {
     return RowFactory.create(v);
   }
 
-  static Row failed(PartitionAnalysis.FileFacts f, String root, JobSettings settings, FailureKind.Failure failure) {
-    Object[] v = common(f, root, settings, null, null);
+  static Row failed(PartitionAnalysis.FileFacts f, String folder, JobSettings settings, FailureKind.Failure failure) {
+    Object[] v = common(f, folder, settings, null, null);
     v[AnalysisColumn.FAILURE_KIND.ordinal()] = failure.kind().name();
     v[AnalysisColumn.FAILURE_REASON.ordinal()] = failure.reason();
     v[AnalysisColumn.DECLARED_PIXELS.ordinal()] = failure.declaredPixels();
     return RowFactory.create(v);
   }
 
-  private static Object[] common(PartitionAnalysis.FileFacts f, String root, JobSettings settings, String modelId,
+  private static Object[] common(PartitionAnalysis.FileFacts f, String folder, JobSettings settings, String modelId,
       Integer dimension) {
     Object[] v = new Object[AnalysisColumn.values().length];
     v[AnalysisColumn.PATH.ordinal()] = f.path();
-    v[AnalysisColumn.ROOT.ordinal()] = root;
+    v[AnalysisColumn.FOLDER.ordinal()] = folder;
     v[AnalysisColumn.SIZE.ordinal()] = f.size();
     v[AnalysisColumn.MTIME_MS.ordinal()] = f.mtimeMs();
     v[AnalysisColumn.CONTENT_HASH.ordinal()] = f.contentHash();

@@ -36,7 +36,7 @@ import org.morphscout.indexer.silhouette.Silhouette;
  * {@code _SUCCESS} and hidden files are ignored), in file-name order, which is path order for the job's sorted output.
  */
 public final class ParquetAnalyses implements OutsideAnalyses {
-  private static final List<AnalysisColumn> SUMMARY_COLUMNS = List.of(AnalysisColumn.LAYOUT, AnalysisColumn.ROOT,
+  private static final List<AnalysisColumn> SUMMARY_COLUMNS = List.of(AnalysisColumn.LAYOUT, AnalysisColumn.FOLDER,
       AnalysisColumn.MODEL_ID, AnalysisColumn.DIMENSION, AnalysisColumn.SILHOUETTES);
 
   @Override
@@ -47,7 +47,7 @@ public final class ParquetAnalyses implements OutsideAnalyses {
   @Override
   public Summary check(Path folder) throws IOException {
     long images = 0;
-    String root = null;
+    String jobFolder = null;
     String modelId = "";
     int dimension = 0;
     String silhouettes = null;
@@ -67,7 +67,7 @@ public final class ParquetAnalyses implements OutsideAnalyses {
             throw refused(file, "written by another version of the job (column layout " + layout + ", this "
                 + "Morphscout reads layout " + AnalysisColumn.LAYOUT_VERSION + ")");
           }
-          root = same(file, "root folder", root, g.getString(AnalysisColumn.ROOT.key, 0));
+          jobFolder = same(file, "folder", jobFolder, g.getString(AnalysisColumn.FOLDER.key, 0));
           silhouettes = same(file, "silhouettes", silhouettes, g.getString(AnalysisColumn.SILHOUETTES.key, 0));
           if (g.getFieldRepetitionCount(AnalysisColumn.MODEL_ID.key) > 0) {
             modelId = same(file, "appearance model", modelId.isEmpty() ? null : modelId,
@@ -75,6 +75,8 @@ public final class ParquetAnalyses implements OutsideAnalyses {
             dimension = g.getInteger(AnalysisColumn.DIMENSION.key, 0);
           }
         }
+      } catch (MorphscoutException e) {
+        throw e;
       } catch (RuntimeException e) {
         throw damaged(file, e);
       }
@@ -82,7 +84,7 @@ public final class ParquetAnalyses implements OutsideAnalyses {
     if (images == 0) {
       throw new MorphscoutException("nothing to import in " + folder + ": its Parquet files hold no rows");
     }
-    return new Summary(images, root, modelId, dimension, silhouettes);
+    return new Summary(images, jobFolder, modelId, dimension, silhouettes);
   }
 
   @Override

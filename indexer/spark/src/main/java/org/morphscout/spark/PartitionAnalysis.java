@@ -31,11 +31,11 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
   private static final int BATCH = 16;
 
   private final JobSettings settings;
-  private final String root;
+  private final String folder;
 
-  PartitionAnalysis(JobSettings settings, String root) {
+  PartitionAnalysis(JobSettings settings, String folder) {
     this.settings = settings;
-    this.root = root;
+    this.folder = folder;
   }
 
   @Override
@@ -68,7 +68,7 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
     List<FileFacts> facts = new ArrayList<>();
     while (files.hasNext() && prepared.size() < BATCH) {
       Row file = files.next();
-      FileFacts f = FileFacts.of(file, root);
+      FileFacts f = FileFacts.of(file, folder);
       if (!ScanOptions.defaults().countsAsImage(f.name())) {
         continue;
       }
@@ -79,7 +79,7 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
         prepared.add(prepare(worker, f, content));
         facts.add(f);
       } catch (Exception | OutOfMemoryError e) {
-        out.add(OutputRows.failed(f, root, settings, FailureKind.of(e)));
+        out.add(OutputRows.failed(f, folder, settings, FailureKind.of(e)));
       }
     }
     if (prepared.isEmpty()) {
@@ -90,7 +90,7 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
       analyses = worker.finish(prepared);
     } catch (RuntimeException e) {
       for (FileFacts f : facts) {
-        out.add(OutputRows.failed(f, root, settings, new FailureKind.Failure(FailureKind.MODEL_FAILED,
+        out.add(OutputRows.failed(f, folder, settings, new FailureKind.Failure(FailureKind.MODEL_FAILED,
             "appearance model failed: " + e.getMessage())));
       }
       return out;
@@ -99,11 +99,11 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
       ImageAnalysis a = analyses.get(i);
       PreparedImage p = prepared.get(i);
       if (!VectorSync.finite(a.appearance()) || !VectorSync.finite(a.shape().shapeVector())) {
-        out.add(OutputRows.failed(facts.get(i), root, settings, new FailureKind.Failure(FailureKind.INVALID_VECTOR,
+        out.add(OutputRows.failed(facts.get(i), folder, settings, new FailureKind.Failure(FailureKind.INVALID_VECTOR,
             "analysis produced an invalid vector (NaN); please report this file")));
         continue;
       }
-      out.add(OutputRows.analysed(facts.get(i), root, settings, a, p.decoded().orientation(), thumbnail(worker, p)));
+      out.add(OutputRows.analysed(facts.get(i), folder, settings, a, p.decoded().orientation(), thumbnail(worker, p)));
     }
     return out;
   }
@@ -138,7 +138,7 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
 
   /** What the binary-file source tells about one file. */
   record FileFacts(String path, String name, long size, long mtimeMs, String contentHash) {
-    static FileFacts of(Row file, String root) {
+    static FileFacts of(Row file, String folder) {
       String uri = file.getAs("path");
       String path = localPathOrUri(uri);
       String name = path.substring(path.lastIndexOf('/') + 1);

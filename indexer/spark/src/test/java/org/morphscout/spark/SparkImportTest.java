@@ -186,6 +186,11 @@ class SparkImportTest {
     Path foreign = tmp.resolve("foreign");
     spark.range(5).toDF("n").write().parquet(foreign.toString());
 
+    Path later = tmp.resolve("later-layout"); // our columns, written by a later version of the job
+    spark.read().parquet(parquet.toString())
+        .withColumn(AnalysisColumn.LAYOUT.key, org.apache.spark.sql.functions.lit(AnalysisColumn.LAYOUT_VERSION + 1))
+        .write().parquet(later.toString());
+
     Path catalog = tmp.resolve("kept");
     copyTree(imported, catalog);
     try (Library library = Library.open(catalog)) {
@@ -199,6 +204,9 @@ class SparkImportTest {
       assertThatThrownBy(() -> importer.importFrom(new ParquetAnalyses(), foreign, ProgressListener.NONE,
           CancellationToken.none()))
           .isInstanceOf(MorphscoutException.class).hasMessageContaining("not Morphscout analysis output");
+      assertThatThrownBy(() -> importer.importFrom(new ParquetAnalyses(), later, ProgressListener.NONE,
+          CancellationToken.none()))
+          .isInstanceOf(MorphscoutException.class).hasMessageContaining("written by another version of the job");
       assertThat(library.images().withStatus(ImageStatus.READY)).hasSize(ready);
       assertThat(pairs(library)).isEqualTo(before);
     }

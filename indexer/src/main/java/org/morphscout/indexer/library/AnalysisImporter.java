@@ -62,7 +62,7 @@ public final class AnalysisImporter {
       try (VectorIndex index = opened.index()) {
         // The catalog is the source of truth: restore what a crash lost before adding to it.
         VectorSync.sync(library.features(), index, summary.modelId(), opened.fresh(), new ArrayList<>());
-        long rootId = library.images().ensureRoot(rootName(summary.root()));
+        long rootId = library.images().ensureRoot(rootName(summary.folder()));
         progress.phase("importing", summary.images());
         long done = 0;
         try (Stream<OutsideAnalysis> rows = source.read(folder)) {
@@ -129,11 +129,11 @@ public final class AnalysisImporter {
   }
 
   /** A {@code file:} URI becomes the local path {@code index} would store; other URIs stay as they are. */
-  static String rootName(String root) {
-    if (root.startsWith("file:")) {
-      return Path.of(URI.create(root)).toAbsolutePath().normalize().toString();
+  static String rootName(String folder) {
+    if (folder.startsWith("file:")) {
+      return Path.of(URI.create(folder)).toAbsolutePath().normalize().toString();
     }
-    return root.contains("://") ? root : Path.of(root).toAbsolutePath().normalize().toString();
+    return folder.contains("://") ? folder : Path.of(folder).toAbsolutePath().normalize().toString();
   }
 
   /** Stores one batch in one transaction (thumbnails first, vectors after the commit). */

@@ -15,13 +15,13 @@ public interface OutsideAnalyses {
    * What a folder of outside analyses holds, checked before anything is stored.
    *
    * @param images how many files it describes (analysed and failed)
-   * @param root the folder the job read, as it named it
+   * @param folder the folder the job read, as it named it
    * @param modelId the appearance model every analysis was made with
    * @param dimension the appearance vector's length
    * @param silhouettes the silhouettes every analysis used, in the catalog's words ({@code classical}, {@code auto},
    *     {@code learned})
    */
-  record Summary(long images, String root, String modelId, int dimension, String silhouettes) {}
+  record Summary(long images, String folder, String modelId, int dimension, String silhouettes) {}
 
   /** One word for the format, used in messages (for example "Parquet"). */
   String format();
