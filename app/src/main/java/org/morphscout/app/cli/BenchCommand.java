@@ -190,8 +190,7 @@ final class BenchCommand implements Callable<Integer> {
     long start = System.nanoTime();
     Report r = new Report();
     try {
-      String args = String.join(" ", spec.commandLine().getParseResult().originalArgs());
-      r.header(MachineInfo.current(), "./morphscout " + (args.startsWith("bench") ? args : "bench " + args), quick);
+      header(r, quick);
       status("indexing " + photoCount + " photos");
       IndexingBenchmark.Result indexing = IndexingBenchmark.run(photoDir, scratch.resolve("indexing"));
       long photoBytes = 0;
@@ -269,8 +268,7 @@ final class BenchCommand implements Callable<Integer> {
     long start = System.nanoTime();
     Report r = new Report();
     try {
-      String args = String.join(" ", spec.commandLine().getParseResult().originalArgs());
-      r.header(MachineInfo.current(), "./morphscout " + (args.startsWith("bench") ? args : "bench " + args), false);
+      header(r, false);
       status("indexing " + photoCount + " photos of 12 megapixels against decoding alone, 1 to "
           + threads.getLast() + " threads");
       r.decodeFloor(IndexingBenchmark.scaling(photoDir, scratch.resolve("indexing"), threads, modes),
@@ -290,8 +288,7 @@ final class BenchCommand implements Callable<Integer> {
     long start = System.nanoTime();
     Report r = new Report();
     try {
-      String args = String.join(" ", spec.commandLine().getParseResult().originalArgs());
-      r.header(MachineInfo.current(), "./morphscout " + (args.startsWith("bench") ? args : "bench " + args), false);
+      header(r, false);
       if (storedPairSizes != null) {
         List<StoredPairsBenchmark.Result> results = new ArrayList<>();
         for (int n : storedPairSizes) {
@@ -795,5 +792,11 @@ final class BenchCommand implements Callable<Integer> {
     public String toString() {
       return md.toString();
     }
+  }
+
+  /** The report's header: the machine and the command line as typed. */
+  private void header(Report r, boolean quick) {
+    String args = String.join(" ", spec.commandLine().getParseResult().originalArgs());
+    r.header(MachineInfo.current(), "./morphscout " + (args.startsWith("bench") ? args : "bench " + args), quick);
   }
 }
