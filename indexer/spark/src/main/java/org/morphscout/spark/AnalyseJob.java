@@ -17,6 +17,7 @@ import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.library.AnalysisSetup;
 import org.morphscout.indexer.library.AnalysisSetup.SilhouetteMode;
 import org.morphscout.indexer.library.AnalyzerFactory;
+import org.morphscout.indexer.library.OutsideAnalysis;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
 import picocli.CommandLine;
@@ -123,9 +124,11 @@ public final class AnalyseJob implements Callable<Integer> {
     } finally {
       analysed.unpersist();
     }
-    Dataset<Row> written = spark.read().parquet(out);
-    long failed = written.filter(written.col(AnalysisColumn.FAILURE_KIND.key).isNotNull()).count();
-    return new Outcome(written.count() - failed, failed, settings.silhouettes());
+    Row counts = spark.read().parquet(out).agg(org.apache.spark.sql.functions.count(
+        org.apache.spark.sql.functions.lit(1)), org.apache.spark.sql.functions.count(AnalysisColumn.FAILURE_KIND.key))
+        .first(); // one pass: count(column) counts its non-null values
+    long failed = counts.getLong(1);
+    return new Outcome(counts.getLong(0) - failed, failed, settings.silhouettes());
   }
 
   /** Finds and verifies the learned model on the submitting machine and ships it to the workers. */
@@ -147,7 +150,7 @@ public final class AnalyseJob implements Callable<Integer> {
    * The folder the catalog records as the images' folder: the one folder given, else the deepest folder all inputs share.
    */
   static String commonFolder(List<String> paths) {
-    List<String> names = paths.stream().map(PartitionAnalysis::localPathOrUri).toList();
+    List<String> names = paths.stream().map(OutsideAnalysis::catalogName).toList();
     if (names.size() == 1 && !names.get(0).contains("://") && Files.isDirectory(Path.of(names.get(0)))) {
       return names.get(0);
     }

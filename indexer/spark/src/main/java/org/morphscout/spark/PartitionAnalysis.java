@@ -1,7 +1,6 @@
 package org.morphscout.spark;
 
 import java.io.IOException;
-import java.net.URI;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Timestamp;
@@ -19,6 +18,7 @@ import org.morphscout.indexer.ingest.ContentHash;
 import org.morphscout.indexer.ingest.DecodedImage;
 import org.morphscout.indexer.ingest.ScanOptions;
 import org.morphscout.indexer.library.FailureKind;
+import org.morphscout.indexer.library.OutsideAnalysis;
 import org.morphscout.indexer.library.VectorSync;
 
 /**
@@ -29,6 +29,7 @@ import org.morphscout.indexer.library.VectorSync;
 final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
   private static final long serialVersionUID = 1L;
   private static final int BATCH = 16;
+  private static final ScanOptions IMAGES = ScanOptions.defaults();
 
   private final JobSettings settings;
   private final String folder;
@@ -69,7 +70,7 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
     while (files.hasNext() && prepared.size() < BATCH) {
       Row file = files.next();
       FileFacts f = FileFacts.of(file, folder);
-      if (!ScanOptions.defaults().countsAsImage(f.name())) {
+      if (!IMAGES.countsAsImage(f.name())) {
         continue;
       }
       byte[] content = file.getAs("content");
@@ -140,7 +141,7 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
   record FileFacts(String path, String name, long size, long mtimeMs, String contentHash) {
     static FileFacts of(Row file, String folder) {
       String uri = file.getAs("path");
-      String path = localPathOrUri(uri);
+      String path = OutsideAnalysis.catalogName(uri);
       String name = path.substring(path.lastIndexOf('/') + 1);
       Timestamp mtime = file.getAs("modificationTime");
       long length = file.getAs("length");
@@ -152,11 +153,4 @@ final class PartitionAnalysis implements MapPartitionsFunction<Row, Row> {
     }
   }
 
-  /** A {@code file:} URI becomes the absolute local path {@code index} stores; other URIs stay as they are. */
-  static String localPathOrUri(String uri) {
-    if (uri.startsWith("file:")) {
-      return Path.of(URI.create(uri)).toAbsolutePath().normalize().toString();
-    }
-    return uri;
-  }
 }

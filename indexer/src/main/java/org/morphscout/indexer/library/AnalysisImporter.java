@@ -1,7 +1,6 @@
 package org.morphscout.indexer.library;
 
 import java.io.IOException;
-import java.net.URI;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
@@ -62,7 +61,7 @@ public final class AnalysisImporter {
       try (VectorIndex index = opened.index()) {
         // The catalog is the source of truth: restore what a crash lost before adding to it.
         VectorSync.sync(library.features(), index, summary.modelId(), opened.fresh(), new ArrayList<>());
-        long rootId = library.images().ensureRoot(rootName(summary.folder()));
+        long rootId = library.images().ensureRoot(OutsideAnalysis.catalogName(summary.folder()));
         progress.phase("importing", summary.images());
         long done = 0;
         try (Stream<OutsideAnalysis> rows = source.read(folder)) {
@@ -112,7 +111,7 @@ public final class AnalysisImporter {
     Optional<String> activeModel = LibrarySettings.activeModel(library.features());
     Optional<String> activeSilhouettes = library.features().setting(LibrarySettings.ACTIVE_SILHOUETTES)
         .map(s -> s.equals("default") ? "classical" : s);
-    boolean holdsImages = !library.images().withStatus(ImageStatus.READY).isEmpty();
+    boolean holdsImages = library.countsByStatus().getOrDefault(ImageStatus.READY, 0) > 0;
     if (holdsImages && activeModel.isPresent() && !activeModel.get().equals(summary.modelId())) {
       throw new MorphscoutException("cannot import " + folder + ": its analyses use the appearance model "
           + summary.modelId() + ", this catalog uses " + activeModel.get() + " (import into a new catalog, or run the "
@@ -128,21 +127,13 @@ public final class AnalysisImporter {
     library.features().putSetting(LibrarySettings.ACTIVE_SILHOUETTES, summary.silhouettes());
   }
 
-  /** A {@code file:} URI becomes the local path {@code index} would store; other URIs stay as they are. */
-  static String rootName(String folder) {
-    if (folder.startsWith("file:")) {
-      return Path.of(URI.create(folder)).toAbsolutePath().normalize().toString();
-    }
-    return folder.contains("://") ? folder : Path.of(folder).toAbsolutePath().normalize().toString();
-  }
-
   /** Stores one batch in one transaction (thumbnails first, vectors after the commit). */
   private void store(List<OutsideAnalysis> batch, long rootId, VectorIndex index, Counts counts) throws IOException {
     ImageStore images = library.images();
     List<Planned> planned = new ArrayList<>(batch.size());
     List<Long> evicted = new ArrayList<>();
     for (OutsideAnalysis a : batch) {
-      String path = rootName(a.path());
+      String path = OutsideAnalysis.catalogName(a.path());
       Optional<ImageRow> atPath = images.byPath(path);
       if (atPath.isPresent()) {
         ImageRow row = atPath.get();
@@ -199,6 +190,7 @@ public final class AnalysisImporter {
         } else {
           FailureKind.Failure f = a.failure();
           images.markFailed(id, f.reason(), f.kind().name(), f.declaredPixels());
+          counts.failedIds.add(id);
         }
       }
       return null;
@@ -212,7 +204,6 @@ public final class AnalysisImporter {
       }
       if (!p.analysis.analysed()) {
         counts.failures.add(new IndexReport.FileFailure(p.path, p.analysis.failure().reason()));
-        images.byPath(p.path).ifPresent(r -> counts.failedIds.add(r.id()));
       }
     }
     for (int i = 0; i < ready.size(); i++) {

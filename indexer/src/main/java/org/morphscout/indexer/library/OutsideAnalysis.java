@@ -33,6 +33,18 @@ public record OutsideAnalysis(String path, long size, long mtimeMs, String conte
     thumbnailExtension = thumbnailExtension == null ? "" : thumbnailExtension;
   }
 
+  /**
+   * How the catalog names a file or folder the job named: a {@code file:} URI or a plain path becomes the absolute,
+   * normalised local path {@code index} would store; a URI of another file system ({@code hdfs://...}) stays as it is.
+   */
+  public static String catalogName(String pathOrUri) {
+    if (pathOrUri.startsWith("file:")) {
+      return java.nio.file.Path.of(java.net.URI.create(pathOrUri)).toAbsolutePath().normalize().toString();
+    }
+    return pathOrUri.contains("://") ? pathOrUri
+        : java.nio.file.Path.of(pathOrUri).toAbsolutePath().normalize().toString();
+  }
+
   /** Whether the file was analysed (else it failed). */
   public boolean analysed() {
     return analysis != null;
