@@ -168,7 +168,7 @@ final class ChainCommand implements Callable<Integer> {
       return;
     }
     if (format.csv) {
-      try (CsvOut csv = new CsvOut(out, "chain", "step", "a", "b", "cost", "appearance", "aligned_iou",
+      try (CsvOut csv = new CsvOut(out, "chain", "step", "first", "second", "cost", "appearance", "aligned_iou",
           "mean_displacement", "colour_gap", "score", "verdict")) {
         int n = 0;
         for (ChainDetail d : answer.chains()) {
@@ -176,7 +176,7 @@ final class ChainCommand implements Callable<Integer> {
           int i = 0;
           for (StepDetail s : d.steps()) {
             Map<String, Object> st = step(s, path);
-            csv.row(n, ++i, st.get("a"), st.get("b"), st.get("cost"), st.get("appearance"), st.get("alignedIou"),
+            csv.row(n, ++i, st.get("first"), st.get("second"), st.get("cost"), st.get("appearance"), st.get("alignedIou"),
                 st.get("meanDisplacement"), st.get("colourGap"), st.get("score"), st.get("verdict"));
           }
         }
@@ -211,8 +211,8 @@ final class ChainCommand implements Callable<Integer> {
 
   private static Map<String, Object> step(StepDetail s, java.util.function.LongFunction<String> path) {
     Map<String, Object> m = new LinkedHashMap<>();
-    m.put("a", path.apply(s.a()));
-    m.put("b", path.apply(s.b()));
+    m.put("first", path.apply(s.a()));
+    m.put("second", path.apply(s.b()));
     m.put("cost", PairRows.round(s.cost(), 4));
     m.put("appearance", PairRows.round(s.components().appearanceDistance(), 4));
     m.put("shape", PairRows.round(s.components().shapeIncompatibility(), 4));

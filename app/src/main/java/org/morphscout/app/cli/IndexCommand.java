@@ -29,8 +29,8 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     header = "Add folders to the catalog and analyse new and changed images (incremental).",
     description = {
-      "Registers each folder as a library root and scans it recursively. Unchanged files are skipped; changed files "
-          + "are analysed again; a file moved or renamed inside the roots keeps its identity and your decisions, while a different picture at an "
+      "Registers each folder with the catalog (its folders) and scans it recursively. Unchanged files are skipped; changed files "
+          + "are analysed again; a file moved or renamed inside the folders keeps its identity and your decisions, while a different picture at an "
           + "old path starts with none (reported as replaced); "
           + "deleted files are marked missing, never dropped. Reads JPEG, PNG, TIFF, BMP, GIF (first frame) and WebP; "
           + "applies EXIF orientation and converts colour profiles to sRGB. Files that cannot be read are listed "
@@ -42,7 +42,7 @@ final class IndexCommand implements Callable<Integer> {
   @Mixin AnalysisOptions analysis;
 
   @Parameters(arity = "0..*", paramLabel = "<folder>", description = "Library folders to add and scan (default: the "
-      + "catalog's known roots).")
+      + "catalog's folders).")
   List<Path> folders = new ArrayList<>();
 
   @Option(names = "--json", description = "Write the summary as JSON to stdout (no progress bar).")
@@ -51,7 +51,7 @@ final class IndexCommand implements Callable<Integer> {
   @Option(names = "--threads", paramLabel = "<n>", description = "Worker threads (default: all cores).")
   Integer threads;
 
-  @Option(names = "--follow-links", description = "Also follow symbolic links that lead out of the roots.")
+  @Option(names = "--follow-links", description = "Also follow symbolic links that lead out of the folders.")
   boolean followLinks;
 
   @Option(names = "--rebuild-vectors",
@@ -98,7 +98,7 @@ final class IndexCommand implements Callable<Integer> {
       if (roots.isEmpty()) {
         library.folders().forEach(r -> roots.add(Path.of(r.path())));
         if (roots.isEmpty()) {
-          spec.commandLine().getErr().println("index: name at least one folder to index (the catalog has no roots "
+          spec.commandLine().getErr().println("index: name at least one folder to index (the catalog has no folders "
               + "yet)");
           return ExitCodes.USAGE;
         }

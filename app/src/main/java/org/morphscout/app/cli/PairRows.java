@@ -9,10 +9,10 @@ import org.morphscout.indexer.pairing.PairScore;
 final class PairRows {
   private PairRows() {}
 
-  static Map<String, Object> json(String a, String b, PairScore s) {
+  static Map<String, Object> json(String first, String second, PairScore s) {
     Map<String, Object> row = new LinkedHashMap<>();
-    row.put("a", a);
-    row.put("b", b);
+    row.put("first", first);
+    row.put("second", second);
     row.put("score", round(s.score(), 1));
     row.put("verdict", s.verdict().label());
     row.put("components", rounded(s.components()));

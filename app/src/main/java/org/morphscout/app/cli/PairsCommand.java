@@ -145,7 +145,7 @@ final class PairsCommand implements Callable<Integer> {
       return;
     }
     if (format.csv) {
-      try (CsvOut csv = new CsvOut(out, "a", "b", "score", "verdict", "reasons", "decision")) {
+      try (CsvOut csv = new CsvOut(out, "first", "second", "score", "verdict", "reasons", "decision")) {
         for (ScoredPair p : result.pairs()) {
           csv.row(paths.of(p.a()), paths.of(p.b()), PairRows.round(p.score().score(), 1), p.score().verdict().label(),
               PairRows.reasons(p.score().reasons()),
@@ -170,10 +170,10 @@ final class PairsCommand implements Callable<Integer> {
   private void printDuplicates(PrintWriter out, PairSearchResult result, Paths paths) {
     if (format.json) {
       List<Map<String, String>> rows = new ArrayList<>();
-      result.duplicates().forEach(d -> rows.add(Map.of("a", paths.of(d.a()), "b", paths.of(d.b()))));
+      result.duplicates().forEach(d -> rows.add(Map.of("first", paths.of(d.a()), "second", paths.of(d.b()))));
       JsonOut.write(out, Map.of("duplicates", rows));
     } else if (format.csv) {
-      try (CsvOut csv = new CsvOut(out, "a", "b")) {
+      try (CsvOut csv = new CsvOut(out, "first", "second")) {
         result.duplicates().forEach(d -> csv.row(paths.of(d.a()), paths.of(d.b())));
       }
     } else {

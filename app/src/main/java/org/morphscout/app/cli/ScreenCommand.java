@@ -120,8 +120,8 @@ final class ScreenCommand implements Callable<Integer> {
         @Override
         public void write(ScreenResult r) throws IOException {
           Map<String, Object> row = new LinkedHashMap<>();
-          row.put("a", r.a());
-          row.put("b", r.b());
+          row.put("first", r.a());
+          row.put("second", r.b());
           row.put("verdict", r.verdict().label());
           row.put("score", PairRows.round(r.score(), 1));
           row.put("reasons", r.reasons());
@@ -146,7 +146,7 @@ final class ScreenCommand implements Callable<Integer> {
       };
     }
     if (format.csv) {
-      List<String> header = new ArrayList<>(List.of("a", "b"));
+      List<String> header = new ArrayList<>(List.of("first", "second"));
       header.addAll(extraNames);
       header.addAll(List.of("verdict", "score", "reasons"));
       CsvOut w = new CsvOut(out, header.toArray(String[]::new));

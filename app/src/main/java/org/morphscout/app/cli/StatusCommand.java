@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
 @Command(
     name = "status",
     mixinStandardHelpOptions = true,
-    header = "Show the catalog: roots, counts by status, failures with reasons, size, feature model.",
+    header = "Show the catalog: folders, counts by status, failures with reasons, size, appearance model.",
     description = "Reads the catalog without changing it (also on read-only media); damage in the small tables is "
         + "noticed at every open, --check reads everything.")
 final class StatusCommand implements Callable<Integer> {
@@ -45,7 +45,7 @@ final class StatusCommand implements Callable<Integer> {
     PrintWriter out = spec.commandLine().getOut();
     try (Library library = Library.openForReading(root.catalogDir())) {
       Map<ImageStatus, Integer> counts = library.countsByStatus();
-      List<String> roots = library.folders().stream().map(Folder::path).toList();
+      List<String> folders = library.folders().stream().map(Folder::path).toList();
       List<ImageFailure> failures = library.failures();
       String model = library.activeModel().orElse("none yet");
       long bytes = library.databaseBytes();
@@ -60,14 +60,14 @@ final class StatusCommand implements Callable<Integer> {
         doc.put("pending", counts.get(ImageStatus.PENDING));
         doc.put("failed", counts.get(ImageStatus.FAILED));
         doc.put("missing", counts.get(ImageStatus.MISSING));
-        doc.put("roots", roots);
+        doc.put("folders", folders);
         List<Map<String, String>> fails = new ArrayList<>();
         for (ImageFailure f : failures) {
           fails.add(Map.of("path", f.path(), "reason", f.reason()));
         }
         doc.put("failures", fails);
         doc.put("databaseBytes", bytes);
-        doc.put("featureModel", model);
+        doc.put("model", model);
         doc.put("decisions", library.decisions().count());
         doc.put("silhouettes", Map.of("bySource", silhouettes.bySource(), "uncertain", silhouettes.uncertain()));
         Map<String, Object> stored = new LinkedHashMap<>();
@@ -87,8 +87,8 @@ final class StatusCommand implements Callable<Integer> {
       }
       out.printf("catalog   %s (%s)%n", Terminal.safe(library.dir().toString()), Text.bytes(bytes));
       out.printf("model     %s%n", model);
-      out.printf("roots     %s%n",
-          roots.isEmpty() ? "none" : String.join("\n          ", roots.stream().map(Terminal::safe).toList()));
+      out.printf("folders   %s%n",
+          folders.isEmpty() ? "none" : String.join("\n          ", folders.stream().map(Terminal::safe).toList()));
       out.printf("images    %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
           counts.get(ImageStatus.PENDING), counts.get(ImageStatus.FAILED), counts.get(ImageStatus.MISSING));
       out.printf("decisions %d%n", library.decisions().count());

@@ -57,8 +57,8 @@ class ChainWalkPreviewCommandTest {
       double max = 0;
       for (int i = 0; i < c.get("steps").size(); i++) {
         JsonNode s = c.get("steps").get(i);
-        assertThat(s.get("a").asText()).isEqualTo(images.get(i));
-        assertThat(s.get("b").asText()).isEqualTo(images.get(i + 1));
+        assertThat(s.get("first").asText()).isEqualTo(images.get(i));
+        assertThat(s.get("second").asText()).isEqualTo(images.get(i + 1));
         max = Math.max(max, s.get("cost").asDouble());
       }
       assertThat(c.get("maxStep").asDouble()).isCloseTo(max, org.assertj.core.data.Offset.offset(1e-3));

@@ -149,7 +149,7 @@ class HostileInputCommandTest {
     Files.write(list, bad, java.nio.file.StandardOpenOption.APPEND);
     Cli.Run run = cli.run("screen", list.toString(), "--csv").succeeds();
     assertThat(run.csv()).hasSize(2);
-    assertThat(run.csv().get(0).get("a")).isEqualTo(images.get(0));
+    assertThat(run.csv().get(0).get("first")).isEqualTo(images.get(0));
     assertThat(run.csv().get(0).get("extra1")).as("a passed-through formula").isEqualTo("'=cmd|' /C calc'!A0");
     assertThat(run.csv().get(1).get("verdict")).isEqualTo("fail");
     assertThat(run.csv().get(1).get("reasons")).contains("line 2", "UTF-8");

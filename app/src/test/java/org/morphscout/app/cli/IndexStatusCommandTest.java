@@ -115,11 +115,13 @@ class IndexStatusCommandTest {
   }
 
   @Test
-  void statusCountsImagesFailuresAndRoots() {
+  void statusCountsImagesFailuresAndFolders() {
     JsonNode doc = cli.run("status", "--json").succeeds().json();
     assertThat(doc.get("images").asInt()).isEqualTo(lib.all().size() + 1);
     assertThat(doc.get("failed").asInt()).isEqualTo(1);
-    assertThat(Cli.texts(doc.get("roots"))).containsExactly(Cli.abs(tmp.resolve("library")));
+    assertThat(Cli.texts(doc.get("folders"))).containsExactly(Cli.abs(tmp.resolve("library")));
+    // One key for the appearance model, the one index and import write.
+    assertThat(doc.get("model").asText()).isEqualTo(first.json().get("model").asText());
     // Every ready image's silhouette is counted once, by what made it; the uncertain ones are counted from the
     // stored confidences, read here independently of the command.
     JsonNode silhouettes = doc.get("silhouettes");

@@ -94,8 +94,8 @@ class QueryCommandsTest {
     assertThat(pairs).isNotEmpty().hasSizeLessThanOrEqualTo(30);
     double last = Double.MAX_VALUE;
     for (JsonNode p : pairs) {
-      assertThat(p.get("a").asText()).isNotEqualTo(p.get("b").asText());
-      assertThat(Path.of(p.get("a").asText()).isAbsolute()).isTrue();
+      assertThat(p.get("first").asText()).isNotEqualTo(p.get("second").asText());
+      assertThat(Path.of(p.get("first").asText()).isAbsolute()).isTrue();
       double score = p.get("score").asDouble();
       assertThat(score).isBetween(0.0, 100.0).isLessThanOrEqualTo(last);
       last = score;
@@ -138,14 +138,14 @@ class QueryCommandsTest {
     JsonNode partners = cli.run("pairs", "--candidates", "4", "--for", member, "--json", "--count", "5").succeeds()
         .json().get("pairs");
     assertThat(partners).isNotEmpty().hasSizeLessThanOrEqualTo(5);
-    partners.forEach(p -> assertThat(List.of(p.get("a").asText(), p.get("b").asText())).contains(member));
+    partners.forEach(p -> assertThat(List.of(p.get("first").asText(), p.get("second").asText())).contains(member));
 
     Cli.Run csv = cli.run("pairs", "--candidates", "4", "--csv", "--count", "3").succeeds();
-    assertThat(csv.csvHeader()).startsWith("a", "b", "score", "verdict", "reasons");
+    assertThat(csv.csvHeader()).startsWith("first", "second", "score", "verdict", "reasons");
     List<CSVRecord> rows = csv.csv();
     assertThat(rows).as("--top 3").hasSize(3);
     for (CSVRecord r : rows) {
-      assertThat(Files.isRegularFile(Path.of(r.get("a")))).isTrue();
+      assertThat(Files.isRegularFile(Path.of(r.get("first")))).isTrue();
       assertThat(Double.parseDouble(r.get("score"))).isBetween(0.0, 100.0);
       assertThat(r.get("verdict")).isIn("pass", "warn", "fail");
     }
@@ -158,9 +158,9 @@ class QueryCommandsTest {
         .get("duplicates");
     Set<String> seen = new HashSet<>();
     for (JsonNode d : dupes) {
-      if (group.contains(d.get("a").asText()) && group.contains(d.get("b").asText())) {
-        seen.add(d.get("a").asText());
-        seen.add(d.get("b").asText());
+      if (group.contains(d.get("first").asText()) && group.contains(d.get("second").asText())) {
+        seen.add(d.get("first").asText());
+        seen.add(d.get("second").asText());
       }
     }
     // Every edited copy is found as a near-duplicate inside its group (TestFamilies.nearDuplicates ground truth).
@@ -169,7 +169,7 @@ class QueryCommandsTest {
     JsonNode pairs = cli.run("pairs", "--candidates", "8", "--json", "--count", "500").succeeds().json().get("pairs");
     assertThat(pairs).as("pairs to check against the near-duplicate group").isNotEmpty();
     for (JsonNode p : pairs) {
-      assertThat(group.contains(p.get("a").asText()) && group.contains(p.get("b").asText()))
+      assertThat(group.contains(p.get("first").asText()) && group.contains(p.get("second").asText()))
           .as("near-duplicates proposed as a pair: %s", p).isFalse();
     }
   }
@@ -182,7 +182,7 @@ class QueryCommandsTest {
       // Near-duplicates are the same picture resized, recompressed or lightly edited (pairs --help); the family's
       // members are different vessels, the unrelated pictures other vessels or glazes.
       assertThat(group).as("a listed duplicate pair lies inside the planted group (seed %d): %s", SEED, d)
-          .contains(d.get("a").asText(), d.get("b").asText());
+          .contains(d.get("first").asText(), d.get("second").asText());
     }
   }
 
@@ -200,7 +200,7 @@ class QueryCommandsTest {
     assertThat(lenient.code()).as("without --strict; stderr %s", lenient.err()).isEqualTo(ExitCodes.OK);
     JsonNode results = lenient.json().get("results");
     assertThat(results).hasSize(3);
-    assertThat(results.get(1).get("a").asText()).isEqualTo(Cli.abs(lib.family.get(5)));
+    assertThat(results.get(1).get("first").asText()).isEqualTo(Cli.abs(lib.family.get(5)));
     assertThat(results.get(0).get("extras").get("shot").asText()).isEqualTo("opening");
     assertThat(results.get(2).get("extras").get("shot").asText()).isEqualTo("broken");
     for (JsonNode r : results) {
@@ -216,7 +216,7 @@ class QueryCommandsTest {
     assertThat(strict.code()).isEqualTo(ExitCodes.FINISHED_WITH_FAILURES).isEqualTo(1);
 
     Cli.Run asCsv = cli.run("screen", csv.toString(), "--csv").succeeds();
-    assertThat(asCsv.csvHeader()).containsSubsequence("a", "b", "shot", "verdict", "score", "reasons");
+    assertThat(asCsv.csvHeader()).containsSubsequence("first", "second", "shot", "verdict", "score", "reasons");
     assertThat(asCsv.csv()).extracting(r -> r.get("shot")).containsExactly("opening", "middle", "broken");
     assertThat(asCsv.csv().get(2).get("verdict")).isEqualTo("fail");
 
