@@ -106,7 +106,7 @@ final class BenchCommand implements Callable<Integer> {
   List<Integer> storedPairSizes;
 
   @Option(names = "--pair-cost", paramLabel = "<folder>", description = "Only measure what storing pairs adds to "
-      + "indexing this folder of images (indexed into a scratch catalog with the default analysis), and stop. "
+      + "indexing this folder of images (into a scratch catalog, with index's default settings), and stop. "
       + "Combines with --stored-pairs.")
   Path pairCostFolder;
 
@@ -116,8 +116,8 @@ final class BenchCommand implements Callable<Integer> {
   Integer rescanFiles;
 
   @Option(names = "--silhouette-cost", paramLabel = "<folder>", description = "Only measure what the per-image "
-      + "choice of silhouettes costs: index this folder with the classical extractor alone, then with the default "
-      + "choice, into scratch catalogs; and stop. Combines with --stored-pairs, --pair-cost and --rescan.")
+      + "choice of silhouettes costs: index this folder with the classical extractor alone, then with auto (the "
+      + "per-image choice), into scratch catalogs; and stop. Combines with --stored-pairs, --pair-cost and --rescan.")
   Path silhouetteCostFolder;
 
   @Option(names = "--peers", paramLabel = "<folder>", description = "Only measure our vector search at the --vectors "

@@ -19,13 +19,10 @@ import picocli.CommandLine.Spec;
     name = "browse",
     mixinStandardHelpOptions = true,
     header = "Open the desktop browser on the catalog.",
-    description = {
-      "Opens a window to look through the catalog: a thumbnail grid with filters and similarity search, an",
-      "inspector, chains between two images, pair suggestions to approve or reject (the same decisions the",
-      "decide and decisions commands use), walkthrough ordering, and indexing. Needs a display; press F1 in the",
-      "window for the keyboard shortcuts. When the catalog folder holds no catalog yet, the window says how to",
-      "make one.",
-    })
+    description = "Opens a window to look through the catalog: a thumbnail grid with filters and similarity search, "
+        + "an inspector, chains between two images, pair suggestions to approve or reject (the same decisions the "
+        + "decide and decisions commands use), walks, and indexing. Needs a display; press F1 in the window for the "
+        + "keyboard shortcuts. When the catalog folder holds no catalog yet, the window says how to make one.")
 final class BrowseCommand implements Callable<Integer> {
   private static final Logger LOG = LoggerFactory.getLogger(BrowseCommand.class);
 

@@ -35,7 +35,7 @@ import picocli.CommandLine.Spec;
     header = "Find chains of similar real images between two catalog images, in small even steps.",
     description = "Searches the neighbour graph for the chains with the smallest sum of squared step costs (many small, "
         + "even steps beat a few big ones), within the step bounds, and returns several alternatives that share few "
-        + "images. Each step is scored as a pair. Evenness is the coefficient of variation of the step costs (0 = "
+        + "images. Each step is scored as a pair. Unevenness is the coefficient of variation of the step costs (0 = "
         + "perfectly even). The direct pair's score is shown for comparison.")
 final class ChainCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
@@ -152,9 +152,9 @@ final class ChainCommand implements Callable<Integer> {
           steps.add(step(s, path));
         }
         c.put("steps", steps);
-        c.put("maxStep", PairRows.round(d.chain().maxStep(), 4));
+        c.put("largestStep", PairRows.round(d.chain().maxStep(), 4));
         c.put("unevenness", PairRows.round(d.chain().evenness(), 4));
-        c.put("total", PairRows.round(d.chain().total(), 4));
+        c.put("sumOfSquaredStepCosts", PairRows.round(d.chain().total(), 4));
         c.put("sharedImages", PairRows.round(d.chain().sharedImages(), 4));
         chains.add(c);
       }
@@ -168,7 +168,7 @@ final class ChainCommand implements Callable<Integer> {
       return;
     }
     if (format.csv) {
-      try (CsvOut csv = new CsvOut(out, "chain", "step", "first", "second", "cost", "appearance", "aligned_iou",
+      try (CsvOut csv = new CsvOut(out, "chain", "step", "first", "second", "step_cost", "appearance_distance", "shape_distance", "aligned_iou",
           "mean_displacement", "colour_gap", "score", "verdict")) {
         int n = 0;
         for (ChainDetail d : answer.chains()) {
@@ -176,7 +176,8 @@ final class ChainCommand implements Callable<Integer> {
           int i = 0;
           for (StepDetail s : d.steps()) {
             Map<String, Object> st = step(s, path);
-            csv.row(n, ++i, st.get("first"), st.get("second"), st.get("cost"), st.get("appearance"), st.get("alignedIou"),
+            csv.row(n, ++i, st.get("first"), st.get("second"), st.get("stepCost"), st.get("appearanceDistance"), st.get("shapeDistance"),
+                st.get("alignedIou"),
                 st.get("meanDisplacement"), st.get("colourGap"), st.get("score"), st.get("verdict"));
           }
         }
@@ -197,13 +198,13 @@ final class ChainCommand implements Callable<Integer> {
     int n = 0;
     for (ChainDetail d : answer.chains()) {
       out.printf("%nchain %d: %d steps, largest step %s, unevenness %s, images shared with earlier chains %s%n", ++n,
-          d.steps().size(), Text.num(d.chain().maxStep(), 3), Text.num(d.chain().evenness(), 2),
+          d.steps().size(), Text.step(d.chain().maxStep()), Text.num(d.chain().evenness(), 2),
           Text.num(d.chain().sharedImages(), 2));
       out.printf("  %s%n", Terminal.safe(path.apply(d.chain().images().get(0))));
       for (StepDetail s : d.steps()) {
         Map<String, Object> st = step(s, path);
-        out.printf("    step cost %s | score %s %s | IoU %s, mean displacement %s, colour gap %s%n  %s%n",
-            Text.num(s.cost(), 3), Text.num(s.score().score(), 0), s.score().verdict().label(), st.get("alignedIou"),
+        out.printf("    step cost %s | score %s %s | aligned IoU %s, mean displacement %s, colour gap %s%n  %s%n",
+            Text.step(s.cost()), Text.num(s.score().score(), 0), s.score().verdict().label(), st.get("alignedIou"),
             st.get("meanDisplacement"), st.get("colourGap"), Terminal.safe(path.apply(s.b())));
       }
     }
@@ -213,9 +214,9 @@ final class ChainCommand implements Callable<Integer> {
     Map<String, Object> m = new LinkedHashMap<>();
     m.put("first", path.apply(s.a()));
     m.put("second", path.apply(s.b()));
-    m.put("cost", PairRows.round(s.cost(), 4));
-    m.put("appearance", PairRows.round(s.components().appearanceDistance(), 4));
-    m.put("shape", PairRows.round(s.components().shapeIncompatibility(), 4));
+    m.put("stepCost", PairRows.round(s.cost(), 4));
+    m.put("appearanceDistance", PairRows.round(s.components().appearanceDistance(), 4));
+    m.put("shapeDistance", PairRows.round(s.components().shapeIncompatibility(), 4));
     m.put("alignedIou", PairRows.round(s.score().measures().getOrDefault("alignedIou", Double.NaN), 3));
     m.put("meanDisplacement", PairRows.round(s.score().measures().getOrDefault("meanDisplacement", Double.NaN), 3));
     m.put("colourGap", PairRows.round(s.components().colourGap(), 2));

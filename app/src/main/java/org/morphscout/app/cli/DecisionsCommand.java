@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.library.DecisionTable;
 import org.morphscout.indexer.library.Library;
+import org.morphscout.indexer.text.HumanTime;
 import org.morphscout.indexer.values.Decision;
 import org.morphscout.indexer.values.DecisionKind;
 import picocli.CommandLine.ArgGroup;
@@ -20,7 +21,7 @@ import picocli.CommandLine.Spec;
     mixinStandardHelpOptions = true,
     header = "List your decisions on pairs (newest first), as text, JSON or CSV.",
     description = "The same decisions the desktop browser shows and edits. CSV columns: first, second, decision, note, "
-        + "decided_at (an ISO-8601 instant, UTC); the browser's export of approved pairs writes exactly "
+        + "decided_at (an ISO-8601 instant, UTC; the text shows your local date and time); the browser's export of approved pairs writes exactly "
         + "decisions --only approved --csv (or --json).")
 final class DecisionsCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
@@ -51,8 +52,9 @@ final class DecisionsCommand implements Callable<Integer> {
         out.println(none);
       } else {
         for (Decision d : decisions) {
-          out.printf("%-8s %s%n         %s%s%n", d.kind().word(), Terminal.safe(d.pathA()),
-              Terminal.safe(d.pathB()), d.note() == null ? "" : "\n         note: " + Terminal.safe(d.note()));
+          out.printf("%-8s %s%n         %s%n         decided %s%s%n", d.kind().word(), Terminal.safe(d.pathA()),
+              Terminal.safe(d.pathB()), HumanTime.localIso(d.decidedAt()),
+              d.note() == null ? "" : "\n         note: " + Terminal.safe(d.note()));
         }
       }
       return ExitCodes.OK;

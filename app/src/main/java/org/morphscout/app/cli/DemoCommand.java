@@ -169,7 +169,7 @@ final class DemoCommand implements Callable<Integer> {
       out.println("  no chain: " + chain.reason());
     } else {
       ChainService.ChainDetail c = chain.chains().get(0);
-      out.printf("  %d steps, largest step %s, unevenness %s:%n", c.steps().size(), Text.num(c.chain().maxStep(), 3),
+      out.printf("  %d steps, largest step %s, unevenness %s:%n", c.steps().size(), Text.step(c.chain().maxStep()),
           Text.num(c.chain().evenness(), 2));
       for (long id : c.chain().images()) {
         out.printf("    %s%n", rel(libraryDir, path(library, id)));
@@ -192,11 +192,11 @@ final class DemoCommand implements Callable<Integer> {
       order.append(order.isEmpty() ? "" : " > ").append(name.replaceAll("\\D", ""));
     }
     out.printf("  order: %s%n  total %s, largest step %s, %s%% better than file-name order%n", order,
-        Text.num(walk.result().total(), 3), Text.num(walk.result().largestStep(), 3),
+        Text.step(walk.result().total()), Text.step(walk.result().largestStep()),
         Text.num(100 * walk.result().improvement(), 0));
     Path walkSheet = outputs.resolve("walk-sheet.png");
     Sheets.sequence(library, "Walk of the shelf views", "total step cost "
-        + Text.num(walk.result().total(), 3), walk.images().stream().map(ImageAnalysis::id).toList(), walk.steps(),
+        + Text.step(walk.result().total()), walk.images().stream().map(ImageAnalysis::id).toList(), walk.steps(),
         walkSheet);
     out.printf("  contact sheet: %s%n", walkSheet);
 

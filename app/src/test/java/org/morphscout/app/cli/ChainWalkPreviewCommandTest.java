@@ -59,9 +59,9 @@ class ChainWalkPreviewCommandTest {
         JsonNode s = c.get("steps").get(i);
         assertThat(s.get("first").asText()).isEqualTo(images.get(i));
         assertThat(s.get("second").asText()).isEqualTo(images.get(i + 1));
-        max = Math.max(max, s.get("cost").asDouble());
+        max = Math.max(max, s.get("stepCost").asDouble());
       }
-      assertThat(c.get("maxStep").asDouble()).isCloseTo(max, org.assertj.core.data.Offset.offset(1e-3));
+      assertThat(c.get("largestStep").asDouble()).isCloseTo(max, org.assertj.core.data.Offset.offset(1e-3));
       assertThat(c.get("unevenness").asDouble()).isGreaterThanOrEqualTo(0);
     }
   }
@@ -128,11 +128,11 @@ class ChainWalkPreviewCommandTest {
     assertThat(order).containsExactlyInAnyOrderElementsOf(family);
     double sum = 0;
     double max = 0;
-    for (JsonNode s : doc.get("steps")) {
+    for (JsonNode s : doc.get("stepCosts")) {
       sum += s.asDouble();
       max = Math.max(max, s.asDouble());
     }
-    assertThat(doc.get("steps")).hasSize(order.size() - 1);
+    assertThat(doc.get("stepCosts")).hasSize(order.size() - 1);
     assertThat(doc.get("total").asDouble()).isCloseTo(sum, org.assertj.core.data.Offset.offset(1e-2));
     assertThat(doc.get("largestStep").asDouble()).isCloseTo(max, org.assertj.core.data.Offset.offset(1e-3));
     assertThat(doc.has("improvement")).isTrue();
