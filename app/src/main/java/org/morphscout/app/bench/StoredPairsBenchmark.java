@@ -56,8 +56,8 @@ public final class StoredPairsBenchmark {
     double fill = (System.nanoTime() - start) / 1e9;
     try (Library library = Library.openForReading(catalogDir)) {
       PairScorer defaults = new PairScorer(ScoreConfig.DEFAULTS, Ciede2000::difference, new WarpEstimator());
-      PairScorer changed = new PairScorer(ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatchWeight", "1",
-          "appearanceWeight", "3")), Ciede2000::difference, new WarpEstimator());
+      PairScorer changed = new PairScorer(ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatch.weight", "1",
+          "appearance.weight", "3")), Ciede2000::difference, new WarpEstimator());
       AnalysisCache cache = new AnalysisCache(library, 16);
       PairQuery query = new PairQuery(20, 30, 0);
       long before = HeapMeter.usedAfterGc();

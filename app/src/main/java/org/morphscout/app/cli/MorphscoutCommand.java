@@ -94,6 +94,7 @@ public final class MorphscoutCommand implements Callable<Integer> {
     cl.setUsageHelpLongOptionsMaxWidth(30);
     cl.setUsageHelpAutoWidth(true);
     listExitCodes(cl);
+    ScoreOptions.listSettings(cl.getSubcommands().get("pairs"));
     return cl;
   }
 }

@@ -1,5 +1,7 @@
 package org.morphscout.app.cli;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Locale;
 
 /** Small formatting helpers for plain-text output. */
@@ -30,5 +32,22 @@ final class Text {
 
   static String num(double v, int decimals) {
     return String.format(Locale.ROOT, "%." + decimals + "f", v);
+  }
+
+  /** The text broken at spaces into lines of at most {@code width} characters (longer words stay whole), indented. */
+  static List<String> wrap(String text, int width, String indent) {
+    List<String> lines = new ArrayList<>();
+    StringBuilder line = new StringBuilder();
+    for (String word : text.split(" ")) {
+      if (line.length() > 0 && line.length() + 1 + word.length() > width) {
+        lines.add(indent + line);
+        line.setLength(0);
+      }
+      line.append(line.length() > 0 ? " " : "").append(word);
+    }
+    if (line.length() > 0) {
+      lines.add(indent + line);
+    }
+    return lines;
   }
 }

@@ -8,8 +8,8 @@ import java.util.Optional;
  * facts re-rank under new settings without loading or warping anything. Values are kept at single precision (the
  * precision they are stored at), so a pair scored from stored facts scores exactly like one scored live.
  *
- * @param first the picture the morph starts from (A)
- * @param second the picture it ends at (B)
+ * @param first the picture the morph starts from (the first)
+ * @param second the picture it ends at (the second)
  * @param measures the cheap measures; null when either picture has no object
  * @param warp the warp's measures; null when either picture has no object or the warp was not (yet) estimated
  */

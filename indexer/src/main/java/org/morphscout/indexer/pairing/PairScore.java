@@ -6,16 +6,14 @@ import java.util.Optional;
 import org.morphscout.indexer.warp.WarpResult;
 
 /**
- * How well image A morphs into image B.
+ * How well the first picture morphs into the second.
  *
  * @param score 0..100, higher is better
  * @param verdict pass, warn or fail from the score thresholds and framing faults
- * @param components sub-scores in [0, 1] (1 best), in a fixed order: silhouetteMatch, warpEffort, foldSafety,
- *     appearance, colour, lightness, contrast, aspect, resolution, objectScale, placement, background (a sub-score whose inputs
- *     are missing, e.g. no colour statistics, is left out)
- * @param measures the raw measures behind them, in a fixed order: iouBefore, alignedIou, warpedIou,
- *     meanDisplacement, maxDisplacement, foldFraction, appearanceDistance, deltaE00, lightnessGap, stdRatio,
- *     aspectRatioGap, resolutionRatio, scaleRatio, offset, backgroundDeltaE00 (missing ones left out)
+ * @param components sub-scores in [0, 1] (1 best), keyed by {@link PairComponent#key()} in the components' order (a
+ *     sub-score whose inputs are missing, e.g. no colour statistics, is left out)
+ * @param measures the raw measures behind them: each component's {@link PairComponent#measure()} in the same
+ *     order, then iouBefore, warpedIou, maxDisplacement and exposureGap (missing ones left out)
  * @param reasons plain-language findings for a photographer, most important first; empty for a clean pair
  * @param warp the warp between the silhouettes; empty when either image has no silhouette
  */

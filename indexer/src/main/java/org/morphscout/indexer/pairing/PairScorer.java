@@ -10,10 +10,10 @@ import org.morphscout.indexer.warp.WarpEstimator;
 import org.morphscout.indexer.warp.WarpResult;
 
 /**
- * Scores how well image A morphs into image B (0..100) and says why.
+ * Scores how well the first picture morphs into the second (0..100) and says why.
  *
- * <p>Combination: each available sub-score {@code c_i} in [0, 1] (the {@link PairComponent}s; see
- * {@link ScoreConfig} for how each is derived) enters a weighted geometric mean,
+ * <p>Combination: each available sub-score {@code c_i} in [0, 1] (the {@link PairComponent}s, each
+ * defining its formula and settings) enters a weighted geometric mean,
  * {@code exp(sum w_i ln max(c_i, 0.01) / sum w_i)}, so one very poor aspect (silhouettes that do not match, a huge colour gap) drags the
  * whole score down instead of being averaged away; the floor of 0.01 keeps a single zero from erasing every other
  * difference. The mean is multiplied by a penalty factor for each framing fault (object cut off by the frame, several
@@ -92,14 +92,8 @@ public final class PairScorer {
 
   private PairScore explain(PairFacts f, Optional<WarpResult> warp) {
     if (!f.measurable()) {
-      List<String> empty = new ArrayList<>();
-      if (f.first().empty()) {
-        empty.add("no object found in A");
-      }
-      if (f.second().empty()) {
-        empty.add("no object found in B");
-      }
-      return new PairScore(0, Verdict.FAIL, Map.of(), Map.of(), empty, Optional.empty());
+      return new PairScore(0, Verdict.FAIL, Map.of(), Map.of(), PairReasons.noObject(f.first(), f.second()),
+          Optional.empty());
     }
     double score = score(f);
     Map<String, Double> components = new LinkedHashMap<>();
@@ -117,14 +111,18 @@ public final class PairScorer {
         && (!faults.isEmpty() || !doubts.isEmpty() || f.measures().aspectRatioGap() > config.passMaxAspectGap())) {
       verdict = Verdict.WARN;
     }
+    // Doubtful silhouettes first, then a poor silhouette match (the main reason a morph fails) and whether only a
+    // turned object would match, then framing faults, then the other sub-scores' reasons in their order, then the
+    // exposure of the whole pictures.
     List<String> reasons = new ArrayList<>(doubts);
-    List<String> measured = PairReasons.measured(f, config);
-    // A poor silhouette match first: it is the main reason a morph fails; then framing faults, then the rest.
-    if (!measured.isEmpty() && measured.get(0).startsWith(PairReasons.POOR_SILHOUETTE_MATCH)) {
-      reasons.add(measured.remove(0));
+    List<String> later = new ArrayList<>();
+    for (PairComponent c : PairComponent.all()) {
+      c.reason(f, config).ifPresent((c == PairComponent.SILHOUETTE_MATCH ? reasons : later)::add);
     }
+    reasons.addAll(PairReasons.turned(f, config));
     reasons.addAll(faults);
-    reasons.addAll(measured);
+    reasons.addAll(later);
+    reasons.addAll(PairReasons.exposure(f, config));
     return new PairScore(score, verdict, components, measures(f), reasons, warp);
   }
 
@@ -161,26 +159,18 @@ public final class PairScorer {
     return p;
   }
 
+  /** Each sub-score's measure (known ones), then the other measures worth showing. */
   private static Map<String, Double> measures(PairFacts f) {
     WarpMeasures w = f.warp();
     PairMeasures m = f.measures();
     Map<String, Double> r = new LinkedHashMap<>();
+    for (PairComponent c : PairComponent.all()) {
+      putIfKnown(r, c.measure().key(), c.measure(f));
+    }
     r.put("iouBefore", w.iouBefore());
-    r.put("alignedIou", w.iouAligned());
     r.put("warpedIou", w.iouWarped());
-    r.put("meanDisplacement", w.meanDisplacement());
     r.put("maxDisplacement", w.maxDisplacement());
-    r.put("foldFraction", w.foldFraction());
-    putIfKnown(r, "appearanceDistance", m.appearanceDistance());
-    putIfKnown(r, "deltaE00", m.deltaE00());
-    putIfKnown(r, "lightnessGap", Math.abs(m.lightnessA() - m.lightnessB()));
     putIfKnown(r, "exposureGap", Math.abs(m.exposureA() - m.exposureB()));
-    putIfKnown(r, "stdRatio", m.stdRatio());
-    r.put("aspectRatioGap", m.aspectRatioGap());
-    r.put("resolutionRatio", m.resolutionRatio());
-    r.put("scaleRatio", m.scaleRatio());
-    r.put("offset", m.offset());
-    putIfKnown(r, "backgroundDeltaE00", m.backgroundDeltaE());
     return r;
   }
 

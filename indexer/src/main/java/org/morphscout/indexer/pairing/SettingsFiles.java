@@ -13,7 +13,10 @@ import java.util.Map;
 import java.util.Properties;
 import org.morphscout.indexer.MorphscoutException;
 
-/** Reads a flat settings file ({@code .json} object of scalars, or {@code .properties}) into key/value strings. */
+/**
+ * Reads a settings file into key/value strings: a {@code .json} object of scalars, or of groups of scalars (a group's
+ * members are read with the group's name and a dot before them), or a {@code .properties} file.
+ */
 final class SettingsFiles {
   private static final ObjectMapper JSON = new ObjectMapper();
 
@@ -33,10 +36,14 @@ final class SettingsFiles {
         throw new MorphscoutException("settings file " + file + " must hold one JSON object of name: value pairs");
       }
       for (Map.Entry<String, JsonNode> e : root.properties()) {
-        if (!e.getValue().isValueNode()) {
-          throw new MorphscoutException("setting " + e.getKey() + " in " + file + " must be a number or boolean");
+        if (e.getValue().isObject()) {
+          // A group, e.g. {"silhouetteMatch": {"weight": 3}}: its members are read as silhouetteMatch.weight.
+          for (Map.Entry<String, JsonNode> m : e.getValue().properties()) {
+            put(out, e.getKey() + "." + m.getKey(), m.getValue(), file);
+          }
+        } else {
+          put(out, e.getKey(), e.getValue(), file);
         }
-        out.put(e.getKey(), e.getValue().asText());
       }
       return out;
     }
@@ -57,5 +64,14 @@ final class SettingsFiles {
       return out;
     }
     throw new MorphscoutException("settings file " + file + " must end in .json or .properties");
+  }
+
+  private static void put(Map<String, String> out, String key, JsonNode value, Path file) {
+    if (!value.isValueNode()) {
+      throw new MorphscoutException("setting " + key + " in " + file + " must be a number");
+    }
+    if (out.put(key, value.asText()) != null) {
+      throw new MorphscoutException("setting " + key + " is given twice in " + file);
+    }
   }
 }

@@ -7,7 +7,10 @@
  * vectors), colour and style (colour difference of the foreground means — CIEDE2000 in production, Sharma, Wu and
  * Dalal 2005, Color Research and Application 30(1) — lightness gap, ratio of standard deviations) and framing
  * (aspect ratios, resolution, object scale and placement, object cut off, several objects, background) as a weighted
- * geometric mean of sub-scores with penalty factors for framing faults; every weight and threshold is in
+ * geometric mean of sub-scores with penalty factors for framing faults. Each sub-score is defined once, in
+ * {@link org.morphscout.indexer.pairing.PairComponent} (key, column title, measure, settings with defaults and
+ * ranges, formula, reason); {@link org.morphscout.indexer.pairing.ScoreSettings} lists every
+ * {@link org.morphscout.indexer.pairing.ScoreSetting} and reads them into a validated
  * {@link org.morphscout.indexer.pairing.ScoreConfig}. {@link org.morphscout.indexer.pairing.NearDuplicates} keeps
  * the same picture twice out of the pairs. {@link org.morphscout.indexer.pairing.PairFinder} proposes candidates
  * through a {@link org.morphscout.indexer.pairing.CandidateSource} (the appearance index) and re-scores them

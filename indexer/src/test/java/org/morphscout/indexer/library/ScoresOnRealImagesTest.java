@@ -175,8 +175,8 @@ class ScoresOnRealImagesTest {
     // bottle laid on its side, which a morph of standing objects does not do; the reason names the turn.
     List<FamilyItem> items = TestFamilies.silhouetteFamily(SEED, 2, Archetype.BOWL, Archetype.BOTTLE);
     PairScore s = scorer.score(analyse(items.get(0).image()), analyse(items.get(1).image()));
-    assertThat(s.reasons()).as("seed %d", SEED).anyMatch(r -> r.startsWith("B matches A's outline only when "
-        + "turned by 90 degrees"));
+    assertThat(s.reasons()).as("seed %d", SEED).anyMatch(r -> r.startsWith(
+        "the second picture matches the first's outline only when turned by 90 degrees"));
     assertThat(Math.abs(s.warp().orElseThrow().similarity().rotation())).as("kept upright").isLessThan(1e-9);
   }
 
@@ -185,7 +185,7 @@ class ScoresOnRealImagesTest {
     // The jar's axis at 95 % of the width: its right half leaves the frame.
     PairScore s = scorer.score(analyse(plain()),
         analyse(shot(SIZE, SIZE, Lighting.STUDIO, Placement.fitted(JAR, CELADON, SIZE, SIZE, 0.7, TILT, 0.45))));
-    assertThat(s.reasons()).as("seed %d", SEED).contains("object cut off by the frame in B");
+    assertThat(s.reasons()).as("seed %d", SEED).contains("object cut off by the frame in the second picture");
   }
 
   @Test
@@ -193,7 +193,7 @@ class ScoresOnRealImagesTest {
     PairScore s = scorer.score(analyse(plain()), analyse(shot(SIZE, SIZE, Lighting.STUDIO,
         Placement.fitted(JAR, CELADON, SIZE, SIZE, 0.4, TILT, -0.25),
         Placement.fitted(JAR, CELADON, SIZE, SIZE, 0.4, TILT, 0.25))));
-    assertThat(s.reasons()).as("seed %d", SEED).contains("two objects in B");
+    assertThat(s.reasons()).as("seed %d", SEED).contains("two objects in the second picture");
   }
 
   @Test
@@ -207,8 +207,8 @@ class ScoresOnRealImagesTest {
   void tinyResolution() throws IOException {
     PairScore s = scorer.score(analyse(plain()),
         analyse(shot(120, 120, Lighting.STUDIO, centred(JAR, CELADON, 120, 120))));
-    assertThat(s.reasons()).as("seed %d", SEED).contains("B is tiny (120x120 px)");
-    assertThat(s.reasons()).noneMatch(r -> r.startsWith("A is tiny"));
+    assertThat(s.reasons()).as("seed %d", SEED).contains("the second picture is tiny (120x120 px)");
+    assertThat(s.reasons()).noneMatch(r -> r.startsWith("the first picture is tiny"));
   }
 
   @Test

@@ -86,8 +86,8 @@ class StoredPairsTest {
   @Test
   void storedAnswersEqualExhaustiveLiveScoring() {
     List<ScoreConfig> configs = List.of(ScoreConfig.DEFAULTS,
-        ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatchWeight", "0.2", "appearanceWeight", "4")),
-        ScoreConfig.DEFAULTS.withOverrides(Map.of("colourWeight", "0", "warpEffortWeight", "5", "passScore", "80")));
+        ScoreConfig.DEFAULTS.withOverrides(Map.of("silhouetteMatch.weight", "0.2", "appearance.weight", "4")),
+        ScoreConfig.DEFAULTS.withOverrides(Map.of("colour.weight", "0", "warpEffort.weight", "5", "passScore", "80")));
     List<PairQuery> queries = List.of(new PairQuery(20, 5, 0), new PairQuery(20, 50, 45),
         new PairQuery(20, 10_000, 0));
     for (ScoreConfig config : configs) {

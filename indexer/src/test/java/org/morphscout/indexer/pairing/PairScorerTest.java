@@ -46,10 +46,10 @@ class PairScorerTest {
 
   @Test
   void eachScreeningReasonIsTriggeredByThePairBuiltForIt() {
-    expectReason(b -> b.cutOff(), "object cut off by the frame in B");
-    expectReason(b -> b.components(2), "two objects in B");
+    expectReason(b -> b.cutOff(), "object cut off by the frame in the second picture");
+    expectReason(b -> b.components(2), "two objects in the second picture");
     expectReason(b -> b.size(1080, 1920), "aspect ratios differ (4:3 vs 9:16)");
-    expectReason(b -> b.size(120, 90), "B is tiny (120x90 px)");
+    expectReason(b -> b.size(120, 90), "the second picture is tiny (120x90 px)");
     // Lightness gap 42 > default threshold 40.
     expectReason(b -> b.foreground(92, 10, 20), "dark vs bright (L* 50 vs 92)");
   }
@@ -89,7 +89,7 @@ class PairScorerTest {
   @Test
   void twoObjectsInAAreNamedForA() {
     PairScore s = scorer.score(Analyses.builder(1).components(2).build(), clean(2));
-    assertThat(s.reasons()).contains("two objects in A");
+    assertThat(s.reasons()).contains("two objects in the first picture");
   }
 
   @Test
@@ -105,7 +105,7 @@ class PairScorerTest {
     PairScore s = scorer.score(clean(1), Analyses.builder(2).noObject().build());
     assertThat(s.verdict()).isEqualTo(Verdict.FAIL);
     assertThat(s.score()).isZero();
-    assertThat(s.reasons()).containsExactly("no object found in B");
+    assertThat(s.reasons()).containsExactly("no object found in the second picture");
     assertThat(s.warp()).isEmpty();
   }
 
@@ -138,13 +138,14 @@ class PairScorerTest {
     double eb = PairMeasures.exposure(b);
     double f = a.shape().areaFraction();
     assertThat(ea).isCloseTo(f * 50 + (1 - f) * 21, org.assertj.core.data.Offset.offset(1e-9));
-    assertThat(s.reasons()).anySatisfy(r -> assertThat(r).startsWith("A is exposed much darker than B")
-        .contains(String.format(java.util.Locale.ROOT, "%.0f vs %.0f", ea, eb)));
+    assertThat(s.reasons()).anySatisfy(r -> assertThat(r)
+        .startsWith("the first picture is exposed much darker than the second").contains(String.format(java.util.Locale.ROOT, "%.0f vs %.0f", ea, eb)));
     assertThat(s.reasons()).noneMatch(r -> r.startsWith("dark vs bright"));
     // Pair measures are kept at single precision (the precision they are stored at in the catalog).
     assertThat(s.measures().get("exposureGap")).isCloseTo(Math.abs(ea - eb), org.assertj.core.data.Offset.offset(1e-4));
     // The reverse order names the other side.
-    assertThat(scorer.score(b, a).reasons()).anyMatch(r -> r.startsWith("A is exposed much brighter than B"));
+    assertThat(scorer.score(b, a).reasons())
+        .anyMatch(r -> r.startsWith("the first picture is exposed much brighter than the second"));
     // A small exposure difference says nothing.
     ImageAnalysis c = Analyses.builder(3).foreground(50, 10, 20).background(30, 0, 0).build();
     assertThat(scorer.score(a, c).reasons()).noneMatch(r -> r.contains("exposed"));
@@ -176,8 +177,8 @@ class PairScorerTest {
     assertThat(sure.verdict()).isEqualTo(Verdict.PASS);
     ImageAnalysis doubtful = Analyses.builder(2).confidence(0.3).build();
     PairScore s = scorer.score(clean(1), doubtful);
-    assertThat(s.reasons().get(0)).isEqualTo("the silhouette of B is uncertain (confidence 0.30), so its shape "
-        + "figures may be wrong");
+    assertThat(s.reasons().get(0)).isEqualTo("the silhouette of the second picture is uncertain (confidence 0.30), "
+        + "so its shape figures may be wrong");
     assertThat(s.verdict()).isEqualTo(Verdict.WARN);
     // At the threshold it is no longer uncertain.
     ImageAnalysis atLimit = Analyses.builder(2).confidence(org.morphscout.indexer.silhouette.Silhouette.UNCERTAIN_BELOW)

@@ -56,7 +56,7 @@ class PairScreenerTest {
     assertThat(out).hasSize(3);
     assertThat(out.get(0).verdict()).isEqualTo(Verdict.PASS);
     assertThat(out.get(0).extras()).containsExactly("1");
-    assertThat(out.get(1).reasons()).contains("B is tiny (120x90 px)");
+    assertThat(out.get(1).reasons()).contains("the second picture is tiny (120x90 px)");
     assertThat(out.get(2).verdict()).isEqualTo(Verdict.FAIL);
     assertThat(out.get(2).reasons().get(0)).startsWith("cannot use A (missing.jpg)");
     assertThat(calls.get()).isEqualTo(4);
