@@ -1,8 +1,10 @@
 package org.morphscout.app.cli;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.morphscout.indexer.pairing.PairComponent;
 import org.morphscout.indexer.pairing.PairScore;
 
 /** Turns pair scores into JSON objects and CSV cells the same way for every command. */
@@ -19,6 +21,25 @@ final class PairRows {
     row.put("measures", rounded(s.measures()));
     row.put("reasons", s.reasons());
     return row;
+  }
+
+  /** The CSV columns of the sub-scores: one per component ({@link PairComponent#csvColumn()}), in their order. */
+  static List<String> componentColumns() {
+    List<String> out = new ArrayList<>();
+    for (PairComponent c : PairComponent.values()) {
+      out.add(c.csvColumn());
+    }
+    return out;
+  }
+
+  /** The sub-scores of a pair for {@link #componentColumns()}, rounded as in JSON; empty where one is missing. */
+  static List<Object> componentCells(PairScore s) {
+    List<Object> out = new ArrayList<>();
+    for (PairComponent c : PairComponent.values()) {
+      Double v = s.components().get(c.key());
+      out.add(v == null ? "" : round(v, 4));
+    }
+    return out;
   }
 
   static Map<String, Double> rounded(Map<String, Double> values) {

@@ -145,11 +145,16 @@ final class PairsCommand implements Callable<Integer> {
       return;
     }
     if (format.csv) {
-      try (CsvOut csv = new CsvOut(out, "first", "second", "score", "verdict", "reasons", "decision")) {
+      // The sub-scores come last, so the columns before them keep their places whatever sub-scores there are.
+      List<String> header = new ArrayList<>(List.of("first", "second", "score", "verdict", "reasons", "decision"));
+      header.addAll(PairRows.componentColumns());
+      try (CsvOut csv = new CsvOut(out, header.toArray(String[]::new))) {
         for (ScoredPair p : result.pairs()) {
-          csv.row(paths.of(p.a()), paths.of(p.b()), PairRows.round(p.score().score(), 1), p.score().verdict().label(),
-              PairRows.reasons(p.score().reasons()),
-              decisions.find(p.a(), p.b()).map(d -> d.kind().word()).orElse(""));
+          List<Object> cells = new ArrayList<>(List.of(paths.of(p.a()), paths.of(p.b()),
+              PairRows.round(p.score().score(), 1), p.score().verdict().label(), PairRows.reasons(p.score().reasons()),
+              decisions.find(p.a(), p.b()).map(d -> d.kind().word()).orElse("")));
+          cells.addAll(PairRows.componentCells(p.score()));
+          csv.row(cells);
         }
       }
       return;

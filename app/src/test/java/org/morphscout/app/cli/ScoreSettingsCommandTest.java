@@ -8,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -21,7 +22,7 @@ import org.morphscout.indexer.pairing.ScoreSettings;
 /**
  * The pair-score settings on the command line: listed by {@code pairs --help} from their one definition, given by
  * {@code --set} or a settings file (grouped, dotted or in the earlier flat names), refused with the key and the
- * source named; and the sub-scores and measures of {@code pairs --json} keyed by their components.
+ * source named; and the sub-scores and measures of {@code pairs --json} and {@code --csv} keyed by their components.
  */
 class ScoreSettingsCommandTest {
   private static final long SEED = 1604;
@@ -63,6 +64,24 @@ class ScoreSettingsCommandTest {
             .isTrue();
       }
       assertThat(components).as("seed %d", SEED).isEqualTo(expected);
+    }
+  }
+
+  @Test
+  void pairsCsvHasOneColumnPerSubScoreWithTheJsonValues() {
+    List<CSVRecord> rows = cli.run("pairs", "--csv", "--count", "3").succeeds().csv();
+    JsonNode pairs = cli.run("pairs", "--json", "--count", "3").succeeds().json().get("pairs");
+    assertThat(rows).as("seed %d", SEED).isNotEmpty().hasSize(pairs.size());
+    List<String> columns = new ArrayList<>();
+    for (PairComponent c : PairComponent.values()) {
+      columns.add(c.csvColumn());
+    }
+    assertThat(rows.get(0).getParser().getHeaderNames()).endsWith(columns.toArray(String[]::new));
+    for (int i = 0; i < rows.size(); i++) {
+      for (PairComponent c : PairComponent.values()) {
+        assertThat(Double.parseDouble(rows.get(i).get(c.csvColumn()))).as("pair %d, %s (seed %d)", i, c, SEED)
+            .isEqualTo(pairs.get(i).get("components").get(c.key()).asDouble());
+      }
     }
   }
 

@@ -350,9 +350,14 @@ public enum PairComponent {
             + (measure.direction() == Direction.DISTANCE ? "above" : "below") + " this (" + measure.unit() + ")");
   }
 
-  /** The name used in JSON and CSV keys, settings ({@code <key>.weight}) and the browser. */
+  /** The name used in JSON keys, settings ({@code <key>.weight}) and the browser. */
   public String key() {
     return key;
+  }
+
+  /** The column of this sub-score in CSV output: the key in snake case, as every CSV header ({@code warp_effort}). */
+  public String csvColumn() {
+    return key.replaceAll("([A-Z])", "_$1").toLowerCase(Locale.ROOT);
   }
 
   /** The short column title in the browser's pairs table (one word, so the column stays narrow). */
