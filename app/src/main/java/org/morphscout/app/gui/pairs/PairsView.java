@@ -2,8 +2,11 @@ package org.morphscout.app.gui.pairs;
 
 import java.io.File;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
 import javafx.beans.binding.Bindings;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringWrapper;
@@ -26,6 +29,9 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
+import javafx.scene.text.Font;
+import javafx.scene.text.FontWeight;
+import javafx.scene.text.Text;
 import javafx.stage.FileChooser;
 import org.morphscout.app.gui.common.MaskImages;
 import org.morphscout.app.gui.common.MessageLine;
@@ -35,13 +41,33 @@ import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.service.PairVerdict;
 import org.morphscout.indexer.pairing.PairComponent;
 
-/** Suggested pairs in a sortable table beside the chosen pair's images and aligned silhouettes. */
+/**
+ * Suggested pairs in a sortable table beside the chosen pair's images, aligned silhouettes and reasons. At the
+ * window's default size the table shows a few columns whole, without scrolling sideways; the others (every sub-score,
+ * the reasons) are a click away in the table's column menu (the button right of the headers).
+ */
 public final class PairsView extends BorderPane {
+  /**
+   * Sub-score columns shown until the user picks others from the column menu: how well the outlines match and how
+   * far the warp must move them, the two a morph depends on most (more do not fit the default window's width).
+   */
+  static final Set<String> SHOWN_BY_DEFAULT = Set.of(PairComponent.SILHOUETTE_MATCH.key(),
+      PairComponent.WARP_EFFORT.key());
+  /** Header font as the style sheet sets it (morphscout.css: 13 px, bold), to size columns to their titles. */
+  private static final Font HEADER_FONT = Font.font("System", FontWeight.BOLD, 13);
+  /** Room beside a title for the header's padding and the sort arrow, in pixels. */
+  private static final double HEADER_ROOM = 28;
+  /** Room taken by the table's border and its vertical scroll bar, in pixels. */
+  private static final double TABLE_CHROME = 20;
+
   private final PairsViewModel vm;
   private final Session session;
   private final ThumbnailCache thumbs;
   private final TableView<PairRow> table = new TableView<>();
   private final List<String> componentColumns = new ArrayList<>();
+  /** Column title -> shown, as the user last chose in the column menu (kept when the columns are rebuilt). */
+  private final Map<String, Boolean> chosen = new HashMap<>();
+  private TableColumn<PairRow, String> second;
   private final TextField note = new TextField();
 
   public PairsView(PairsViewModel vm, ThumbnailCache thumbs) {
@@ -57,6 +83,8 @@ public final class PairsView extends BorderPane {
     table.setItems(sorted);
     table.setPlaceholder(new Label("Suggest pairs for the whole library, or pick an image and press P."));
     table.setColumnResizePolicy(TableView.UNCONSTRAINED_RESIZE_POLICY);
+    table.setTableMenuButtonVisible(true); // the column chooser
+    table.widthProperty().addListener((o, a, b) -> fillWidth());
     table.setRowFactory(t -> new TableRow<>() {
       @Override
       protected void updateItem(PairRow r, boolean empty) {
@@ -140,14 +168,16 @@ public final class PairsView extends BorderPane {
     componentColumns.clear();
     componentColumns.addAll(keys);
     List<TableColumn<PairRow, ?>> cols = new ArrayList<>();
-    cols.add(text("First", r -> r.nameA(), 104));
-    cols.add(text("Second", r -> r.nameB(), 104));
+    cols.add(text("First", r -> r.nameA(), 90));
+    second = text("Second", r -> r.nameB(), 104);
+    cols.add(second);
     TableColumn<PairRow, Number> score = number("Score", r -> r.suggestion().score());
     cols.add(score);
     for (String k : keys) {
       TableColumn<PairRow, Number> col = number(header(k), r -> r.suggestion().components().getOrDefault(k,
           Double.NaN));
       col.setUserData(k);
+      col.setVisible(SHOWN_BY_DEFAULT.contains(k));
       cols.add(col);
     }
     TableColumn<PairRow, PairVerdict> verdict = new TableColumn<>("Verdict");
@@ -163,15 +193,24 @@ public final class PairsView extends BorderPane {
         }
       }
     });
-    verdict.setPrefWidth(62);
+    fitTitle(verdict);
     cols.add(verdict);
     TableColumn<PairRow, String> decision = new TableColumn<>("Decision");
     decision.setCellValueFactory(c -> c.getValue().decisionProperty());
-    decision.setPrefWidth(78);
+    fitTitle(decision);
     cols.add(decision);
     TableColumn<PairRow, String> reasons = text("Reasons", r -> String.join("; ", r.suggestion().reasons()), 300);
+    reasons.setVisible(false); // shown whole beside the table, for the selected pair
     cols.add(reasons);
+    for (TableColumn<PairRow, ?> c : cols) {
+      c.setVisible(chosen.getOrDefault(c.getText(), c.isVisible()));
+      c.visibleProperty().addListener((o, was, now) -> {
+        chosen.put(c.getText(), now);
+        fillWidth();
+      });
+    }
     table.getColumns().setAll(cols);
+    fillWidth();
     table.getSortOrder().setAll(score);
     score.setSortType(TableColumn.SortType.DESCENDING);
   }
@@ -180,7 +219,8 @@ public final class PairsView extends BorderPane {
       double width) {
     TableColumn<PairRow, String> c = new TableColumn<>(title);
     c.setCellValueFactory(d -> new ReadOnlyStringWrapper(f.apply(d.getValue())));
-    c.setPrefWidth(width);
+    fitTitle(c);
+    c.setPrefWidth(Math.max(width, c.getMinWidth()));
     return c;
   }
 
@@ -195,12 +235,35 @@ public final class PairsView extends BorderPane {
             : String.format(Locale.ROOT, Math.abs(v.doubleValue()) >= 10 ? "%.1f" : "%.2f", v.doubleValue()));
       }
     });
-    // wide enough for the whole title and the sort arrow: titles are never cut at the default window size
-    double titleWidth = 8.5 * title.length() + 26;
-    c.setPrefWidth(Math.max(56, titleWidth));
-    c.setMinWidth(Math.max(48, titleWidth));
+    fitTitle(c);
     c.getStyleClass().add("numeric");
     return c;
+  }
+
+  /** Makes {@code c} wide enough for its whole title and a sort arrow, and never narrower. */
+  private static void fitTitle(TableColumn<PairRow, ?> c) {
+    Text t = new Text(c.getText());
+    t.setFont(HEADER_FONT);
+    double width = Math.ceil(t.getLayoutBounds().getWidth()) + HEADER_ROOM;
+    c.setMinWidth(width);
+    c.setPrefWidth(width);
+  }
+
+  /**
+   * Gives the Second column (the partners' names, the longest cells) the width the other shown columns leave, so
+   * the table fills its width without a sideways scroll bar until the user shows more columns than fit.
+   */
+  private void fillWidth() {
+    if (second == null || table.getWidth() <= 0) {
+      return;
+    }
+    double others = 0;
+    for (TableColumn<PairRow, ?> c : table.getColumns()) {
+      if (c != second && c.isVisible()) {
+        others += c.getWidth() > 0 ? c.getWidth() : c.getPrefWidth();
+      }
+    }
+    second.setPrefWidth(Math.max(second.getMinWidth(), table.getWidth() - TABLE_CHROME - others));
   }
 
   /** Column headers of the sub-scores shown as numbers: each component's own title (see {@link PairComponent}). */
@@ -240,9 +303,17 @@ public final class PairsView extends BorderPane {
     });
     Label legend = new Label("orange: first only · blue: second only · dark: both");
     legend.getStyleClass().add("legend");
+    Label reasons = new Label();
+    reasons.setId("pair-reasons");
+    reasons.setWrapText(true);
+    reasons.setMaxWidth(Double.MAX_VALUE);
+    reasons.getStyleClass().add("summary");
     a.setOnMouseClicked(e -> inspect(vm.selectedProperty().get(), true));
     b.setOnMouseClicked(e -> inspect(vm.selectedProperty().get(), false));
     vm.selectedProperty().addListener((o, x, r) -> {
+      reasons.setText(r == null ? "" : r.suggestion().reasons().isEmpty() ? "No reasons against this pair."
+          : "Why " + r.suggestion().verdict().name().toLowerCase(Locale.ROOT) + ": "
+              + String.join("; ", r.suggestion().reasons()) + ".");
       a.show(r == null ? null : session.row(r.suggestion().a()).orElse(null), r == null ? null : r.nameA(), null,
           thumbs);
       b.show(r == null ? null : session.row(r.suggestion().b()).orElse(null), r == null ? null : r.nameB(), null,
@@ -267,7 +338,7 @@ public final class PairsView extends BorderPane {
     note.setOnAction(e -> vm.note(vm.selectedProperty().get(), note.getText()));
     HBox.setHgrow(note, Priority.ALWAYS);
     HBox actions = new HBox(8, approve, reject, forget);
-    VBox box = new VBox(10, both, overlay, iou, legend, actions, note);
+    VBox box = new VBox(10, both, overlay, iou, legend, reasons, actions, note);
     box.disableProperty().bind(Bindings.isNull(vm.selectedProperty()));
     box.setAlignment(Pos.TOP_CENTER);
     box.setPadding(new Insets(12));

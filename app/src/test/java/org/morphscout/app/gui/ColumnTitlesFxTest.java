@@ -1,0 +1,183 @@
+package org.morphscout.app.gui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.Color;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import javafx.geometry.Orientation;
+import javafx.scene.Node;
+import javafx.scene.Scene;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollBar;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableView;
+import javafx.scene.text.Text;
+import javafx.stage.Stage;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.morphscout.app.gui.common.Pane;
+import org.morphscout.app.gui.common.ThumbnailCache;
+import org.morphscout.app.gui.service.LibraryBackends;
+import org.morphscout.app.gui.task.FxTaskRunner;
+import org.morphscout.indexer.values.ImageRow;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * Every table of the browser, filled by the library's real services, at the window's default size
+ * ({@link WindowSettings#DEFAULTS}): each visible column shows its whole title (no ellipsis) and no table needs a
+ * horizontal scroll bar.
+ */
+@ExtendWith(ApplicationExtension.class)
+class ColumnTitlesFxTest {
+  static {
+    HeadlessFx.configure();
+  }
+
+  @TempDir Path tmp;
+  private FxTaskRunner runner;
+  private ThumbnailCache thumbs;
+  private MainViewModel vm;
+  private Scene scene;
+
+  @Start
+  void start(Stage stage) {
+    runner = new FxTaskRunner(2);
+    vm = new MainViewModel(runner, LibraryBackends::create);
+    thumbs = new ThumbnailCache(id -> vm.session().thumbnail(id), 144, 200);
+    MainView view = new MainView(vm, thumbs);
+    WindowSettings defaults = WindowSettings.DEFAULTS;
+    // as MorphscoutApp opens the window on a first run
+    view.split().setDividerPositions(defaults.inspectorDivider());
+    scene = view.scene(defaults.width(), defaults.height());
+    stage.setScene(scene);
+    stage.show();
+  }
+
+  @AfterEach
+  void close() {
+    WaitForAsyncUtils.asyncFx(() -> vm.close());
+    WaitForAsyncUtils.waitForFxEvents();
+    runner.close();
+    thumbs.close();
+  }
+
+  static void fx(Runnable r) throws Exception {
+    WaitForAsyncUtils.asyncFx(r).get();
+    WaitForAsyncUtils.waitForFxEvents();
+  }
+
+  @Test
+  void everyTableShowsWholeTitlesWithoutSidewaysScrolling() throws Exception {
+    Path photos = Files.createDirectories(tmp.resolve("photos"));
+    String[] kinds = {"round", "square", "star"};
+    Color[] colours = {new Color(0xC0504D), new Color(0x4F81BD), new Color(0x9BBB59)};
+    for (String kind : kinds) {
+      for (int i = 0; i < 3; i++) {
+        SampleCatalog.Picture p = new SampleCatalog.Picture("", kind + "-" + i + ".png", kind, 0.5 + 0.15 * i,
+            colours[i], 0, 0, false);
+        ImageIO.write(SampleCatalog.draw(p, 320, 240, true), "png", photos.resolve(p.name()).toFile());
+      }
+    }
+    // a failure with a long path and reason, so the failures table has a row to lay out
+    Path deep = Files.createDirectories(photos.resolve("a folder with a rather long name/and another one below it"));
+    Files.write(deep.resolve("a picture that was cut short while it was being copied.jpg"),
+        new byte[] {(byte) 0xFF, (byte) 0xD8, 0, 1});
+
+    fx(() -> vm.open(tmp.resolve("catalog"), true));
+    HeadlessFx.waitUntil(60, () -> vm.session().library() != null);
+    fx(() -> {
+      vm.session().paneProperty().set(Pane.INDEXING);
+      vm.indexing().add(photos);
+    });
+    HeadlessFx.waitUntil(120, () -> !vm.indexing().runningProperty().get() && !vm.indexing().failures().isEmpty());
+    assertThat(vm.indexing().messageProperty().get()).isEmpty();
+    checkTable("#failures", 1);
+
+    ImageRow round = vm.session().rows().stream().filter(r -> r.path().endsWith("round-0.png")).findFirst()
+        .orElseThrow();
+    fx(() -> {
+      vm.session().paneProperty().set(Pane.PAIRS);
+      vm.pairs().showFor(round);
+    });
+    HeadlessFx.waitUntil(60, () -> !vm.pairs().runningProperty().get() && !vm.pairs().rows().isEmpty());
+    assertThat(vm.pairs().messageProperty().get()).isEmpty();
+    checkTable("#pairs-table", 5);
+  }
+
+  /**
+   * The table {@code id}, laid out on screen: at least {@code columns} visible columns, no title cut (also while its
+   * column is the one sorted by, when the header shows a sort arrow), no sideways scroll bar.
+   */
+  private void checkTable(String id, int columns) throws Exception {
+    WaitForAsyncUtils.waitForFxEvents();
+    TableView<?> table = (TableView<?>) scene.lookup(id);
+    List<String> cut = new ArrayList<>();
+    List<String> titles = new ArrayList<>();
+    boolean[] sideways = new boolean[1];
+    StringBuilder widths = new StringBuilder();
+    fx(() -> {
+      assertThat(table.isVisible() && table.getWidth() > 0).as("%s is on screen", id).isTrue();
+      widths.append("table ").append(Math.round(table.getWidth())).append(" px, columns");
+      table.getVisibleLeafColumns().forEach(c -> {
+        widths.append(' ').append(c.getText()).append(' ').append(Math.round(c.getWidth()));
+        titles.add(c.getText());
+      });
+      sideways[0] = scrollsSideways(table);
+    });
+    assertThat(titles).as("%s: visible columns", id).hasSizeGreaterThanOrEqualTo(columns);
+    assertThat(sideways[0]).as("%s scrolls sideways at the default window size (%s)", id, widths).isFalse();
+    for (int i = 0; i < titles.size(); i++) {
+      int column = i;
+      fx(() -> sortBy(table, column));
+      fx(() -> cut.addAll(cutTitles(table)));
+    }
+    assertThat(cut).as("%s: column titles cut at %sx%s (%s)", id, WindowSettings.DEFAULTS.width(),
+        WindowSettings.DEFAULTS.height(), widths).isEmpty();
+  }
+
+  @SuppressWarnings({"unchecked", "rawtypes"})
+  private static void sortBy(TableView table, int column) {
+    TableColumn c = (TableColumn) table.getVisibleLeafColumns().get(column);
+    if (c.isSortable()) {
+      table.getSortOrder().setAll(c);
+    }
+    table.applyCss();
+    table.layout();
+  }
+
+  /** The header titles of {@code table} that show less than their text (an ellipsis), with what they show. */
+  private static List<String> cutTitles(TableView<?> table) {
+    List<String> cut = new ArrayList<>();
+    int seen = 0;
+    for (Node header : table.lookupAll(".column-header")) {
+      Label label = header.isVisible() ? (Label) header.lookup(".label") : null;
+      if (label == null || label.getText() == null || label.getText().isEmpty()) {
+        continue; // the filler right of the last column
+      }
+      seen++;
+      Text shown = (Text) label.lookup(".text");
+      if (shown == null || !label.getText().equals(shown.getText())) {
+        cut.add(label.getText() + " shown as '" + (shown == null ? "" : shown.getText()) + "'");
+      }
+    }
+    assertThat(seen).as("headers laid out").isEqualTo(table.getVisibleLeafColumns().size());
+    return cut;
+  }
+
+  private static boolean scrollsSideways(TableView<?> table) {
+    for (Node n : table.lookupAll(".scroll-bar")) {
+      if (n instanceof ScrollBar bar && bar.getOrientation() == Orientation.HORIZONTAL && bar.isVisible()) {
+        return true;
+      }
+    }
+    return false;
+  }
+}
