@@ -169,8 +169,9 @@ class HostileInputProperties {
   @Provide
   Arbitrary<String> settingsText() {
     Arbitrary<String> keys = Arbitraries.of("passScore", "warnScore", "overlapWeight", "nope", "", "passScore.x",
-        "\u0000", "warnScore");
-    Arbitrary<String> values = Arbitraries.of("70", "-1", "NaN", "1e400", "abc", "", "{", "\"", "Infinity", "50.5");
+        "\u0000", "warnScore", "silhouetteMatch", "silhouetteMatch.weight", "colour.scale", "iouZero");
+    Arbitrary<String> values = Arbitraries.of("70", "-1", "NaN", "1e400", "abc", "", "{", "\"", "Infinity", "50.5",
+        "{\"weight\": 2}", "{\"weight\": {\"x\": 1}}", "{\"zero\": 0.99}", "[1]", "null", "{}");
     Arbitrary<String> json = Combinators.combine(keys, values).as((k, v) -> "\"" + k + "\": " + v).list()
         .ofMaxSize(5).map(l -> "{" + String.join(", ", l) + "}");
     Arbitrary<String> props = Combinators.combine(keys, values).as((k, v) -> k + "=" + v).list().ofMaxSize(5)
