@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.awt.Color;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -14,6 +15,7 @@ import org.morphscout.app.gui.service.ServiceSimilarity;
 import org.morphscout.app.gui.service.ServiceWalk;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
+import org.morphscout.indexer.pairing.PairComponent;
 import org.morphscout.indexer.values.ImageRow;
 
 /** The browser on the library's real services: a new catalog, indexing a folder, then a similarity search. */
@@ -73,7 +75,9 @@ class RealServicesTest {
       assertThat(vm.pairs().rows()).isNotEmpty().allSatisfy(r -> {
         assertThat(r.suggestion().score()).isBetween(0.0, 100.0);
         assertThat(r.suggestion().a()).isEqualTo(round.id());
-        assertThat(r.suggestion().components()).containsKeys("silhouetteMatch", "warpEffort");
+        // every sub-score reaches the table (shown or in its column menu), keyed and ordered by its component
+        assertThat(r.suggestion().components().keySet()).containsExactlyElementsOf(
+            Arrays.stream(PairComponent.values()).map(PairComponent::key).toList());
       });
       // a disc against a disc covers it fully once aligned; against a star it cannot (silhouette match in [0, 1])
       double discs = vm.pairs().rows().stream().filter(r -> r.nameB().startsWith("round-"))

@@ -18,13 +18,10 @@ import org.morphscout.indexer.progress.ProgressListener;
 
 /**
  * Pair suggestions through the library's {@link PairService} with the default score configuration, as
- * {@code morphscout pairs} without options. The table shows the sub-scores most telling for a morph; all reasons
- * are kept.
+ * {@code morphscout pairs} without options. Every sub-score is passed on, one per {@link PairComponent} in its order
+ * (the table shows the most telling by default and offers the others in its column menu); all reasons are kept.
  */
 public final class ServicePairs implements PairsBackend {
-  /** Sub-scores shown as columns, in this order (each in [0, 1], 1 best). */
-  static final List<PairComponent> SHOWN = List.of(PairComponent.SILHOUETTE_MATCH, PairComponent.WARP_EFFORT,
-      PairComponent.FOLD_SAFETY, PairComponent.APPEARANCE, PairComponent.COLOUR, PairComponent.ASPECT);
   /** Candidates per image, as the command line's default. */
   static final int CANDIDATES = 20;
 
@@ -53,9 +50,10 @@ public final class ServicePairs implements PairsBackend {
     return new Suggestions(out, result.notes());
   }
 
+  /** Every sub-score (each in [0, 1], 1 best) keyed by its component, in the components' order; NaN if missing. */
   static Map<String, Double> shown(Map<String, Double> components) {
     Map<String, Double> shown = new LinkedHashMap<>();
-    for (PairComponent c : SHOWN) {
+    for (PairComponent c : PairComponent.values()) {
       Double v = components.get(c.key());
       shown.put(c.key(), v == null ? Double.NaN : v);
     }
