@@ -8,8 +8,10 @@ package org.morphscout.indexer.warp;
  * <p>Every pixel's sum is taken in a fixed order (rows: the centre, then the pairs at distance 1, 2, ...; columns:
  * the centre, then the taps from the top down), the same as a plain per-pixel loop, so the result is identical to
  * one ({@code ReferenceKernelsTest}). For speed, the interior of each pass runs tap by tap over the whole grid as one
- * long loop (a loop per row of 16 to 64 pixels spends much of its time entering and leaving: a third of the
- * smoothing's time at 64 x 64); the pixels near the border, whose kernel is cut, are then computed again one by one.
+ * long loop (a loop per row of 16 to 64 pixels spends much of its time entering and leaving), and each tap first
+ * copies its shifted source into a scratch array so the loop reads and writes the same index: the JIT does not
+ * vectorise a loop that reads one array at an offset from where it writes another, since it cannot rule out that
+ * they are the same array. The pixels near a row's ends, whose kernel is cut, are then computed column by column.
  */
 final class GaussianSmoother {
   private final float[] kernel;
@@ -17,6 +19,9 @@ final class GaussianSmoother {
   private final int w;
   private final int h;
   private final float[] scratch;
+  /** Shifted copies of a pass's source. */
+  private final float[] lower;
+  private final float[] upper;
   /** 1 / the whole kernel's sum, added in the order of the row pass (centre, then twice each side tap). */
   private final float invRowSum;
   /** 1 / the whole kernel's sum, added in the order of the column pass (centre, then the taps from the top down). */
@@ -38,6 +43,8 @@ final class GaussianSmoother {
       }
     }
     this.scratch = new float[w * h];
+    this.lower = new float[w * h];
+    this.upper = new float[w * h];
     float sum = kernel[0];
     for (int k = 1; k <= radius; k++) {
       sum += 2 * kernel[k];
@@ -68,36 +75,43 @@ final class GaussianSmoother {
       }
       for (int k = 1; k <= radius; k++) {
         float kv = kernel[k];
+        System.arraycopy(img, from - k, lower, from, to - from);
+        System.arraycopy(img, from + k, upper, from, to - from);
         for (int i = from; i < to; i++) {
-          scratch[i] += kv * (img[i - k] + img[i + k]);
+          scratch[i] += kv * (lower[i] + upper[i]);
         }
       }
       for (int i = from; i < to; i++) {
         scratch[i] *= invRowSum;
       }
     }
+    // The pixels whose kernel the row's ends cut, one column at a time: the taps and their sum are the same down a
+    // column.
     int lo0 = Math.min(radius, w);
     int hi0 = Math.max(lo0, w - radius);
-    for (int y = 0; y < h; y++) {
-      int row = y * w;
-      for (int x = 0; x < w; x++) {
-        if (x == lo0 && hi0 > lo0) {
-          x = hi0 - 1;
-          continue;
-        }
-        float acc = kernel[0] * img[row + x];
-        float norm = kernel[0];
-        int lo = Math.max(-radius, -x);
-        int hi = Math.min(radius, w - 1 - x);
+    for (int x = 0; x < w; x++) {
+      if (x == lo0 && hi0 > lo0) {
+        x = hi0 - 1;
+        continue;
+      }
+      int lo = Math.max(-radius, -x);
+      int hi = Math.min(radius, w - 1 - x);
+      float norm = kernel[0];
+      for (int k = lo; k < 0; k++) {
+        norm += kernel[-k];
+      }
+      for (int k = 1; k <= hi; k++) {
+        norm += kernel[k];
+      }
+      for (int i = x; i < n; i += w) {
+        float acc = kernel[0] * img[i];
         for (int k = lo; k < 0; k++) {
-          acc += kernel[-k] * img[row + x + k];
-          norm += kernel[-k];
+          acc += kernel[-k] * img[i + k];
         }
         for (int k = 1; k <= hi; k++) {
-          acc += kernel[k] * img[row + x + k];
-          norm += kernel[k];
+          acc += kernel[k] * img[i + k];
         }
-        scratch[row + x] = acc / norm;
+        scratch[i] = acc / norm;
       }
     }
   }
@@ -117,9 +131,9 @@ final class GaussianSmoother {
           continue;
         }
         float kv = kernel[Math.abs(k)];
-        int offset = k * w;
+        System.arraycopy(scratch, from + k * w, lower, from, to - from);
         for (int i = from; i < to; i++) {
-          img[i] += kv * scratch[i + offset];
+          img[i] += kv * lower[i];
         }
       }
       for (int i = from; i < to; i++) {

@@ -27,16 +27,30 @@ final class Grids {
     int w = mask.width();
     int h = mask.height();
     byte[] d = mask.data();
+    // The matrix's terms of each sample column and row, computed once (the same products as sample by sample, so
+    // the same coordinates to the last bit): sample s of column i is index 2 i + s, with sub-pixel offset SUB[s].
+    double[] colX = new double[2 * n];
+    double[] colY = new double[2 * n];
+    double[] rowX = new double[2 * n];
+    double[] rowY = new double[2 * n];
+    for (int i = 0; i < n; i++) {
+      for (int s = 0; s < 2; s++) {
+        double ax = canvas.maskX(i + SUB[s]);
+        double ay = canvas.maskY(i + SUB[s]);
+        colX[2 * i + s] = m[0] * ax;
+        colY[2 * i + s] = m[3] * ax;
+        rowX[2 * i + s] = m[1] * ay;
+        rowY[2 * i + s] = m[4] * ay;
+      }
+    }
     float[] out = new float[n * n];
     for (int j = 0; j < n; j++) {
       for (int i = 0; i < n; i++) {
         int hits = 0;
-        for (double oy : SUB) {
-          double ay = canvas.maskY(j + oy);
-          for (double ox : SUB) {
-            double ax = canvas.maskX(i + ox);
-            int x = (int) Math.floor(m[0] * ax + m[1] * ay + m[2]);
-            int y = (int) Math.floor(m[3] * ax + m[4] * ay + m[5]);
+        for (int sy = 2 * j; sy < 2 * j + 2; sy++) {
+          for (int sx = 2 * i; sx < 2 * i + 2; sx++) {
+            int x = (int) Math.floor(colX[sx] + rowX[sy] + m[2]);
+            int y = (int) Math.floor(colY[sx] + rowY[sy] + m[5]);
             if (x >= 0 && y >= 0 && x < w && y < h && d[y * w + x] != 0) {
               hits++;
             }
@@ -82,6 +96,23 @@ final class Grids {
       union += Math.max(a[i], b[i]);
     }
     return union == 0 ? 1.0 : inter / union;
+  }
+
+  /**
+   * {@link #iou} of two grids whose values are multiples of 1/4 in [0, 1] (what {@link #rasterise} and
+   * {@link #imageRelative} give), exactly equal to it and faster: the sums are counted in quarters as integers, which
+   * is exact, as the double sums of such values are. Other values would be truncated to a quarter.
+   */
+  static double quarterIou(float[] a, float[] b) {
+    int inter = 0;
+    int union = 0;
+    for (int i = 0; i < a.length; i++) {
+      int qa = (int) (a[i] * 4f);
+      int qb = (int) (b[i] * 4f);
+      inter += Math.min(qa, qb);
+      union += Math.max(qa, qb);
+    }
+    return union == 0 ? 1.0 : inter / (double) union;
   }
 
   static double sum(float[] a) {

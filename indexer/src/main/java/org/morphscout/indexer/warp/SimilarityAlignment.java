@@ -119,7 +119,7 @@ public final class SimilarityAlignment {
     for (Turn t : ordered) {
       Similarity sim = t.sim();
       float[] gridB = Grids.rasterise(b, canvas, sim);
-      double iou = Grids.iou(gridA, gridB);
+      double iou = Grids.quarterIou(gridA, gridB);
       double needed = best != null && t.turn() > LARGE_ROTATION && bestTurn <= LARGE_ROTATION
           ? LARGE_ROTATION_MARGIN : TIE_MARGIN;
       if (iou > bestIou + needed) {
@@ -132,7 +132,7 @@ public final class SimilarityAlignment {
     double turnedIou = Double.NaN;
     double turnedRotation = Double.NaN;
     for (Similarity sim : turned) {
-      double iou = Grids.iou(gridA, Grids.rasterise(b, canvas, sim));
+      double iou = Grids.quarterIou(gridA, Grids.rasterise(b, canvas, sim));
       if (Double.isNaN(turnedIou) || iou > turnedIou) {
         turnedIou = iou;
         turnedRotation = sim.rotation();

@@ -35,7 +35,7 @@ public final class WarpEstimator {
     if (a.area() == 0 || b.area() == 0) {
       throw new IllegalArgumentException("cannot estimate a warp with an empty mask");
     }
-    double iouBefore = Grids.iou(Grids.imageRelative(a, gridSize), Grids.imageRelative(b, gridSize));
+    double iouBefore = Grids.quarterIou(Grids.imageRelative(a, gridSize), Grids.imageRelative(b, gridSize));
     Alignment aligned = alignment.align(a, b);
     DisplacementField field = demons.register(aligned.a(), aligned.b());
     return measure(iouBefore, aligned, field);

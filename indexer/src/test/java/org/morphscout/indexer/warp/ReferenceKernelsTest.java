@@ -160,6 +160,66 @@ class ReferenceKernelsTest {
   }
 
   @Test
+  void quarterIouEqualsTheSoftIouExactly() {
+    Random r = new Random(SEED);
+    for (int round = 0; round < 200; round++) {
+      int n = 1 + r.nextInt(4096);
+      float[] a = new float[n];
+      float[] b = new float[n];
+      double fill = r.nextDouble();
+      for (int i = 0; i < n; i++) {
+        a[i] = r.nextDouble() < fill ? r.nextInt(5) * 0.25f : 0f;
+        b[i] = r.nextDouble() < fill ? r.nextInt(5) * 0.25f : 0f;
+      }
+      assertThat(Grids.quarterIou(a, b)).as("round %d, seed %s", round, SEED).isEqualTo(Grids.iou(a, b));
+    }
+    assertThat(Grids.quarterIou(new float[16], new float[16])).isEqualTo(Grids.iou(new float[16], new float[16]));
+  }
+
+  @Test
+  void rasterisingEqualsAPlainPerSampleLoopExactly() {
+    Random r = new Random(SEED);
+    org.morphscout.indexer.silhouette.Mask mask = TestMasks.ellipse(97, 80, 45, 38, 30, 21);
+    double covered = 0;
+    for (int round = 0; round < 40; round++) {
+      int n = 8 + r.nextInt(60);
+      Canvas canvas = new Canvas(n, 0.3 + r.nextDouble(), -20 + 30 * r.nextDouble(), -20 + 30 * r.nextDouble());
+      Similarity sim = Similarity.through(0.5 + r.nextDouble(), (r.nextDouble() - 0.5) * 2 * Math.PI,
+          r.nextBoolean(), 45, 38, 40 + 10 * r.nextDouble(), 30 + 10 * r.nextDouble());
+      assertThat(Grids.rasterise(mask, canvas)).as("A, round %d, seed %s", round, SEED)
+          .containsExactly(plainRasterise(mask, canvas, new double[] {1, 0, 0, 0, 1, 0}));
+      assertThat(Grids.rasterise(mask, canvas, sim)).as("B, round %d, seed %s", round, SEED)
+          .containsExactly(plainRasterise(mask, canvas, sim.inverseMatrix()));
+      covered += Grids.sum(Grids.rasterise(mask, canvas, sim));
+    }
+    assertThat(covered).as("the canvases must see the object, seed %s", SEED).isGreaterThan(100);
+  }
+
+  /** 2x2 supersampling, each sample's mask coordinates computed on its own. */
+  private static float[] plainRasterise(org.morphscout.indexer.silhouette.Mask mask, Canvas canvas, double[] m) {
+    int n = canvas.size();
+    float[] out = new float[n * n];
+    for (int j = 0; j < n; j++) {
+      for (int i = 0; i < n; i++) {
+        int hits = 0;
+        for (double oy : new double[] {-0.25, 0.25}) {
+          for (double ox : new double[] {-0.25, 0.25}) {
+            double ax = canvas.maskX(i + ox);
+            double ay = canvas.maskY(j + oy);
+            int x = (int) Math.floor(m[0] * ax + m[1] * ay + m[2]);
+            int y = (int) Math.floor(m[3] * ax + m[4] * ay + m[5]);
+            if (x >= 0 && y >= 0 && x < mask.width() && y < mask.height() && mask.data()[y * mask.width() + x] != 0) {
+              hits++;
+            }
+          }
+        }
+        out[j * n + i] = hits * 0.25f;
+      }
+    }
+    return out;
+  }
+
+  @Test
   void angleNormalisationEqualsTheIeeeRemainder() {
     Random r = new Random(SEED);
     double[] edges = {0, -0.0, Math.PI, -Math.PI, 2 * Math.PI, -2 * Math.PI, 2.5 * Math.PI, -2.5 * Math.PI,
