@@ -107,7 +107,7 @@ final class DemoCommand implements Callable<Integer> {
     } else {
       out.printf("Using the demo library in %s%n", libraryDir);
     }
-    AnalysisSetup setup = AnalysisSetup.defaults().withSilhouettes(AnalysisSetup.SilhouetteMode.AUTO);
+    AnalysisSetup setup = AnalysisSetup.indexDefaults();
     try (Library library = Library.open(catalogDir)) {
       obtainLearnedModel(setup.models(), catalogDir);
       out.printf("%nIndexing into the catalog %s ...%n", catalogDir);
@@ -145,7 +145,7 @@ final class DemoCommand implements Callable<Integer> {
     ImageAnalysis vase = first(library, context, libraryDir.resolve("vases"), "vase-");
     heading("Similar images to " + rel(libraryDir, vase.path()) + " (by appearance and shape)");
     for (SimilarityService.Hit h : new SimilarityService(context).similar(vase, 5, SimilarityService.By.BOTH)) {
-      out.printf("  %s  %s%n", Text.num(h.distance(), 3), rel(libraryDir, h.path()));
+      out.printf("  %s  %s%n", Text.num(h.distance(), 4), rel(libraryDir, h.path()));
     }
 
     heading("The most morph-friendly pairs of the library (score 0-100)");

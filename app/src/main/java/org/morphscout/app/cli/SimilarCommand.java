@@ -82,7 +82,7 @@ final class SimilarCommand implements Callable<Integer> {
       } else {
         out.printf("nearest to %s by %s:%n", Terminal.safe(query.path()), by.name().toLowerCase(java.util.Locale.ROOT));
         for (SimilarityService.Hit h : hits) {
-          out.printf("  %s  %s%n", Text.num(h.distance(), 3), Terminal.safe(h.path()));
+          out.printf("  %s  %s%n", Text.num(h.distance(), 4), Terminal.safe(h.path()));
         }
       }
       return ExitCodes.OK;

@@ -160,6 +160,17 @@ class OutputVocabularyTest {
   }
 
   @Test
+  void jsonNumbersArePlainDecimals() {
+    // 0.0005, not 5.0E-4: the shape distances of similar and the step costs of a smooth walk are that small
+    for (Map.Entry<String, Cli.Run> e : JSON.entrySet()) {
+      assertThat(e.getValue().out()).as(e.getKey()).doesNotContainPattern("\\d[eE][-+]?\\d");
+    }
+    java.io.StringWriter small = new java.io.StringWriter();
+    JsonOut.write(new java.io.PrintWriter(small), new java.util.TreeMap<>(Map.of("a", 0.0005, "b", 1.0E-7, "c", 97.1)));
+    assertThat(small.toString()).contains("0.0005", "0.0000001", "97.1").doesNotContain("E-");
+  }
+
+  @Test
   void decisionsShowPeopleALocalDateAndScriptsAnInstant() {
     // Human dates in text (the glossary: 2026-12-03 22:15), ISO-8601 instants for scripts.
     assertThat(TEXT.get("decisions").out()).containsPattern("decided \\d{4}-\\d\\d-\\d\\d \\d\\d:\\d\\d\\n");

@@ -25,7 +25,7 @@ public final class FakeBackends {
       return new Backends(real.similarity(), real.pairs(), (start, end, req, token) -> {
         chainRequests.add(req);
         return List.of(ChainCandidate.of(List.of(start, end),
-            List.of(new ChainStep(start, end, 0.25, java.util.Map.of("appearanceDistance", 0.2, "shapeIncompatibility", 0.3)))));
+            List.of(new ChainStep(start, end, 0.25, java.util.Map.of("appearanceDistance", 0.2, "shapeDistance", 0.3)))));
       }, real.walk(), real.preview(), (folder, progress, token) -> {
         progress.phase("analysing", 4);
         for (int i = 1; i <= 4; i++) {

@@ -15,6 +15,8 @@ import org.morphscout.app.gui.service.ServiceSimilarity;
 import org.morphscout.app.gui.service.ServiceWalk;
 import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.app.gui.task.DirectTaskRunner;
+import org.morphscout.indexer.library.AnalysisSetup;
+import org.morphscout.indexer.library.QueryContext;
 import org.morphscout.indexer.pairing.PairComponent;
 import org.morphscout.indexer.values.ImageRow;
 
@@ -39,6 +41,9 @@ class RealServicesTest {
     try (MainViewModel vm = new MainViewModel(new DirectTaskRunner(), LibraryBackends::create)) {
       vm.open(tmp.resolve("catalog"), true);
       assertThat(vm.messageProperty().get()).isEmpty();
+      // analysed as `index` does without options (auto silhouettes), not with the library's classical default
+      assertThat(vm.session().backends().resources()).isInstanceOfSatisfying(QueryContext.class,
+          c -> assertThat(c.setup()).isEqualTo(AnalysisSetup.indexDefaults()));
       assertThat(vm.library().visible()).isEmpty();
       vm.indexing().add(photos);
       assertThat(vm.indexing().messageProperty().get()).isEmpty();
@@ -119,7 +124,7 @@ class RealServicesTest {
         assertThat(c.images().get(0)).isEqualTo(round.id());
         assertThat(c.images().get(c.images().size() - 1)).isEqualTo(big.id());
         assertThat(c.maxStep()).isEqualTo(c.steps().stream().mapToDouble(s -> s.cost()).max().orElseThrow());
-        assertThat(c.steps()).allSatisfy(s -> assertThat(s.components()).containsKey("pair score"));
+        assertThat(c.steps()).allSatisfy(s -> assertThat(s.components()).containsKey("score"));
       });
       var chain = vm.chains().chains().get(0);
       vm.chains().preview(chain);

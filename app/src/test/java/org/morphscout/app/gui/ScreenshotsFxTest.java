@@ -180,8 +180,11 @@ class ScreenshotsFxTest {
     List<String> similar = vm.library().visible().stream().map(r -> name(r.id())).toList();
     assertThat(similar.stream().filter(n -> !n.endsWith(VASE)).findFirst()).as("nearest shapes %s", similar)
         .hasValueSatisfying(n -> assertThat(n).endsWith(VASE_COPY));
-    // Shape, not colour: most of the nearest outlines are other vases, whatever their glaze.
-    List<ImageRow> nearest = vm.library().visible().subList(0, 5);
+    // Shape, not colour: most of the nearest outlines are other vases, whatever their glaze. The shelf views are
+    // left out: they hold several objects, and the silhouette kept of each (its largest object, found by the learned
+    // model as index's default auto silhouettes choose) is a vase, so they rightly rank near it too.
+    List<ImageRow> nearest = vm.library().visible().stream().filter(r -> !r.path().contains("/shelves/")).limit(5)
+        .toList();
     assertThat(nearest.stream().filter(r -> r.path().contains("/vases/")).count()).as("nearest shapes %s", similar)
         .isGreaterThanOrEqualTo(4);
     shoot(dir, "inspector");
@@ -229,7 +232,6 @@ class ScreenshotsFxTest {
     assertThat(name(partner)).as("best partner of %s", JUG).startsWith("jug-");
     fx(() -> {
       TableView<?> table = (TableView<?>) scene.lookup("#pairs-table");
-      table.getColumns().get(1).setPrefWidth(160); // as a user widens it: the partners' whole names
       table.requestFocus();
       table.getSelectionModel().select(0); // the table lists the best score first
       vm.pairs().approve(best);

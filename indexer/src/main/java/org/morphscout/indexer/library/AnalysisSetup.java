@@ -46,6 +46,16 @@ public record AnalysisSetup(
         ModelFolder.resolve(Optional.empty()));
   }
 
+  /**
+   * What {@code morphscout index} uses without options, and the browser always: {@link #defaults()} with
+   * {@link SilhouetteMode#AUTO} silhouettes (the learned model checks the classical silhouettes that are doubtful,
+   * when it is installed). A low-contrast object (ivory on a cream backdrop) can get a classical silhouette of its
+   * shadowed side in two pieces; the learned model finds the whole object.
+   */
+  public static AnalysisSetup indexDefaults() {
+    return defaults().withSilhouettes(SilhouetteMode.AUTO);
+  }
+
   public AnalysisSetup withModels(ModelFolder folder) {
     return new AnalysisSetup(decode, silhouettes, model, folder);
   }

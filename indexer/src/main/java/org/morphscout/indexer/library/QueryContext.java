@@ -48,6 +48,11 @@ public final class QueryContext implements AutoCloseable {
     return library;
   }
 
+  /** How images outside the catalog are analysed. */
+  public AnalysisSetup setup() {
+    return setup;
+  }
+
   public AnalysisCache cache() {
     return cache;
   }

@@ -37,7 +37,7 @@ public final class Sheets {
       }
       List<Double> scores = d.steps().stream().map(StepDetail::score).map(s -> s.score()).toList();
       rows.add(new ContactSheetRow(String.format(Locale.ROOT,
-          "chain %d · %d steps · largest step %.3f · unevenness %.2f", ++n, d.steps().size(), d.chain().maxStep(),
+          "chain %d · %d steps · largest step %.4f · unevenness %.2f", ++n, d.steps().size(), d.chain().maxStep(),
           d.chain().evenness()), tiles, scores));
     }
     String title = "Chains from " + name(answer.from().path()) + " to " + name(answer.to().path())

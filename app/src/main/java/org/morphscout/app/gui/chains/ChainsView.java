@@ -133,6 +133,7 @@ public final class ChainsView extends BorderPane {
       s.setEditable(true);
     }
     alt.setId("alternatives");
+    alt.setTooltip(new Tooltip("How many chains to find, as chain --count"));
     min.setId("min-steps");
     max.setId("max-steps");
     Slider weight = new Slider(0, 1, vm.shapeWeightProperty().get());
@@ -140,7 +141,7 @@ public final class ChainsView extends BorderPane {
     weight.valueProperty().bindBidirectional(vm.shapeWeightProperty());
     weight.setPrefWidth(160);
     weight.setTooltip(new Tooltip("0 = only appearance counts, 1 = only shape counts"));
-    HBox row1 = new HBox(8, new Label("Alternatives"), alt, new Label("Steps from"), min, new Label("to"), max);
+    HBox row1 = new HBox(8, new Label("Chains"), alt, new Label("Steps from"), min, new Label("to"), max);
     row1.setAlignment(Pos.CENTER_LEFT);
     HBox row2 = new HBox(8, new Label("Appearance"), weight, new Label("Shape"));
     row2.setAlignment(Pos.CENTER_LEFT);
@@ -213,10 +214,10 @@ public final class ChainsView extends BorderPane {
         setGraphic(null);
         return;
       }
-      Label head = new Label(String.format(Locale.ROOT, "Chain %d · %d steps · largest step %.3f · unevenness %.2f",
+      Label head = new Label(String.format(Locale.ROOT, "Chain %d · %d steps · largest step %.4f · unevenness %.2f",
           getIndex() + 1, c.steps().size(), c.maxStep(), c.evenness()));
-      head.setTooltip(new Tooltip("Unevenness: coefficient of variation of the step sizes (0 = every step the same "
-          + "size), as chain reports it"));
+      head.setTooltip(new Tooltip("Unevenness: coefficient of variation of the step costs (0 = every step costs the "
+          + "same), as chain reports it"));
       head.getStyleClass().add("chain-heading");
       Button preview = new Button("Preview");
       preview.getStyleClass().add("small");
@@ -249,16 +250,19 @@ public final class ChainsView extends BorderPane {
     }
 
     private VBox stepLabel(ChainStep s, double max) {
-      Label cost = new Label(String.format(Locale.ROOT, "%.3f", s.cost()));
+      // four decimals, as chain prints them, so neighbouring steps differ
+      Label cost = new Label(String.format(Locale.ROOT, "step cost %.4f", s.cost()));
       cost.getStyleClass().add("step-cost");
       if (s.cost() >= max - 1e-12) {
         cost.getStyleClass().add("step-largest");
       }
-      StringBuilder tip = new StringBuilder("Step size " + String.format(Locale.ROOT, "%.3f", s.cost()));
+      StringBuilder tip = new StringBuilder("Step cost from the image before to the image after: "
+          + String.format(Locale.ROOT, "%.4f", s.cost()));
       VBox box = new VBox(2, cost);
       for (Map.Entry<String, Double> e : s.components().entrySet()) {
-        tip.append('\n').append(e.getKey()).append(": ").append(String.format(Locale.ROOT, "%.3f", e.getValue()));
-        Label part = new Label(String.format(Locale.ROOT, "%s %.2f", abbreviate(e.getKey()), e.getValue()));
+        tip.append('\n').append(e.getKey()).append(": ").append(String.format(Locale.ROOT, "%.4f", e.getValue()));
+        Label part = new Label(String.format(Locale.ROOT, e.getKey().equals("score") ? "%s %.1f" : "%s %.2f",
+            abbreviate(e.getKey()), e.getValue()));
         part.getStyleClass().add("step-part");
         box.getChildren().add(part);
       }
@@ -281,7 +285,9 @@ public final class ChainsView extends BorderPane {
   static String abbreviate(String component) {
     return switch (component) {
       case "appearanceDistance" -> "appearance dist.";
-      case "shapeIncompatibility" -> "shape dist.";
+      case "shapeDistance" -> "shape dist.";
+      case "colourGap" -> "colour gap";
+      case "score" -> "pair score";
       default -> component;
     };
   }

@@ -20,8 +20,10 @@ public final class LibraryBackends {
   private LibraryBackends() {}
 
   public static Backends create(Library library) {
-    QueryContext context = new QueryContext(library, AnalysisSetup.defaults());
-    IndexingBackend indexing = new ServiceIndexing(library, AnalysisSetup.defaults(), IndexOptions.defaults());
+    // the setup `index` uses without options (auto silhouettes), so a folder added here is analysed as there
+    AnalysisSetup setup = AnalysisSetup.indexDefaults();
+    QueryContext context = new QueryContext(library, setup);
+    IndexingBackend indexing = new ServiceIndexing(library, setup, IndexOptions.defaults());
     PairService pairs = new PairService(context, ScoreConfig.DEFAULTS);
     return new Backends(new ServiceSimilarity(context), new ServicePairs(context, pairs),
         new ServiceChains(context, new ChainService(context, pairs)), new ServiceWalk(context, new WalkService(context)),

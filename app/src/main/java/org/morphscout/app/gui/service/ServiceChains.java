@@ -50,10 +50,11 @@ public final class ServiceChains implements ChainsBackend {
       List<ChainStep> steps = new ArrayList<>();
       for (ChainService.StepDetail s : c.steps()) {
         Map<String, Double> parts = new LinkedHashMap<>();
+        // the keys of chain --json's steps, so both say the same
         parts.put("appearanceDistance", s.components().appearanceDistance());
-        parts.put("shapeIncompatibility", s.components().shapeIncompatibility());
-        parts.put("ΔE00", s.components().colourGap());
-        parts.put("pair score", s.score().score());
+        parts.put("shapeDistance", s.components().shapeIncompatibility());
+        parts.put("colourGap", s.components().colourGap());
+        parts.put("score", s.score().score());
         steps.add(new ChainStep(s.a(), s.b(), s.cost(), parts));
       }
       out.add(ChainCandidate.of(c.chain().images(), steps));

@@ -144,7 +144,7 @@ public final class WalkthroughViewModel {
       steps.setAll(s);
       double total = s.stream().mapToDouble(Double::doubleValue).sum();
       double max = s.stream().mapToDouble(Double::doubleValue).max().orElse(0);
-      summary.set(String.format(Locale.ROOT, "%d images · total step cost %.3f · largest step %.3f", ids.size(), total,
+      summary.set(String.format(Locale.ROOT, "%d images · total step cost %.4f · largest step %.4f", ids.size(), total,
           max));
     }, e -> message.set(Messages.of(e)));
   }
