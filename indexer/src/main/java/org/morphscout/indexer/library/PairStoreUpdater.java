@@ -44,6 +44,8 @@ public final class PairStoreUpdater {
 
   private static final Logger LOG = LoggerFactory.getLogger(PairStoreUpdater.class);
   private static final int CHOOSER_BATCH = 64;
+  /** Prepared silhouettes kept while measuring (about 17 MB): a batch's choosers and many of their candidates. */
+  private static final int SHAPES = 512;
 
   private final Library library;
   private final VectorIndex index;
@@ -121,6 +123,7 @@ public final class PairStoreUpdater {
         progress.progressed(done, "");
       }
       int[] counts = new int[3];
+      WarpShapeCache shapes = new WarpShapeCache(measurer, SHAPES);
       progress.phase("measuring pairs", ready.size());
       done = 0;
       for (List<Long> ids : batches(ready, batch)) {
@@ -128,7 +131,7 @@ public final class PairStoreUpdater {
         List<PairStore.Choice> pairs = store.unmeasuredOf(ids, PairMeasurer.VERSION);
         List<Callable<Optional<PairStore.Row>>> work = new ArrayList<>();
         for (PairStore.Choice p : pairs) {
-          work.add(() -> measure(p.chooser(), p.other(), cancel));
+          work.add(() -> measure(p.chooser(), p.other(), shapes, cancel));
         }
         List<PairStore.Row> rows = new ArrayList<>();
         for (Optional<PairStore.Row> r : all(pool, work)) {
@@ -173,7 +176,7 @@ public final class PairStoreUpdater {
     return Optional.of(new Choice(id, ImageFacts.of(a.get()), others));
   }
 
-  private Optional<PairStore.Row> measure(long first, long second, CancellationToken cancel) {
+  private Optional<PairStore.Row> measure(long first, long second, WarpShapeCache shapes, CancellationToken cancel) {
     cancel.throwIfCancelled();
     Optional<ImageAnalysis> a = cache.get(first);
     Optional<ImageAnalysis> b = cache.get(second);
@@ -194,7 +197,7 @@ public final class PairStoreUpdater {
         return Optional.of(new PairStore.Row(first, second, PairStore.Kind.BOUNDED, version,
             StoredPairCodec.pair(cheap.measures(), null)));
       }
-      WarpMeasures warp = WarpMeasures.of(measurer.warp(a.get(), b.get()));
+      WarpMeasures warp = WarpMeasures.of(measurer.warp(shapes.get(first, a.get()), shapes.get(second, b.get())));
       return Optional.of(new PairStore.Row(first, second, PairStore.Kind.MEASURED, version,
           StoredPairCodec.pair(cheap.measures(), warp)));
     } catch (CancellationToken.CancelledException e) {

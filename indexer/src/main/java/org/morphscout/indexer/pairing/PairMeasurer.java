@@ -3,6 +3,7 @@ package org.morphscout.indexer.pairing;
 import org.morphscout.indexer.analysis.ImageAnalysis;
 import org.morphscout.indexer.warp.WarpEstimator;
 import org.morphscout.indexer.warp.WarpResult;
+import org.morphscout.indexer.warp.WarpShape;
 
 /**
  * Measures a pair of analysed pictures into {@link PairFacts}: the cheap measures on their own (to bound the score
@@ -36,6 +37,21 @@ public final class PairMeasurer {
   /** The warp between two pictures that both have an object. */
   public WarpResult warp(ImageAnalysis a, ImageAnalysis b) {
     return warps.estimate(a.silhouette().mask(), b.silhouette().mask());
+  }
+
+  /**
+   * A picture's silhouette prepared for {@link #warp(WarpShape, WarpShape)}, for a caller that warps one picture
+   * with many others.
+   *
+   * @throws IllegalArgumentException when the picture has no object
+   */
+  public WarpShape shape(ImageAnalysis a) {
+    return warps.shape(a.silhouette().mask());
+  }
+
+  /** {@link #warp(ImageAnalysis, ImageAnalysis)} of prepared silhouettes: the same result. */
+  public WarpResult warp(WarpShape a, WarpShape b) {
+    return warps.estimate(a, b);
   }
 
   /** All facts, the warp included (when both pictures have an object). */

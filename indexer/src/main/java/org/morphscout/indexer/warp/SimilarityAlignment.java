@@ -83,8 +83,11 @@ public final class SimilarityAlignment {
    * @throws IllegalArgumentException when either mask is empty
    */
   public Alignment align(Mask a, Mask b) {
-    MaskMoments ma = MaskMoments.of(a);
-    MaskMoments mb = MaskMoments.of(b);
+    return align(a, MaskMoments.of(a), b, MaskMoments.of(b));
+  }
+
+  /** {@link #align(Mask, Mask)} with the masks' moments already known. */
+  Alignment align(Mask a, MaskMoments ma, Mask b, MaskMoments mb) {
     double scale = Math.sqrt(ma.area() / (double) mb.area());
     Canvas canvas = canvasFor(ma, mb, scale);
     float[] gridA = Grids.rasterise(a, canvas);

@@ -35,10 +35,36 @@ public final class WarpEstimator {
     if (a.area() == 0 || b.area() == 0) {
       throw new IllegalArgumentException("cannot estimate a warp with an empty mask");
     }
-    double iouBefore = Grids.quarterIou(Grids.imageRelative(a, gridSize), Grids.imageRelative(b, gridSize));
-    Alignment aligned = alignment.align(a, b);
+    return estimate(shape(a), shape(b));
+  }
+
+  /**
+   * {@link #estimate(Mask, Mask)} of prepared silhouettes: the same result, without preparing a silhouette again for
+   * every pair it is in.
+   *
+   * @throws IllegalArgumentException when a shape was prepared by an estimator of another grid size
+   */
+  public WarpResult estimate(WarpShape a, WarpShape b) {
+    if (a.gridSize() != gridSize || b.gridSize() != gridSize) {
+      throw new IllegalArgumentException("warp shapes were prepared for a " + a.gridSize() + " or " + b.gridSize()
+          + "-pixel grid, this estimator uses " + gridSize);
+    }
+    double iouBefore = Grids.quarterIou(a.imageGrid(), b.imageGrid());
+    Alignment aligned = alignment.align(a.mask(), a.moments(), b.mask(), b.moments());
     DisplacementField field = demons.register(aligned.a(), aligned.b());
     return measure(iouBefore, aligned, field);
+  }
+
+  /**
+   * A silhouette prepared for {@link #estimate(WarpShape, WarpShape)}.
+   *
+   * @throws IllegalArgumentException when the mask is empty
+   */
+  public WarpShape shape(Mask mask) {
+    if (mask.area() == 0) {
+      throw new IllegalArgumentException("cannot estimate a warp with an empty mask");
+    }
+    return new WarpShape(mask, gridSize);
   }
 
   /**

@@ -220,6 +220,25 @@ class ReferenceKernelsTest {
   }
 
   @Test
+  void upsamplingEqualsPerPixelBilinearExactly() {
+    Random r = new Random(SEED);
+    for (int s : new int[] {1, 2, 8, 16, 32}) {
+      float[] u = new float[s * s];
+      for (int i = 0; i < u.length; i++) {
+        u[i] = (float) (5 * r.nextGaussian());
+      }
+      float[] fast = DemonsRegistration.upsample(u, s);
+      int s2 = 2 * s;
+      for (int y = 0; y < s2; y++) {
+        for (int x = 0; x < s2; x++) {
+          float plain = 2f * Grids.bilinear(u, s, s, (x + 0.5) / 2 - 0.5, (y + 0.5) / 2 - 0.5);
+          assertThat(fast[y * s2 + x]).as("(%d,%d) of %d, seed %s", x, y, s, SEED).isEqualTo(plain);
+        }
+      }
+    }
+  }
+
+  @Test
   void angleNormalisationEqualsTheIeeeRemainder() {
     Random r = new Random(SEED);
     double[] edges = {0, -0.0, Math.PI, -Math.PI, 2 * Math.PI, -2 * Math.PI, 2.5 * Math.PI, -2.5 * Math.PI,

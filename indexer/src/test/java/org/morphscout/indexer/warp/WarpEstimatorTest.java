@@ -56,4 +56,29 @@ class WarpEstimatorTest {
     assertThatThrownBy(() -> estimator.estimate(a, Mask.empty(50, 50)))
         .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("empty");
   }
+
+  @Test
+  void preparedShapesGiveTheSameEstimate() {
+    Mask a = TestMasks.draw(200, 200, TestMasks.transformed(TestMasks.vase(0.0),
+        AffineTransform.getTranslateInstance(100, 100)));
+    Mask b = TestMasks.draw(160, 240, TestMasks.transformed(TestMasks.vase(1.0),
+        AffineTransform.getTranslateInstance(70, 110)));
+    WarpShape sa = estimator.shape(a);
+    WarpShape sb = estimator.shape(b);
+    for (Mask[] pair : new Mask[][] {{a, b}, {b, a}, {a, a}}) {
+      WarpResult plain = estimator.estimate(pair[0], pair[1]);
+      WarpResult prepared = estimator.estimate(pair[0] == a ? sa : sb, pair[1] == a ? sa : sb);
+      assertThat(prepared).usingRecursiveComparison().isEqualTo(plain);
+    }
+    assertThatThrownBy(() -> estimator.shape(Mask.empty(50, 50)))
+        .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("empty");
+  }
+
+  @Test
+  void aShapePreparedForAnotherGridIsRefused() {
+    Mask a = TestMasks.ellipse(120, 90, 60, 45, 30, 20);
+    WarpShape coarse = new WarpEstimator(DemonsConfig.DEFAULT.withGridSize(32), true).shape(a);
+    assertThatThrownBy(() -> estimator.estimate(coarse, estimator.shape(a)))
+        .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("32");
+  }
 }
