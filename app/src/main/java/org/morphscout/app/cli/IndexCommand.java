@@ -141,7 +141,7 @@ final class IndexCommand implements Callable<Integer> {
       JsonOut.write(out, doc);
       return;
     }
-    out.printf("%s %d indexed, %d unchanged, %d moved, %d missing, %d failed in %s s%n",
+    out.printf("%s %d analysed, %d unchanged, %d moved, %d missing, %d failed in %s s%n",
         r.cancelled() ? "cancelled after" : "done:", r.indexed(), r.unchanged(), r.moved(), r.missing(), r.failed(),
         Text.num(r.elapsed().toMillis() / 1000.0, 1));
     printReplaced(out, r.replaced());

@@ -73,7 +73,8 @@ final class ScreenCommand implements Callable<Integer> {
           sink.write(r);
         }
         if (!format.json && !format.csv) {
-          out.printf("%d pairs: %d pass, %d warn, %d fail%n", counts.total(), counts.pass, counts.warn, counts.fail);
+          out.printf("%d pair%s: %d pass, %d warn, %d fail%n", counts.total(), counts.total() == 1 ? "" : "s",
+              counts.pass, counts.warn, counts.fail);
         }
       }
       if (counts.total() == 0) {

@@ -72,7 +72,7 @@ final class StatusCommand implements Callable<Integer> {
         doc.put("silhouettes", Map.of("bySource", silhouettes.bySource(), "uncertain", silhouettes.uncertain()));
         Map<String, Object> stored = new LinkedHashMap<>();
         stored.put("pairs", pairs.pairs());
-        stored.put("bounded", pairs.bounded());
+        stored.put("notWarped", pairs.bounded()); // text: "not warped: too poor to show"
         stored.put("duplicates", pairs.duplicates());
         stored.put("stale", pairs.stale());
         stored.put("unmeasured", pairs.unmeasured());

@@ -33,7 +33,7 @@ class OutputVocabularyTest {
       Map.entry("featureModel", "model"), Map.entry("maxStep", "largestStep"), Map.entry("cost", "stepCost"),
       Map.entry("evenness", "unevenness"), Map.entry("overlap", "alignedIou or sharedImages"),
       Map.entry("look", "appearance"), Map.entry("indexed", "analysed or ready"), Map.entry("walkthrough", "walk"),
-      Map.entry("flags", "findings"));
+      Map.entry("flags", "findings"), Map.entry("bounded", "notWarped"));
 
   /** Sub-score names: as keys they may only name sub-scores (higher is better), never a distance. */
   private static final Set<String> SUB_SCORE_ONLY = Set.of("appearance", "shape", "colour", "warpEffort");
@@ -41,7 +41,7 @@ class OutputVocabularyTest {
   /** Words retired from text, help and CSV headers (whole words, any case), with what replaced them. */
   private static final Map<String, String> RETIRED_WORDS = Map.of(
       "roots?", "folders", "walkthroughs?", "walk", "evenness", "unevenness", "featureModel", "model",
-      "[KM]B", "KiB / MiB", "a,b", "first,second");
+      "[KM]B", "KiB / MiB", "a,b", "first,second", "\\d+ indexed", "analysed (a count) or ready (a state)");
 
   @TempDir static Path tmp;
   static TestLibrary lib;
@@ -81,6 +81,7 @@ class OutputVocabularyTest {
       TEXT.put(command + " --help", Cli.runRaw(command, "--help").succeeds());
     }
     TEXT.put("--help", Cli.runRaw("--help").succeeds());
+    TEXT.put("index", cli.run("index").succeeds());
   }
 
   private static String[] with(List<String> line, String option) {

@@ -73,6 +73,14 @@ public final class IndexingView extends BorderPane {
     TableColumn<ImageFailure, String> path = new TableColumn<>("File");
     path.setCellValueFactory(c -> new ReadOnlyStringWrapper(c.getValue().path()));
     path.setPrefWidth(420);
+    path.setCellFactory(c -> new javafx.scene.control.TableCell<>() {
+      @Override
+      protected void updateItem(String p, boolean empty) {
+        super.updateItem(p, empty);
+        setText(empty ? null : p);
+        setTextOverrun(javafx.scene.control.OverrunStyle.LEADING_ELLIPSIS); // a long path keeps its file name
+      }
+    });
     TableColumn<ImageFailure, String> reason = new TableColumn<>("Why it failed");
     reason.setCellValueFactory(c -> new ReadOnlyStringWrapper(c.getValue().reason()));
     reason.setPrefWidth(420);

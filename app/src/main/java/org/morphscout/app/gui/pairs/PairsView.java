@@ -219,6 +219,15 @@ public final class PairsView extends BorderPane {
       double width) {
     TableColumn<PairRow, String> c = new TableColumn<>(title);
     c.setCellValueFactory(d -> new ReadOnlyStringWrapper(f.apply(d.getValue())));
+    c.setCellFactory(col -> new TableCell<>() {
+      @Override
+      protected void updateItem(String s, boolean empty) {
+        super.updateItem(s, empty);
+        setText(empty ? null : s);
+        // a cut name keeps its start and its number: jug-ce…-035.jpg
+        setTextOverrun(javafx.scene.control.OverrunStyle.CENTER_ELLIPSIS);
+      }
+    });
     fitTitle(c);
     c.setPrefWidth(Math.max(width, c.getMinWidth()));
     return c;

@@ -12,7 +12,7 @@ import org.morphscout.indexer.pairing.ScoreConfig;
 
 /**
  * The browser's backends: the library's own services (similarity through the vector index, pairs, chains,
- * walkthroughs, preview morphs, indexing) with the command line's defaults, so the browser and the command line give
+ * walks, preview morphs, indexing) with the command line's defaults, so the browser and the command line give
  * the same answers for the same catalog. A catalog without a vector folder is searched exactly over its stored
  * vectors ({@link QueryContext#index()}).
  */

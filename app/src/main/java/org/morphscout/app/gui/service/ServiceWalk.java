@@ -13,7 +13,7 @@ import org.morphscout.indexer.library.WalkService;
 import org.morphscout.indexer.progress.CancellationToken;
 
 /**
- * Walkthroughs through the library's {@link WalkService} with the default step cost; steps of a hand-edited order
+ * Walks through the library's {@link WalkService} with the default step cost; steps of a hand-edited order
  * are measured with the same cost ({@link StepCostModel#DEFAULT} over {@link StepFeatures}), so the numbers agree.
  */
 public final class ServiceWalk implements WalkBackend {

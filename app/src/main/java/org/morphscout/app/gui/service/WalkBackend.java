@@ -3,7 +3,7 @@ package org.morphscout.app.gui.service;
 import java.util.List;
 import org.morphscout.indexer.progress.CancellationToken;
 
-/** Orders a set of images into a smooth walkthrough and measures the steps of any order. */
+/** Orders a set of images into a smooth walk and measures the steps of any order. */
 public interface WalkBackend {
   /** The same images in a smooth order. */
   List<Long> order(List<Long> ids, CancellationToken token);
