@@ -33,10 +33,10 @@ import org.testfx.util.WaitForAsyncUtils;
 /**
  * Every table of the browser, filled by the library's real services, at the window's default size
  * ({@link WindowSettings#DEFAULTS}): each visible column shows its whole title (no ellipsis) and no table needs a
- * horizontal scroll bar.
+ * horizontal scroll bar; and no text on screen uses a word the glossary retired.
  */
 @ExtendWith(ApplicationExtension.class)
-class ColumnTitlesFxTest {
+class DefaultWindowFxTest {
   static {
     HeadlessFx.configure();
   }
@@ -110,6 +110,60 @@ class ColumnTitlesFxTest {
     HeadlessFx.waitUntil(60, () -> !vm.pairs().runningProperty().get() && !vm.pairs().rows().isEmpty());
     assertThat(vm.pairs().messageProperty().get()).isEmpty();
     checkTable("#pairs-table", 5);
+
+    // The words people read in every pane (labels, buttons, tabs, column titles, prompts, tooltips) use the
+    // glossary's words: none of those it retired (README, Glossary).
+    List<String> retired = new ArrayList<>();
+    fx(() -> retired.addAll(retiredWords(scene.getRoot())));
+    assertThat(retired).as("retired words on screen").isEmpty();
+  }
+
+  /** Retired words (whole words, any case) in the texts under {@code node}, each with the text it is in. */
+  private static List<String> retiredWords(Node node) {
+    java.util.regex.Pattern retired = java.util.regex.Pattern.compile(
+        "(?i)(?<![\\w-])(walkthroughs?|roots?|evenness|look|flags?|indexed|overlap|[KM]B|alternatives)(?![\\w-])");
+    List<String> texts = new ArrayList<>();
+    collect(node, texts);
+    assertThat(texts).as("texts on screen").hasSizeGreaterThan(40);
+    return texts.stream().filter(t -> retired.matcher(t).find()).toList();
+  }
+
+  private static void collect(Node node, List<String> texts) {
+    if (node instanceof javafx.scene.control.Labeled l) {
+      add(texts, l.getText());
+      if (l.getTooltip() != null) {
+        add(texts, l.getTooltip().getText());
+      }
+    }
+    if (node instanceof javafx.scene.control.TextInputControl t) {
+      add(texts, t.getPromptText());
+    }
+    if (node instanceof TableView<?> table) {
+      table.getColumns().forEach(c -> add(texts, c.getText()));
+    }
+    if (node instanceof javafx.scene.control.TabPane tabs) {
+      tabs.getTabs().forEach(t -> {
+        add(texts, t.getText());
+        if (t.getContent() != null) {
+          collect(t.getContent(), texts);
+        }
+      });
+    }
+    if (node instanceof javafx.scene.control.MenuBar bar) {
+      bar.getMenus().forEach(m -> {
+        add(texts, m.getText());
+        m.getItems().forEach(i -> add(texts, i.getText()));
+      });
+    }
+    if (node instanceof javafx.scene.Parent p) {
+      p.getChildrenUnmodifiable().forEach(c -> collect(c, texts));
+    }
+  }
+
+  private static void add(List<String> texts, String text) {
+    if (text != null && !text.isBlank()) {
+      texts.add(text);
+    }
   }
 
   /**
