@@ -15,8 +15,9 @@ public final class PairMeasurer {
    * it calls: warp estimation, colour difference, the analysis) would give other facts for the same pictures, so
    * catalogs know which stored pairs are stale.
    */
-  public static final int VERSION = 3; // 2: near-duplicates also need the object in the same place; 3: fewer demons
-  // iterations at the finer levels (DemonsConfig.DEFAULT)
+  public static final int VERSION = 4; // 2: near-duplicates also need the object in the same place; 3: fewer demons
+  // iterations at the finer levels (DemonsConfig.DEFAULT); 4: 5 iterations at the finest level and scaling and
+  // squaring down to one pixel (DemonsRegistration.EXP_MAX_STEP)
 
   private final ColourDifference colour;
   private final WarpEstimator warps;

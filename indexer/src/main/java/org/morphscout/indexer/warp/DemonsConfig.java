@@ -10,11 +10,14 @@ import java.util.List;
  *     time. Must be divisible by 2^(levels - 1) and leave at least 8 pixels at the coarsest level.
  * @param levels pyramid levels, coarse to fine, 1..4 (default 3: 16, 32, 64 pixels). More levels catch larger
  *     displacements.
- * @param iterations demons iterations per level, coarsest first (default 40, 20, 6); the coarse levels are cheap,
+ * @param iterations demons iterations per level, coarsest first (default 40, 20, 5); the coarse levels are cheap,
  *     so most of the work is spent there, and the finest level only refines (one of its iterations costs as much as
  *     16 at the coarsest). Measured on the 4,729 warped pairs of the demo library against the earlier 40, 25, 12:
- *     the warp costs about a third less, pair scores move by 0.04 points on average and at most 1.4 (of 100), the
- *     warped IoU by at most 0.032 and the mean displacement by at most 0.022 (object sizes).
+ *     40, 20, 6 cost about a third less, pair scores moved by 0.04 points on average and at most 1.4 (of 100), the
+ *     warped IoU by at most 0.032 and the mean displacement by at most 0.022 (object sizes). 5 instead of 6 at the
+ *     finest level, with the coarser scaling and squaring of {@link DemonsRegistration}, moved them by 0.01 on
+ *     average and at most 0.46 (docs/BENCHMARKS.md). The coarsest level stops after about 11 iterations on average
+ *     (its update stalls), the middle one after 12 or 13, the finest runs all of its own.
  * @param sigmaFluid standard deviation in pixels of the Gaussian applied to each update field (fluid-like
  *     regularisation, default 1.0; 0 disables). Larger values give smoother but slower-converging updates.
  * @param sigmaDiffusion standard deviation in pixels of the Gaussian applied to the accumulated field after each
@@ -25,7 +28,7 @@ import java.util.List;
 public record DemonsConfig(
     int gridSize, int levels, List<Integer> iterations, double sigmaFluid, double sigmaDiffusion, double maxStep) {
 
-  public static final DemonsConfig DEFAULT = new DemonsConfig(64, 3, List.of(40, 20, 6), 1.0, 1.0, 2.0);
+  public static final DemonsConfig DEFAULT = new DemonsConfig(64, 3, List.of(40, 20, 5), 1.0, 1.0, 2.0);
 
   public DemonsConfig {
     if (levels < 1 || levels > 4) {

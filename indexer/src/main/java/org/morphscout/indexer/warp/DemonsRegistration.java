@@ -15,14 +15,25 @@ package org.morphscout.indexer.warp;
  * (not intensities), so the forces reach beyond the outline; the gradient is the symmetric (ESM) average of the fixed
  * and warped moving gradients, as the same authors recommend; the smoothing is applied to the displacement field
  * (s minus identity); a fixed iteration budget per pyramid level, with an early stop when the update vanishes or
- * the sum of squared differences stalls, replaces the paper's convergence test; samples outside the grid are clamped
- * to the border.
+ * the sum of squared differences stalls, replaces the paper's convergence test; scaling and squaring scales an update
+ * down to at most one pixel, not half a pixel ({@link #EXP_MAX_STEP}); samples outside the grid are clamped to the
+ * border.
  *
  * <p>Immutable and thread-safe: each call allocates its own working arrays.
  */
 public final class DemonsRegistration {
   /** Relative energy improvement below which an iteration counts as stalled. */
   private static final double STALL_RATIO = 0.005;
+
+  /**
+   * Scaling and squaring halves an update until its longest vector is at most this, in pixels of the level, before
+   * composing it with itself. The paper suggests half a pixel (from memory of its exponential-map section); one
+   * pixel needs one composition fewer wherever the update
+   * is longer than half a pixel (a third of the compositions on the demo library) and, measured on its 4,723 warped
+   * pairs together with 5 instead of 6 iterations at the finest level, moves pair scores by 0.01 points on average
+   * and at most 0.46 (of 100), the warped IoU by at most 0.011 (docs/BENCHMARKS.md).
+   */
+  private static final double EXP_MAX_STEP = 1.0;
 
   private final DemonsConfig config;
 
@@ -198,14 +209,17 @@ public final class DemonsRegistration {
       }
     }
 
-    /** exp(v) in place by scaling and squaring: scale until |v| <= 0.5 px, then compose with itself N times. */
+    /**
+     * exp(v) in place by scaling and squaring: scale until |v| <= {@link #EXP_MAX_STEP}, then compose with itself N
+     * times.
+     */
     private void exponentiate() {
       double max2 = 0;
       for (int i = 0; i < vx.length; i++) {
         max2 = Math.max(max2, vx[i] * vx[i] + vy[i] * vy[i]);
       }
       double max = Math.sqrt(max2);
-      int steps = max <= 0.5 ? 0 : (int) Math.ceil(Math.log(max / 0.5) / Math.log(2));
+      int steps = max <= EXP_MAX_STEP ? 0 : (int) Math.ceil(Math.log(max / EXP_MAX_STEP) / Math.log(2));
       if (steps == 0) {
         return; // already small: exp(v) ~ id + v to first order, as in the paper's N = 0 case
       }
