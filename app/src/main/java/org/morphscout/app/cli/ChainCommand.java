@@ -204,7 +204,7 @@ final class ChainCommand implements Callable<Integer> {
       for (StepDetail s : d.steps()) {
         Map<String, Object> st = step(s, path);
         out.printf("    step cost %s | score %s %s | aligned IoU %s, mean displacement %s, colour gap %s%n  %s%n",
-            Text.step(s.cost()), Text.num(s.score().score(), 0), s.score().verdict().label(), st.get("alignedIou"),
+            Text.step(s.cost()), Text.num(s.score().score(), 1), s.score().verdict().label(), st.get("alignedIou"),
             st.get("meanDisplacement"), st.get("colourGap"), Terminal.safe(path.apply(s.b())));
       }
     }
