@@ -85,22 +85,22 @@ final class StatusCommand implements Callable<Integer> {
         JsonOut.write(out, doc);
         return checked == null || checked.ok() ? ExitCodes.OK : ExitCodes.ERROR;
       }
-      out.printf("catalog   %s (%s)%n", Terminal.safe(library.dir().toString()), Text.bytes(bytes));
-      out.printf("model     %s%n", model);
-      out.printf("folders   %s%n",
-          folders.isEmpty() ? "none" : String.join("\n          ", folders.stream().map(Terminal::safe).toList()));
-      out.printf("images    %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
+      out.printf("catalog     %s (%s)%n", Terminal.safe(library.dir().toString()), Text.bytes(bytes));
+      out.printf("model       %s%n", model);
+      out.printf("folders     %s%n",
+          folders.isEmpty() ? "none" : String.join("\n            ", folders.stream().map(Terminal::safe).toList()));
+      out.printf("images      %d ready, %d pending, %d failed, %d missing%n", counts.get(ImageStatus.READY),
           counts.get(ImageStatus.PENDING), counts.get(ImageStatus.FAILED), counts.get(ImageStatus.MISSING));
-      out.printf("decisions %d%n", library.decisions().count());
+      out.printf("decisions   %d%n", library.decisions().count());
       out.printf("silhouettes %s; %d uncertain%n", silhouettes.bySource().isEmpty() ? "none yet"
           : String.join(", ", silhouettes.bySource().entrySet().stream().map(e -> e.getValue() + " " + e.getKey())
               .toList()), silhouettes.uncertain());
-      out.printf("pairs     %d stored (%d not warped: too poor to show, %d near-duplicates)%s%n", pairs.pairs(),
+      out.printf("pairs       %d stored (%d not warped: too poor to show, %d near-duplicates)%s%n", pairs.pairs(),
           pairs.bounded(), pairs.duplicates(), pairs.complete() ? "; pair queries read them"
               : "; not up to date (" + pairs.waiting() + " images waiting, " + pairs.stale() + " stale, "
                   + pairs.unmeasured() + " unmeasured): pair queries score live until index runs");
       if (checked != null) {
-        out.printf("check     database: %s%n          vector index: %s%n", Terminal.safe(checked.database()),
+        out.printf("check       database: %s%n            vector index: %s%n", Terminal.safe(checked.database()),
             Terminal.safe(checked.vectors()));
       }
       if (!failures.isEmpty()) {
