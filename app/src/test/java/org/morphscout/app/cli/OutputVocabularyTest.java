@@ -61,7 +61,10 @@ class OutputVocabularyTest {
     String last = Cli.abs(lib.family.get(lib.family.size() - 1));
     JSON.put("decide --json", cli.run("decide", first, second, "approve", "--note", "kept", "--json").succeeds());
     Path plan = tmp.resolve("plan.csv");
-    Files.writeString(plan, "first,second,shot\n" + first + "," + last + ",one\n");
+    // the second row pairs a family member with unrelated pictures, so the reasons have something to say
+    Files.writeString(plan, "first,second,shot\n" + first + "," + last + ",one\n" + first + ","
+        + Cli.abs(lib.unrelated.get(0)) + ",two\n" + Cli.abs(lib.distractors.get(0)) + ","
+        + Cli.abs(lib.unrelated.get(lib.unrelated.size() - 1)) + ",three\n");
     List<List<String>> lines = List.of(
         List.of("status"), List.of("similar", first, "--count", "3"), List.of("pairs", "--count", "5"),
         List.of("pairs", "--duplicates"), List.of("pairs", "--for", first, "--count", "3"),
@@ -158,6 +161,17 @@ class OutputVocabularyTest {
       }
     }
     assertThat(found).as("retired words (%s), by command line", RETIRED_WORDS).isEmpty();
+  }
+
+  @Test
+  void reasonsNameThePicturesFirstAndSecond() {
+    // "the first picture is tiny", not "A is tiny": the pair's pictures are first and second in prose too
+    List<String> reasons = new ArrayList<>();
+    for (Cli.Run run : JSON.values()) {
+      run.json().findValues("reasons").forEach(list -> list.forEach(r -> reasons.add(r.asText())));
+    }
+    assertThat(reasons).as("reasons seen").isNotEmpty();
+    assertThat(reasons).noneMatch(r -> Pattern.compile("(?<![\\w'-])[AB](?![\\w-])").matcher(r).find());
   }
 
   @Test
