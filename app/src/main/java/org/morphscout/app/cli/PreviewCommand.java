@@ -24,7 +24,7 @@ import picocli.CommandLine.Spec;
     header = "Write a cheap preview morph along two or more images: an animated GIF or a PNG strip.",
     description = "Each step warps both images with the displacement field estimated between their silhouettes and "
         + "cross-dissolves them. It is a preview for judging pairs and chains, not a renderer. Images may be catalog "
-        + "images or any image files.")
+        + "images or any image files. A PNG strip carries a legend line above its frames.")
 final class PreviewCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;

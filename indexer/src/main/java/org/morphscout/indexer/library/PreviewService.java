@@ -69,6 +69,13 @@ public final class PreviewService {
     OutputFile.check(out, inputs);
   }
 
+  /** The strip's legend: what the frames are, from which picture to which. */
+  static String legend(int frames, List<Path> inputs) {
+    String route = inputs.size() < 2 ? "" : " from " + inputs.get(0).getFileName() + " to "
+        + inputs.get(inputs.size() - 1).getFileName();
+    return frames + " preview frames" + route + ", left to right: a quick warp and cross-fade, not a final render";
+  }
+
   /** Writes frames as an animated GIF ({@code .gif}) or a PNG strip ({@code .png}), never over one of the inputs. */
   public static void write(List<BufferedImage> frames, Path out, int frameDelayMs, List<Path> inputs)
       throws IOException {
@@ -78,7 +85,7 @@ public final class PreviewService {
       if (gif) {
         AnimatedGifWriter.write(frames, frameDelayMs, temp);
       } else {
-        FrameStrip.write(frames, temp);
+        FrameStrip.write(frames, legend(frames.size(), inputs), temp);
       }
     });
   }

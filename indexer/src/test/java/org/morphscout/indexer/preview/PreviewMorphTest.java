@@ -178,6 +178,20 @@ class PreviewMorphTest {
     Path png = dir.resolve("strip.png");
     FrameStrip.write(frames, png);
     assertThat(ImageIO.read(png.toFile()).getWidth()).isEqualTo(3 * 320 + 2 * 4);
+
+    // with a legend: a band above the frames holding dark text, the frames below it unchanged
+    Path withLegend = dir.resolve("strip-with-legend.png");
+    FrameStrip.write(frames, "3 preview frames, left to right", withLegend);
+    BufferedImage read = ImageIO.read(withLegend.toFile());
+    assertThat(read.getHeight()).isEqualTo(240 + FrameStrip.LEGEND_BAND);
+    assertThat(read.getRGB(2 * 324 + 150, FrameStrip.LEGEND_BAND + 100)).isEqualTo(frames.get(2).getRGB(150, 100));
+    int dark = 0;
+    for (int y = 0; y < FrameStrip.LEGEND_BAND; y++) {
+      for (int x = 0; x < 200; x++) {
+        dark += (read.getRGB(x, y) & 0xFF) < 128 ? 1 : 0;
+      }
+    }
+    assertThat(dark).as("dark pixels of the legend's text").isGreaterThan(50);
   }
 
   @Test
