@@ -11,28 +11,44 @@ final class Grids {
 
   /** A's mask on the canvas: per-pixel object coverage in [0, 1], from 2x2 supersampling. */
   static float[] rasterise(Mask a, Canvas canvas) {
-    return rasterise(a, canvas, new double[] {1, 0, 0, 0, 1, 0});
+    return rasterise(a, canvas, IDENTITY, 0, 0, a.width(), a.height());
   }
 
   /** B's mask on the canvas through the similarity that maps B onto A. */
   static float[] rasterise(Mask b, Canvas canvas, Similarity sim) {
-    return rasterise(b, canvas, sim.inverseMatrix());
+    return rasterise(b, canvas, sim.inverseMatrix(), 0, 0, b.width(), b.height());
   }
+
+  /** {@link #rasterise(Mask, Canvas)} knowing where A's object lies (its moments' box): the same grid, sooner. */
+  static float[] rasterise(Mask a, MaskMoments box, Canvas canvas) {
+    return rasterise(a, canvas, IDENTITY, (int) box.minX(), (int) box.minY(), (int) box.maxX(), (int) box.maxY());
+  }
+
+  /** {@link #rasterise(Mask, Canvas, Similarity)} knowing where B's object lies: the same grid, sooner. */
+  static float[] rasterise(Mask b, MaskMoments box, Canvas canvas, Similarity sim) {
+    return rasterise(b, canvas, sim.inverseMatrix(), (int) box.minX(), (int) box.minY(), (int) box.maxX(),
+        (int) box.maxY());
+  }
+
+  private static final double[] IDENTITY = {1, 0, 0, 0, 1, 0};
 
   /**
    * @param m 2x3 matrix from A-mask coordinates to the sampled mask's coordinates
+   * @param x0 the sampled mask's first column that may hold object pixels; {@code y0} its first row, {@code x1} and
+   *     {@code y1} one past its last column and row
    */
-  private static float[] rasterise(Mask mask, Canvas canvas, double[] m) {
+  private static float[] rasterise(Mask mask, Canvas canvas, double[] m, int x0, int y0, int x1, int y1) {
     int n = canvas.size();
     int w = mask.width();
     int h = mask.height();
     byte[] d = mask.data();
     // The matrix's terms of each sample column and row, computed once (the same products as sample by sample, so
     // the same coordinates to the last bit): sample s of column i is index 2 i + s, with sub-pixel offset SUB[s].
-    double[] colX = new double[2 * n];
-    double[] colY = new double[2 * n];
-    double[] rowX = new double[2 * n];
-    double[] rowY = new double[2 * n];
+    int samples = 2 * n;
+    double[] colX = new double[samples];
+    double[] colY = new double[samples];
+    double[] rowX = new double[samples];
+    double[] rowY = new double[samples];
     for (int i = 0; i < n; i++) {
       for (int s = 0; s < 2; s++) {
         double ax = canvas.maskX(i + SUB[s]);
@@ -43,23 +59,67 @@ final class Grids {
         rowY[2 * i + s] = m[4] * ay;
       }
     }
-    float[] out = new float[n * n];
-    for (int j = 0; j < n; j++) {
-      for (int i = 0; i < n; i++) {
-        int hits = 0;
-        for (int sy = 2 * j; sy < 2 * j + 2; sy++) {
-          for (int sx = 2 * i; sx < 2 * i + 2; sx++) {
-            int x = (int) Math.floor(colX[sx] + rowX[sy] + m[2]);
-            int y = (int) Math.floor(colY[sx] + rowY[sy] + m[5]);
-            if (x >= 0 && y >= 0 && x < w && y < h && d[y * w + x] != 0) {
-              hits++;
-            }
-          }
+    int[] hits = new int[n * n];
+    for (int sy = 0; sy < samples; sy++) {
+      double rx = rowX[sy];
+      double ry = rowY[sy];
+      // Along a row of samples the mask coordinates are monotone (each step adds the same kind of term, and rounding
+      // keeps order), so the samples that land in the object's box form one run: found by bisection, the samples
+      // outside it are skipped, which cannot change a count.
+      int from = Math.max(run(colX, rx, m[2], x0, x1, true), run(colY, ry, m[5], y0, y1, true));
+      int to = Math.min(run(colX, rx, m[2], x0, x1, false), run(colY, ry, m[5], y0, y1, false));
+      int row = (sy >> 1) * n;
+      for (int sx = from; sx < to; sx++) {
+        int x = (int) Math.floor(colX[sx] + rx + m[2]);
+        int y = (int) Math.floor(colY[sx] + ry + m[5]);
+        if (x >= 0 && y >= 0 && x < w && y < h && d[y * w + x] != 0) {
+          hits[row + (sx >> 1)]++;
         }
-        out[j * n + i] = hits * 0.25f;
       }
     }
+    float[] out = new float[n * n];
+    for (int i = 0; i < out.length; i++) {
+      out[i] = hits[i] * 0.25f;
+    }
     return out;
+  }
+
+  /**
+   * The first sample index (when {@code first}) or one past the last whose coordinate {@code floor(c[k] + r + t)}
+   * lies in [lo, hi), for {@code c} monotone; an empty run gives first >= end.
+   */
+  private static int run(double[] c, double r, double t, int lo, int hi, boolean first) {
+    int count = c.length;
+    boolean rising = cell(c, 0, r, t) <= cell(c, count - 1, r, t);
+    if (rising) {
+      // Cells rise with k: those >= lo start at the first such k, those < hi end before the first k at >= hi.
+      return first ? firstWhere(c, r, t, lo, true) : firstWhere(c, r, t, hi, true);
+    }
+    // Cells fall with k: those < hi start at the first k below hi, those >= lo end before the first k below lo.
+    return first ? firstWhere(c, r, t, hi, false) : firstWhere(c, r, t, lo, false);
+  }
+
+  /**
+   * The first k with {@code cell(k) >= bound} (rising cells, {@code atLeast}) or {@code cell(k) < bound} (falling
+   * cells), by bisection; {@code c.length} when there is none.
+   */
+  private static int firstWhere(double[] c, double r, double t, int bound, boolean atLeast) {
+    int lo = 0;
+    int hi = c.length;
+    while (lo < hi) {
+      int mid = (lo + hi) >>> 1;
+      int v = cell(c, mid, r, t);
+      if (atLeast ? v >= bound : v < bound) {
+        hi = mid;
+      } else {
+        lo = mid + 1;
+      }
+    }
+    return lo;
+  }
+
+  private static int cell(double[] c, int k, double r, double t) {
+    return (int) Math.floor(c[k] + r + t);
   }
 
   /** A mask resampled onto an n x n grid in image-relative coordinates (the grid spans the whole image). */

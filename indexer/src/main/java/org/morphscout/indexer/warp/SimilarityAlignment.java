@@ -90,7 +90,7 @@ public final class SimilarityAlignment {
   Alignment align(Mask a, MaskMoments ma, Mask b, MaskMoments mb) {
     double scale = Math.sqrt(ma.area() / (double) mb.area());
     Canvas canvas = canvasFor(ma, mb, scale);
-    float[] gridA = Grids.rasterise(a, canvas);
+    float[] gridA = Grids.rasterise(a, ma, canvas);
 
     List<Similarity> candidates = new ArrayList<>();
     List<Similarity> turned = new ArrayList<>(); // beyond the rotation limit: only reported
@@ -121,7 +121,7 @@ public final class SimilarityAlignment {
     double bestIou = -1;
     for (Turn t : ordered) {
       Similarity sim = t.sim();
-      float[] gridB = Grids.rasterise(b, canvas, sim);
+      float[] gridB = Grids.rasterise(b, mb, canvas, sim);
       double iou = Grids.quarterIou(gridA, gridB);
       double needed = best != null && t.turn() > LARGE_ROTATION && bestTurn <= LARGE_ROTATION
           ? LARGE_ROTATION_MARGIN : TIE_MARGIN;
@@ -135,7 +135,7 @@ public final class SimilarityAlignment {
     double turnedIou = Double.NaN;
     double turnedRotation = Double.NaN;
     for (Similarity sim : turned) {
-      double iou = Grids.quarterIou(gridA, Grids.rasterise(b, canvas, sim));
+      double iou = Grids.quarterIou(gridA, Grids.rasterise(b, mb, canvas, sim));
       if (Double.isNaN(turnedIou) || iou > turnedIou) {
         turnedIou = iou;
         turnedRotation = sim.rotation();

@@ -179,9 +179,13 @@ class ReferenceKernelsTest {
   @Test
   void rasterisingEqualsAPlainPerSampleLoopExactly() {
     Random r = new Random(SEED);
-    org.morphscout.indexer.silhouette.Mask mask = TestMasks.ellipse(97, 80, 45, 38, 30, 21);
-    double covered = 0;
-    for (int round = 0; round < 40; round++) {
+    // A large object, and a small one off-centre in its mask (a box much smaller than the mask).
+    org.morphscout.indexer.silhouette.Mask[] masks = {TestMasks.ellipse(97, 80, 45, 38, 30, 21),
+        TestMasks.ellipse(97, 80, 72, 18, 9, 6)};
+    double[] covered = new double[2];
+    for (int round = 0; round < 200; round++) {
+      org.morphscout.indexer.silhouette.Mask mask = masks[round % 2];
+      MaskMoments box = MaskMoments.of(mask);
       int n = 8 + r.nextInt(60);
       Canvas canvas = new Canvas(n, 0.3 + r.nextDouble(), -20 + 30 * r.nextDouble(), -20 + 30 * r.nextDouble());
       Similarity sim = Similarity.through(0.5 + r.nextDouble(), (r.nextDouble() - 0.5) * 2 * Math.PI,
@@ -190,9 +194,15 @@ class ReferenceKernelsTest {
           .containsExactly(plainRasterise(mask, canvas, new double[] {1, 0, 0, 0, 1, 0}));
       assertThat(Grids.rasterise(mask, canvas, sim)).as("B, round %d, seed %s", round, SEED)
           .containsExactly(plainRasterise(mask, canvas, sim.inverseMatrix()));
-      covered += Grids.sum(Grids.rasterise(mask, canvas, sim));
+      // Knowing the object's box, samples outside it are skipped: the same grids.
+      assertThat(Grids.rasterise(mask, box, canvas)).as("A in its box, round %d, seed %s", round, SEED)
+          .containsExactly(plainRasterise(mask, canvas, new double[] {1, 0, 0, 0, 1, 0}));
+      assertThat(Grids.rasterise(mask, box, canvas, sim)).as("B in its box, round %d, seed %s", round, SEED)
+          .containsExactly(plainRasterise(mask, canvas, sim.inverseMatrix()));
+      covered[round % 2] += Grids.sum(Grids.rasterise(mask, canvas, sim)) + Grids.sum(Grids.rasterise(mask, canvas));
     }
-    assertThat(covered).as("the canvases must see the object, seed %s", SEED).isGreaterThan(100);
+    assertThat(covered[0]).as("the canvases must see the large object, seed %s", SEED).isGreaterThan(50);
+    assertThat(covered[1]).as("the canvases must see the small object, seed %s", SEED).isGreaterThan(50);
   }
 
   /** 2x2 supersampling, each sample's mask coordinates computed on its own. */
