@@ -81,7 +81,9 @@ class DefaultWindowFxTest {
     Color[] colours = {new Color(0xC0504D), new Color(0x4F81BD), new Color(0x9BBB59)};
     for (String kind : kinds) {
       for (int i = 0; i < 3; i++) {
-        SampleCatalog.Picture p = new SampleCatalog.Picture("", kind + "-" + i + ".png", kind, 0.5 + 0.15 * i,
+        // names as long as a camera's or a studio's, so titles and status lines have something to cut
+        SampleCatalog.Picture p = new SampleCatalog.Picture("", "studio-shot-2026-12-04-" + kind + "-" + i + ".png",
+            kind, 0.5 + 0.15 * i,
             colours[i], 0, 0, false);
         ImageIO.write(SampleCatalog.draw(p, 320, 240, true), "png", photos.resolve(p.name()).toFile());
       }
@@ -100,6 +102,7 @@ class DefaultWindowFxTest {
     HeadlessFx.waitUntil(120, () -> !vm.indexing().runningProperty().get() && !vm.indexing().failures().isEmpty());
     assertThat(vm.indexing().messageProperty().get()).isEmpty();
     checkTable("#failures", 1);
+    checkButtons("Indexing");
 
     ImageRow round = vm.session().rows().stream().filter(r -> r.path().endsWith("round-0.png")).findFirst()
         .orElseThrow();
@@ -109,13 +112,44 @@ class DefaultWindowFxTest {
     });
     HeadlessFx.waitUntil(60, () -> !vm.pairs().runningProperty().get() && !vm.pairs().rows().isEmpty());
     assertThat(vm.pairs().messageProperty().get()).isEmpty();
+    fx(() -> vm.pairs().reject(vm.pairs().rows().get(vm.pairs().rows().size() - 1))); // the status line has text
+    HeadlessFx.waitUntil(30, () -> !vm.pairs().infoProperty().get().isEmpty());
     checkTable("#pairs-table", 5);
+    checkButtons("Pairs");
 
     // The words people read in every pane (labels, buttons, tabs, column titles, prompts, tooltips) use the
     // glossary's words: none of those it retired (README, Glossary).
     List<String> retired = new ArrayList<>();
     fx(() -> retired.addAll(retiredWords(scene.getRoot())));
     assertThat(retired).as("retired words on screen").isEmpty();
+  }
+
+  /** No button shown on screen (the pane on show, the menu bar, the inspector) cuts its label. */
+  private void checkButtons(String pane) throws Exception {
+    List<String> cut = new ArrayList<>();
+    int[] seen = new int[1];
+    fx(() -> {
+      for (Node n : scene.getRoot().lookupAll(".button")) {
+        if (n instanceof javafx.scene.control.Button b && shown(b) && b.getText() != null && !b.getText().isEmpty()) {
+          seen[0]++;
+          Text t = (Text) b.lookup(".text");
+          if (t == null || !b.getText().equals(t.getText())) {
+            cut.add(b.getText() + " shown as '" + (t == null ? "" : t.getText()) + "'");
+          }
+        }
+      }
+    });
+    assertThat(seen[0]).as("buttons on screen with %s shown", pane).isGreaterThan(3);
+    assertThat(cut).as("buttons cut at the default window size with %s shown", pane).isEmpty();
+  }
+
+  private static boolean shown(Node n) {
+    for (Node p = n; p != null; p = p.getParent()) {
+      if (!p.isVisible()) {
+        return false;
+      }
+    }
+    return true;
   }
 
   /** Retired words (whole words, any case) in the texts under {@code node}, each with the text it is in. */

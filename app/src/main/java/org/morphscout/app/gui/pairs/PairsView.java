@@ -109,7 +109,7 @@ public final class PairsView extends BorderPane {
     setCenter(split);
   }
 
-  private HBox toolbar() {
+  private VBox toolbar() {
     Label scope = new Label();
     scope.getStyleClass().add("search-title");
     scope.textProperty().bind(vm.scopeProperty());
@@ -153,10 +153,19 @@ public final class PairsView extends BorderPane {
     info.textProperty().bind(vm.infoProperty());
     Region spacer = new Region();
     HBox.setHgrow(spacer, Priority.ALWAYS);
-    HBox bar = new HBox(10, scope, library, selected, refresh, cancel, busy, spacer, info, export);
-    bar.getStyleClass().add("toolbar");
+    // buttons keep their whole labels at the default window size; the scope title and the line of the last decision
+    // below give way (with an ellipsis) when the pane is narrow
+    for (Button b : List.of(library, selected, refresh, cancel, export)) {
+      b.setMinWidth(Region.USE_PREF_SIZE);
+    }
+    scope.setMinWidth(80);
+    HBox bar = new HBox(10, scope, library, selected, refresh, cancel, busy, spacer, export);
     bar.setAlignment(Pos.CENTER_LEFT);
-    return bar;
+    info.visibleProperty().bind(info.textProperty().isNotEmpty());
+    info.managedProperty().bind(info.visibleProperty());
+    VBox box = new VBox(4, bar, info);
+    box.getStyleClass().add("toolbar");
+    return box;
   }
 
   private void columns() {
