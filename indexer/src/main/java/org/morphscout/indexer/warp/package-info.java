@@ -14,7 +14,9 @@
  *
  * <p>{@link org.morphscout.indexer.warp.WarpEstimator} ties both together and reports the overlap before and after
  * each stage, the warp's effort (displacement relative to the object's size) and its fold risk (where the Jacobian
- * determinant of the mapping is not positive). This package is API: the pair scorer and the preview morph use it.
- * All classes are immutable and thread-safe.
+ * determinant of the mapping is not positive). A caller that warps one picture with many others prepares its
+ * silhouette once ({@link org.morphscout.indexer.warp.WarpShape}: its moments and image-relative grid) and gets the
+ * same estimates. This package is API: the pair scorer and the preview morph use it. All classes are immutable and
+ * thread-safe.
  */
 package org.morphscout.indexer.warp;
