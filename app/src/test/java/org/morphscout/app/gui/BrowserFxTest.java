@@ -15,11 +15,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.gui.common.Pane;
-import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.common.Tile;
 import org.morphscout.app.gui.pairs.PairRow;
 import org.morphscout.app.gui.service.ChainCandidate;
-import org.morphscout.app.gui.task.FxTaskRunner;
 import org.morphscout.indexer.library.Library;
 import org.morphscout.indexer.values.Decision;
 import org.morphscout.indexer.values.DecisionKind;
@@ -39,8 +37,7 @@ class BrowserFxTest {
   @TempDir static Path shared;
   static Path catalog;
 
-  private FxTaskRunner runner;
-  private ThumbnailCache thumbs;
+  private TestWindow window;
   private MainViewModel vm;
   private FakeBackends fakes;
 
@@ -51,21 +48,14 @@ class BrowserFxTest {
 
   @Start
   void start(Stage stage) {
-    runner = new FxTaskRunner(2);
     fakes = new FakeBackends();
-    vm = new MainViewModel(runner, fakes.factory());
-    thumbs = new ThumbnailCache(id -> vm.session().thumbnail(id), 144, 200);
-    MainView view = new MainView(vm, thumbs);
-    stage.setScene(view.scene(1400, 900));
-    stage.show();
+    window = TestWindow.show(stage, fakes.factory(), 200, 1400, 900);
+    vm = window.vm;
   }
 
   @AfterEach
   void close() {
-    WaitForAsyncUtils.asyncFx(() -> vm.close());
-    WaitForAsyncUtils.waitForFxEvents();
-    runner.close();
-    thumbs.close();
+    window.close();
   }
 
   static void waitUntil(BooleanSupplier condition) throws Exception {

@@ -1,6 +1,7 @@
 package org.morphscout.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.morphscout.app.gui.TestWindow.fx;
 
 import java.awt.Color;
 import java.nio.file.Files;
@@ -22,9 +23,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.app.gui.common.Pane;
-import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.service.LibraryBackends;
-import org.morphscout.app.gui.task.FxTaskRunner;
 import org.morphscout.indexer.values.ImageRow;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -42,36 +41,23 @@ class DefaultWindowFxTest {
   }
 
   @TempDir Path tmp;
-  private FxTaskRunner runner;
-  private ThumbnailCache thumbs;
+  private TestWindow window;
   private MainViewModel vm;
   private Scene scene;
 
   @Start
   void start(Stage stage) {
-    runner = new FxTaskRunner(2);
-    vm = new MainViewModel(runner, LibraryBackends::create);
-    thumbs = new ThumbnailCache(id -> vm.session().thumbnail(id), 144, 200);
-    MainView view = new MainView(vm, thumbs);
     WindowSettings defaults = WindowSettings.DEFAULTS;
     // as MorphscoutApp opens the window on a first run
-    view.split().setDividerPositions(defaults.inspectorDivider());
-    scene = view.scene(defaults.width(), defaults.height());
-    stage.setScene(scene);
-    stage.show();
+    window = TestWindow.show(stage, LibraryBackends::create, 200, defaults.width(), defaults.height(),
+        defaults.inspectorDivider());
+    vm = window.vm;
+    scene = window.scene;
   }
 
   @AfterEach
   void close() {
-    WaitForAsyncUtils.asyncFx(() -> vm.close());
-    WaitForAsyncUtils.waitForFxEvents();
-    runner.close();
-    thumbs.close();
-  }
-
-  static void fx(Runnable r) throws Exception {
-    WaitForAsyncUtils.asyncFx(r).get();
-    WaitForAsyncUtils.waitForFxEvents();
+    window.close();
   }
 
   @Test

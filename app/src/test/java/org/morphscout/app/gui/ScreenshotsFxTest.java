@@ -1,8 +1,10 @@
 package org.morphscout.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.morphscout.app.gui.TestWindow.fx;
 
 import java.awt.image.BufferedImage;
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -14,6 +16,7 @@ import java.util.Set;
 import java.util.TreeMap;
 import java.util.concurrent.TimeUnit;
 import java.util.function.BooleanSupplier;
+import java.util.stream.Stream;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Scene;
 import javafx.scene.control.ListView;
@@ -22,15 +25,16 @@ import javafx.stage.Stage;
 import javax.imageio.ImageIO;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.AnnotatedElementContext;
 import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.extension.ExtensionContext;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.io.TempDirFactory;
 import org.morphscout.app.gui.common.Pane;
-import org.morphscout.app.gui.common.ThumbnailCache;
 import org.morphscout.app.gui.pairs.PairRow;
 import org.morphscout.app.gui.service.ChainCandidate;
 import org.morphscout.app.gui.service.LibraryBackends;
 import org.morphscout.app.gui.service.SimilarityMode;
-import org.morphscout.app.gui.task.FxTaskRunner;
 import org.morphscout.demo.DemoLibrary;
 import org.morphscout.demo.DemoOptions;
 import org.morphscout.demo.LibrarySummary;
@@ -68,40 +72,46 @@ class ScreenshotsFxTest {
   static final String BOTTLE = "bottle-oxblood-032.jpg";
   static final String JUG = "jug-celadon-035.jpg";
 
-  @TempDir Path tmp;
-  private FxTaskRunner runner;
-  private ThumbnailCache thumbs;
+  /**
+   * The studio's folder, with a plain name so the status bar and the inspector in the README's pictures show a path a
+   * reader recognises (not a test runner's random temporary name); removed after the test like any temporary folder.
+   */
+  @TempDir(factory = StudioFolder.class) Path tmp;
+
+  /** Makes {@code <system temp>/quernhollow}, emptied first if an interrupted run left it behind. */
+  static final class StudioFolder implements TempDirFactory {
+    @Override
+    public Path createTempDirectory(AnnotatedElementContext element, ExtensionContext extension) throws IOException {
+      Path dir = Path.of(System.getProperty("java.io.tmpdir"), "quernhollow");
+      if (Files.exists(dir)) {
+        try (Stream<Path> old = Files.walk(dir)) {
+          for (Path p : old.sorted(Comparator.reverseOrder()).toList()) {
+            Files.delete(p);
+          }
+        }
+      }
+      return Files.createDirectories(dir);
+    }
+  }
+  private TestWindow window;
   private MainViewModel vm;
   private Scene scene;
 
   @Start
   void start(Stage stage) {
-    runner = new FxTaskRunner(2);
-    vm = new MainViewModel(runner, LibraryBackends::create);
-    thumbs = new ThumbnailCache(id -> vm.session().thumbnail(id), 144, 300);
-    MainView view = new MainView(vm, thumbs);
-    view.split().setDividerPositions(0.78);
     // The headless screen's size (HeadlessFx): room for the pairs table's columns and a whole walkthrough strip.
-    scene = view.scene(1600, 1000);
-    stage.setScene(scene);
-    stage.show();
+    window = TestWindow.show(stage, LibraryBackends::create, 300, 1600, 1000, 0.78);
+    vm = window.vm;
+    scene = window.scene;
   }
 
   @AfterEach
   void close() {
-    WaitForAsyncUtils.asyncFx(() -> vm.close());
-    WaitForAsyncUtils.waitForFxEvents();
-    runner.close();
-    thumbs.close();
+    window.close();
   }
 
   static void waitUntil(BooleanSupplier condition) throws Exception {
     HeadlessFx.waitUntil(90, condition);
-  }
-
-  static void fx(Runnable r) throws Exception {
-    WaitForAsyncUtils.asyncFx(r).get();
-    WaitForAsyncUtils.waitForFxEvents();
   }
 
   private ImageRow row(String name) {
@@ -146,7 +156,7 @@ class ScreenshotsFxTest {
   void everyPane() throws Exception {
     String target = System.getProperty("morphscout.screenshots");
     Path dir = Files.createDirectories(target == null ? Path.of("target", "screenshots") : Path.of(target));
-    Path demo = tmp.resolve("quernhollow");
+    Path demo = tmp.resolve("studio");
     LibrarySummary summary = DemoLibrary.generate(demo, DEMO);
 
     fx(() -> vm.open(tmp.resolve("catalog"), true));
