@@ -1,19 +1,31 @@
 package org.morphscout.indexer.ingest;
 
+import java.io.ByteArrayOutputStream;
+import java.util.Arrays;
 import java.util.Optional;
+import java.util.TreeMap;
 
 /**
  * The few facts of a JPEG's header the fast decoder needs, read from its markers up to the first scan (ITU-T T.81,
- * annex B): frame size and components from the start-of-frame marker, and whether an ICC profile (APP2
- * {@code ICC_PROFILE}, ICC.1 annex B.4) or an Adobe colour-transform marker (APP14 {@code Adobe}) is present.
+ * annex B): frame size and components from the start-of-frame marker, the embedded ICC profile (APP2
+ * {@code ICC_PROFILE}, ICC.1 annex B.4) and whether an Adobe colour-transform marker (APP14 {@code Adobe}) is present.
  *
  * @param width samples per line
  * @param height lines
  * @param components colour components (1 grey, 3 YCbCr or RGB, 4 CMYK or YCCK)
- * @param iccProfile whether the file embeds an ICC profile
+ * @param profileChunks how many APP2 {@code ICC_PROFILE} markers the file has (0: no embedded profile)
+ * @param profile the embedded profile's bytes, its chunks joined in sequence order; empty when there is none or when
+ *     the chunks do not make one whole profile (a chunk missing, repeated or numbered beyond the count they give)
  * @param adobe whether the file has an Adobe APP14 marker (common with CMYK and YCCK)
  */
-record JpegHeader(int width, int height, int components, boolean iccProfile, boolean adobe) {
+record JpegHeader(int width, int height, int components, int profileChunks, Optional<byte[]> profile,
+    boolean adobe) {
+  private static final String ICC_SIGNATURE = "ICC_PROFILE\0";
+
+  /** Whether the file embeds an ICC profile (readable or not). */
+  boolean iccProfile() {
+    return profileChunks > 0;
+  }
 
   /** The header of a JPEG file's bytes; empty when the markers before the first scan cannot be read. */
   static Optional<JpegHeader> read(byte[] b) {
@@ -21,7 +33,7 @@ record JpegHeader(int width, int height, int components, boolean iccProfile, boo
       return Optional.empty();
     }
     int i = 2;
-    boolean icc = false;
+    Chunks icc = new Chunks();
     boolean adobe = false;
     int width = -1;
     int height = -1;
@@ -47,8 +59,8 @@ record JpegHeader(int width, int height, int components, boolean iccProfile, boo
       if (length < 2 || body + length - 2 > b.length) {
         return Optional.empty();
       }
-      if (marker == 0xE2 && startsWith(b, body, "ICC_PROFILE\0")) {
-        icc = true;
+      if (marker == 0xE2 && startsWith(b, body, ICC_SIGNATURE)) {
+        icc.add(b, body + ICC_SIGNATURE.length(), body + length - 2);
       } else if (marker == 0xEE && startsWith(b, body, "Adobe")) {
         adobe = true;
       } else if (marker >= 0xC0 && marker <= 0xCF && marker != 0xC4 && marker != 0xC8 && marker != 0xCC
@@ -64,7 +76,43 @@ record JpegHeader(int width, int height, int components, boolean iccProfile, boo
     if (width <= 0 || height <= 0 || components <= 0) {
       return Optional.empty();
     }
-    return Optional.of(new JpegHeader(width, height, components, icc, adobe));
+    return Optional.of(new JpegHeader(width, height, components, icc.markers, icc.joined(), adobe));
+  }
+
+  /**
+   * The APP2 profile chunks as they come: each starts with its sequence number (from 1) and the number of chunks, then
+   * its share of the profile (ICC.1 annex B.4). Writers may put them in any order.
+   */
+  private static final class Chunks {
+    private final TreeMap<Integer, byte[]> bySequence = new TreeMap<>();
+    private int markers;
+    private int count = -1;
+    private boolean broken;
+
+    void add(byte[] b, int from, int end) {
+      markers++;
+      if (end - from < 2) {
+        broken = true;
+        return;
+      }
+      int sequence = b[from] & 0xff;
+      int total = b[from + 1] & 0xff;
+      if (sequence < 1 || sequence > total || (count >= 0 && total != count) || bySequence.containsKey(sequence)) {
+        broken = true;
+        return;
+      }
+      count = total;
+      bySequence.put(sequence, Arrays.copyOfRange(b, from + 2, end));
+    }
+
+    Optional<byte[]> joined() {
+      if (markers == 0 || broken || bySequence.size() != count) {
+        return Optional.empty();
+      }
+      ByteArrayOutputStream out = new ByteArrayOutputStream();
+      bySequence.values().forEach(out::writeBytes);
+      return Optional.of(out.toByteArray());
+    }
   }
 
   private static boolean startsWith(byte[] b, int at, String ascii) {

@@ -1,6 +1,16 @@
 package org.morphscout.indexer.ingest;
 
+import java.awt.Transparency;
+import java.awt.color.ColorSpace;
+import java.awt.color.ICC_ColorSpace;
+import java.awt.color.ICC_Profile;
 import java.awt.image.BufferedImage;
+import java.awt.image.ColorModel;
+import java.awt.image.ComponentColorModel;
+import java.awt.image.DataBuffer;
+import java.awt.image.DataBufferByte;
+import java.awt.image.Raster;
+import java.awt.image.WritableRaster;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -18,10 +28,11 @@ import org.slf4j.LoggerFactory;
  * scaling by 1/2, 1/4 or 1/8, the largest that keeps the long side at least the analysis size), which costs a
  * fraction of a full decode of a camera photo. Everything else is exactly what {@link ImageIoDecoder} does: the same
  * checks first ({@link ImageIoDecoder#preflight}: format, completeness, EXIF orientation), the same pixel cap from the
- * header, and the same last steps (area downscale, orientation). A file the fast path does not take (not a JPEG, an
- * embedded ICC profile, which ImageIO converts to sRGB, CMYK or other than 1 or 3 components, or anything OpenCV
- * cannot decode) goes to {@link ImageIoDecoder}, per file. Results differ from ImageIO's by the resampling only (a
- * DCT-domain reduction instead of subsampling then area averaging): see the tolerance in the tests.
+ * header, the same conversion of an embedded RGB ICC profile to sRGB ({@link SrgbConverter}), and the same last steps
+ * (area downscale, orientation). A file the fast path does not take (not a JPEG, an Adobe APP14 marker, CMYK or other
+ * than 1 or 3 components, an embedded profile that is unreadable or not RGB, or anything OpenCV cannot decode) goes
+ * to {@link ImageIoDecoder}, per file. Results differ from ImageIO's by the resampling only (a DCT-domain reduction
+ * instead of subsampling then area averaging): see the tolerance in the tests.
  *
  * <p>OpenCV's native library comes inside the {@code org.openpnp:opencv} artifact (Linux x86-64 and ARM, macOS,
  * Windows) and is loaded once; where it cannot load, one warning says so and every file takes the ImageIO path.
@@ -105,15 +116,23 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
     }
     byte[] bytes = Files.readAllBytes(file);
     Optional<JpegHeader> header = JpegHeader.read(bytes);
-    if (header.isEmpty() || header.get().iccProfile() || header.get().adobe()
+    if (header.isEmpty() || header.get().adobe()
         || (header.get().components() != 1 && header.get().components() != 3)) {
       return fallback.decodeAfter(file, preflight);
+    }
+    Optional<ColorSpace> space = Optional.empty();
+    if (header.get().iccProfile()) {
+      space = rgbSpace(header.get());
+      if (space.isEmpty()) {
+        LOG.debug("{}: an embedded profile the fast path does not take, decoding with ImageIO", file);
+        return fallback.decodeAfter(file, preflight);
+      }
     }
     int w = header.get().width();
     int h = header.get().height();
     fallback.checkPixelCap(file, w, h);
     int reduction = reduction(w, h, fallback.options().analysisLongSide());
-    BufferedImage image = decode(bytes, reduction);
+    BufferedImage image = decode(bytes, reduction, space);
     if (Thread.currentThread().isInterrupted()) {
       throw ImageIoDecoder.interrupted(file);
     }
@@ -135,8 +154,31 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
     return 1;
   }
 
-  /** Decodes to 8-bit sRGB (the JPEG's own colour, as a file without a profile is read), or null on failure. */
-  private static BufferedImage decode(byte[] bytes, int reduction) {
+  /**
+   * The colour space of an embedded RGB profile on a three-component JPEG, as ImageIO applies it; empty when the
+   * profile is unreadable or is not an RGB profile (the file then goes to ImageIO, which decides what to do with it).
+   */
+  static Optional<ColorSpace> rgbSpace(JpegHeader header) {
+    if (header.components() != 3 || header.profile().isEmpty()) {
+      return Optional.empty();
+    }
+    try {
+      ICC_Profile profile = ICC_Profile.getInstance(header.profile().get());
+      if (profile.getColorSpaceType() != ColorSpace.TYPE_RGB || profile.getNumComponents() != 3) {
+        return Optional.empty();
+      }
+      return Optional.of(new ICC_ColorSpace(profile));
+    } catch (IllegalArgumentException e) { // not a valid profile
+      return Optional.empty();
+    }
+  }
+
+  /**
+   * Decodes to 8-bit sRGB, or null on failure. Without a profile the JPEG's samples are taken as sRGB, as ImageIO
+   * reads such a file; with one ({@code space}), the samples are taken in the profile's space and converted to sRGB by
+   * the same conversion the ImageIO path applies ({@link SrgbConverter}: ICC.1 colour management through the JDK).
+   */
+  private static BufferedImage decode(byte[] bytes, int reduction, Optional<ColorSpace> space) {
     int flags = Imgcodecs.IMREAD_IGNORE_ORIENTATION | switch (reduction) {
       case 8 -> Imgcodecs.IMREAD_REDUCED_COLOR_8;
       case 4 -> Imgcodecs.IMREAD_REDUCED_COLOR_4;
@@ -153,6 +195,9 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
       int height = bgr.rows();
       byte[] px = new byte[width * height * 3];
       bgr.get(0, 0, px);
+      if (space.isPresent()) {
+        return SrgbConverter.toSrgbArgb(inSpace(px, width, height, space.get()));
+      }
       int[] argb = new int[width * height];
       for (int i = 0, j = 0; i < argb.length; i++, j += 3) {
         argb[i] = 0xFF000000 | (px[j + 2] & 0xff) << 16 | (px[j + 1] & 0xff) << 8 | (px[j] & 0xff);
@@ -164,5 +209,13 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
       bgr.release();
       in.release();
     }
+  }
+
+  /** OpenCV's blue-green-red bytes as an image in {@code space}, without copying them. */
+  private static BufferedImage inSpace(byte[] bgr, int width, int height, ColorSpace space) {
+    WritableRaster raster = Raster.createInterleavedRaster(new DataBufferByte(bgr, bgr.length), width, height,
+        width * 3, 3, new int[] {2, 1, 0}, null);
+    ColorModel model = new ComponentColorModel(space, false, false, Transparency.OPAQUE, DataBuffer.TYPE_BYTE);
+    return new BufferedImage(model, raster, false, null);
   }
 }

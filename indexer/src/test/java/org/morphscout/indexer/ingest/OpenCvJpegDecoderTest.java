@@ -24,12 +24,16 @@ import org.morphscout.indexer.testing.OutsideData;
 /**
  * The fast JPEG path against the ImageIO path on real JPEGs made with ImageMagick (the {@code convert} tool, Debian
  * package {@code imagemagick}) from a real photograph (Debian {@code opencv-doc}: {@code squirrel_cls.jpg}, which
- * carries an EXIF block, enlarged to a camera-like 3072 px so that the DCT-domain reduction is used): EXIF orientations 1, 3, 6 and 8 set with
- * {@code -orient}, and a copy tagged with a non-sRGB ICC profile (the JDK's linear-RGB profile, embedded with
- * {@code -profile}). Tolerance (ours): the two analysis images within a mean CIEDE2000 of 1.5 (a difference near the
- * threshold of a just-noticeable difference, common practice) and the classical silhouettes within IoU 0.95.
+ * carries an EXIF block, enlarged to a camera-like 3072 px so that the DCT-domain reduction is used): EXIF orientations
+ * 1, 3, 6 and 8 set with {@code -orient}, and copies tagged with non-sRGB ICC profiles embedded with {@code -profile}
+ * (Ghostscript's Adobe RGB (1998)-compatible and ROMM RGB profiles, and the JDK's linear-RGB profile). Tolerance
+ * (ours): the two analysis images within a mean CIEDE2000 of 1.5 (a difference near the threshold of a
+ * just-noticeable difference, common practice) and the classical silhouettes within IoU 0.95.
  */
 class OpenCvJpegDecoderTest {
+  /** ICC profiles installed with Ghostscript (Debian libgs-common). */
+  static final Path GHOSTSCRIPT_ICC = Path.of("/usr/share/color/icc/ghostscript");
+
   @TempDir static Path tmp;
   static Path big;
 
@@ -96,18 +100,70 @@ class OpenCvJpegDecoderTest {
   }
 
   @Test
-  void aJpegWithAnEmbeddedProfileTakesTheImageIoPathExactly() throws IOException, InterruptedException {
-    Path icc = tmp.resolve("linear-rgb.icc");
-    Files.write(icc, ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData());
-    Path tagged = tmp.resolve("squirrel-linear.jpg");
-    convert(big.toString(), "-profile", icc.toString(), tagged.toString());
-    assertThat(JpegHeader.read(Files.readAllBytes(tagged))).get().extracting(JpegHeader::iccProfile).isEqualTo(true);
-    DecodedImage a = new ImageIoDecoder(DecodeOptions.defaults()).decode(tagged);
-    DecodedImage b = OpenCvJpegDecoder.create(DecodeOptions.defaults()).decode(tagged);
-    assertThat(meanDeltaE00(a.analysis(), b.analysis())).isZero();
-    // And the profile was applied: the linear-RGB picture reads lighter than the same pixels taken as sRGB.
-    DecodedImage untagged = new ImageIoDecoder(DecodeOptions.defaults()).decode(big);
-    assertThat(meanDeltaE00(a.analysis(), untagged.analysis())).isGreaterThan(5);
+  void anEmbeddedRgbProfileIsAppliedOnTheFastPathAsImageIoAppliesIt() throws IOException, InterruptedException {
+    // Real profiles as photographers' files carry them: Ghostscript's Adobe RGB (1998)-compatible and ROMM RGB
+    // (ProPhoto) profiles (Debian libgs-common, which ImageMagick brings), and the JDK's linear-RGB profile.
+    Path linear = tmp.resolve("linear-rgb.icc");
+    Files.write(linear, ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData());
+    List<Path> profiles = List.of(OutsideData.require(GHOSTSCRIPT_ICC.resolve("a98.icc"), "libgs-common"),
+        OutsideData.require(GHOSTSCRIPT_ICC.resolve("rommrgb.icc"), "libgs-common"), linear);
+    Path turned = tmp.resolve("squirrel-turned.jpg");
+    convert(big.toString(), "-orient", "RightTop", turned.toString());
+    DecodedImage untagged = new ImageIoDecoder(DecodeOptions.defaults()).decode(turned);
+    for (Path icc : profiles) {
+      // Tagged and turned (EXIF orientation 6), so the profile and the orientation are checked together.
+      Path tagged = tmp.resolve("squirrel-" + icc.getFileName() + ".jpg");
+      convert(big.toString(), "-profile", icc.toString(), "-orient", "RightTop", tagged.toString());
+      JpegHeader header = JpegHeader.read(Files.readAllBytes(tagged)).orElseThrow();
+      assertThat(header.iccProfile()).isTrue();
+      assertThat(header.profile()).get().isEqualTo(Files.readAllBytes(icc));
+      DecodedImage a = new ImageIoDecoder(DecodeOptions.defaults()).decode(tagged);
+      DecodedImage b = OpenCvJpegDecoder.create(DecodeOptions.defaults()).decode(tagged);
+      assertThat(b.orientation()).isEqualTo(6).isEqualTo(a.orientation());
+      // The fast path took it (its resampling differs from ImageIO's) and agrees within the tolerance.
+      assertThat(samePixels(a.analysis(), b.analysis())).as("decoded by the fast path: %s", icc).isFalse();
+      assertThat(meanDeltaE00(a.analysis(), b.analysis())).as("mean ΔE00 with %s", icc).isLessThan(1.5);
+      Mask ma = new DefaultSilhouettes().extract(a.analysis()).mask();
+      Mask mb = new DefaultSilhouettes().extract(b.analysis()).mask();
+      assertThat(ma.iou(mb)).as("silhouette IoU with %s", icc).isGreaterThan(0.95);
+      // And the profile was applied: the same samples taken as sRGB read clearly differently.
+      assertThat(meanDeltaE00(b.analysis(), untagged.analysis())).as("profile %s applied", icc).isGreaterThan(3);
+    }
+  }
+
+  @Test
+  void joinsAProfileSplitOverSeveralMarkersInSequenceOrder() {
+    // ICC.1 annex B.4: a profile over 64 KB is split over APP2 markers numbered from 1; writers may reorder them.
+    byte[] jpeg = jpegWithProfileChunks(new int[][] {{2, 2}, {1, 2}}, new byte[][] {{4, 5, 6}, {1, 2, 3}});
+    JpegHeader h = JpegHeader.read(jpeg).orElseThrow();
+    assertThat(h.profileChunks()).isEqualTo(2);
+    assertThat(h.profile()).get().isEqualTo(new byte[] {1, 2, 3, 4, 5, 6});
+    // A chunk missing, or numbered past the count: the file has a profile, but not one that can be read.
+    JpegHeader missing = JpegHeader.read(jpegWithProfileChunks(new int[][] {{1, 2}}, new byte[][] {{1}})).orElseThrow();
+    assertThat(missing.iccProfile()).isTrue();
+    assertThat(missing.profile()).isEmpty();
+    assertThat(OpenCvJpegDecoder.rgbSpace(missing)).isEmpty();
+    JpegHeader beyond = JpegHeader.read(jpegWithProfileChunks(new int[][] {{3, 2}}, new byte[][] {{1}})).orElseThrow();
+    assertThat(beyond.profile()).isEmpty();
+    // A whole profile that is not a valid ICC profile is not taken either.
+    assertThat(OpenCvJpegDecoder.rgbSpace(h)).isEmpty();
+  }
+
+  /** SOI, APP2 ICC_PROFILE markers with the given (sequence, count) and data, a 3-component SOF0 of 8x8, SOS. */
+  private static byte[] jpegWithProfileChunks(int[][] numbers, byte[][] data) {
+    java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+    out.writeBytes(new byte[] {(byte) 0xFF, (byte) 0xD8});
+    byte[] signature = "ICC_PROFILE\0".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+    for (int k = 0; k < numbers.length; k++) {
+      int length = 2 + signature.length + 2 + data[k].length;
+      out.writeBytes(new byte[] {(byte) 0xFF, (byte) 0xE2, (byte) (length >> 8), (byte) length});
+      out.writeBytes(signature);
+      out.writeBytes(new byte[] {(byte) numbers[k][0], (byte) numbers[k][1]});
+      out.writeBytes(data[k]);
+    }
+    out.writeBytes(new byte[] {(byte) 0xFF, (byte) 0xC0, 0, 17, 8, 0, 8, 0, 8, 3, 1, 0x22, 0, 2, 0x11, 1, 3, 0x11, 1});
+    out.writeBytes(new byte[] {(byte) 0xFF, (byte) 0xDA, 0, 2});
+    return out.toByteArray();
   }
 
   @Test
@@ -151,10 +207,11 @@ class OpenCvJpegDecoderTest {
 
   @Test
   void aFileTheFastPathRefusesFallsBackForThatFileOnly() throws IOException, InterruptedException {
-    Path icc = tmp.resolve("linear-rgb-2.icc");
-    Files.write(icc, ICC_Profile.getInstance(ColorSpace.CS_LINEAR_RGB).getData());
-    Path tagged = tmp.resolve("squirrel-tagged.jpg"); // refused: an embedded profile
-    convert(big.toString(), "-profile", icc.toString(), tagged.toString());
+    Path grey = tmp.resolve("squirrel-grey.jpg"); // refused: an embedded profile that is not RGB (Ghostscript's sGray)
+    convert(big.toString(), "-colorspace", "Gray",
+        "-profile", OutsideData.require(GHOSTSCRIPT_ICC.resolve("sgray.icc"), "libgs-common").toString(),
+        grey.toString());
+    assertThat(JpegHeader.read(Files.readAllBytes(grey))).get().extracting(JpegHeader::iccProfile).isEqualTo(true);
     Path png = tmp.resolve("squirrel.png"); // refused: not a JPEG
     convert(big.toString(), "-resize", "1600x1600", png.toString());
     Path cmyk = TestImages.write(tmp, "inks.jpg", AdobeJpegBuilder.build(48, 16, inks(48, 16), false)); // Adobe
@@ -165,7 +222,7 @@ class OpenCvJpegDecoderTest {
     // One decoder, refused and accepted files interleaved: each refused file is decoded exactly as ImageIO does it,
     // and the plain JPEG after each one still takes the fast path (the same pixels as a fresh fast decoder gives,
     // which differ from ImageIO's by the resampling).
-    for (Path refused : List.of(tagged, png, cmyk)) {
+    for (Path refused : List.of(grey, png, cmyk)) {
       DecodedImage viaFast = fast.decode(refused);
       DecodedImage viaSlow = slow.decode(refused);
       assertThat(samePixels(viaFast.analysis(), viaSlow.analysis())).as("%s as ImageIO", refused).isTrue();
