@@ -16,11 +16,17 @@ import java.util.TreeMap;
  * @param profileChunks how many APP2 {@code ICC_PROFILE} markers the file has (0: no embedded profile)
  * @param profile the embedded profile's bytes, its chunks joined in sequence order; empty when there is none or when
  *     the chunks do not make one whole profile (a chunk missing, repeated or numbered beyond the count they give)
- * @param adobe whether the file has an Adobe APP14 marker (common with CMYK and YCCK)
+ * @param adobeTransform the colour transform of the Adobe APP14 marker (0 none: RGB or CMYK as stored, 1 YCbCr, 2 YCCK),
+ *     or -1 when the file has no such marker (Adobe's technical note 5116, as libjpeg reads it; from memory)
  */
 record JpegHeader(int width, int height, int components, int profileChunks, Optional<byte[]> profile,
-    boolean adobe) {
+    int adobeTransform) {
   private static final String ICC_SIGNATURE = "ICC_PROFILE\0";
+
+  /** Whether the file has an Adobe APP14 marker (common with CMYK and YCCK, and in files Adobe's tools save). */
+  boolean adobe() {
+    return adobeTransform >= 0;
+  }
 
   /** Whether the file embeds an ICC profile (readable or not). */
   boolean iccProfile() {
@@ -34,7 +40,7 @@ record JpegHeader(int width, int height, int components, int profileChunks, Opti
     }
     int i = 2;
     Chunks icc = new Chunks();
-    boolean adobe = false;
+    int adobe = -1;
     int width = -1;
     int height = -1;
     int components = -1;
@@ -62,7 +68,8 @@ record JpegHeader(int width, int height, int components, int profileChunks, Opti
       if (marker == 0xE2 && startsWith(b, body, ICC_SIGNATURE)) {
         icc.add(b, body + ICC_SIGNATURE.length(), body + length - 2);
       } else if (marker == 0xEE && startsWith(b, body, "Adobe")) {
-        adobe = true;
+        // "Adobe", version (2 bytes), flags0 (2), flags1 (2), transform (1)
+        adobe = length >= 2 + 12 ? b[body + 11] & 0xff : 0;
       } else if (marker >= 0xC0 && marker <= 0xCF && marker != 0xC4 && marker != 0xC8 && marker != 0xCC
           && length >= 8) {
         height = ((b[body + 1] & 0xff) << 8) | (b[body + 2] & 0xff);

@@ -29,10 +29,10 @@ import org.slf4j.LoggerFactory;
  * fraction of a full decode of a camera photo. Everything else is exactly what {@link ImageIoDecoder} does: the same
  * checks first ({@link ImageIoDecoder#preflight}: format, completeness, EXIF orientation), the same pixel cap from the
  * header, the same conversion of an embedded RGB ICC profile to sRGB ({@link SrgbConverter}), and the same last steps
- * (area downscale, orientation). A file the fast path does not take (not a JPEG, an Adobe APP14 marker, CMYK or other
- * than 1 or 3 components, an embedded profile that is unreadable or not RGB, or anything OpenCV cannot decode) goes
- * to {@link ImageIoDecoder}, per file. Results differ from ImageIO's by the resampling only (a DCT-domain reduction
- * instead of subsampling then area averaging): see the tolerance in the tests.
+ * (area downscale, orientation). A file the fast path does not take (not a JPEG, an Adobe APP14 marker other than on a
+ * YCbCr colour file, CMYK or other than 1 or 3 components, an embedded profile that is unreadable or not RGB, or
+ * anything OpenCV cannot decode) goes to {@link ImageIoDecoder}, per file. Results differ from ImageIO's by the
+ * resampling only (a DCT-domain reduction instead of subsampling then area averaging): see the tolerance in the tests.
  *
  * <p>OpenCV's native library comes inside the {@code org.openpnp:opencv} artifact (Linux x86-64 and ARM, macOS,
  * Windows) and is loaded once; where it cannot load, one warning says so and every file takes the ImageIO path.
@@ -116,8 +116,11 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
     }
     byte[] bytes = Files.readAllBytes(file);
     Optional<JpegHeader> header = JpegHeader.read(bytes);
-    if (header.isEmpty() || header.get().adobe()
-        || (header.get().components() != 1 && header.get().components() != 3)) {
+    // An Adobe marker is taken only on a YCbCr colour JPEG, as Adobe's tools save them; RGB-stored, CMYK and YCCK
+    // files go to ImageIO.
+    if (header.isEmpty() || (header.get().adobe() && header.get().adobeTransform() != 1)
+        || (header.get().components() != 1 && header.get().components() != 3)
+        || (header.get().adobe() && header.get().components() != 3)) {
       return fallback.decodeAfter(file, preflight);
     }
     Optional<ColorSpace> space = Optional.empty();

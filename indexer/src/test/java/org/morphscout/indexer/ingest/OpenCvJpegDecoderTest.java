@@ -149,6 +149,36 @@ class OpenCvJpegDecoderTest {
     assertThat(OpenCvJpegDecoder.rgbSpace(h)).isEmpty();
   }
 
+  @Test
+  void aPhotoWithAnAdobeMarkerAsAdobesToolsSaveItTakesTheFastPath() throws IOException, InterruptedException {
+    // Adobe's tools add an APP14 "Adobe" marker with colour transform 1 (YCbCr) to colour JPEGs; the same photo with
+    // that marker spliced in after SOI decodes on the fast path like ImageIO within the tolerance. With transform 0
+    // (samples stored as RGB) the fast path leaves it to ImageIO: the same pixels as ImageIO gives.
+    byte[] photo = Files.readAllBytes(big);
+    ImageIoDecoder slow = new ImageIoDecoder(DecodeOptions.defaults());
+    ImageDecoder fast = OpenCvJpegDecoder.create(DecodeOptions.defaults());
+    Path ycc = TestImages.write(tmp, "squirrel-adobe-ycc.jpg", withAdobeMarker(photo, 1));
+    assertThat(JpegHeader.read(Files.readAllBytes(ycc))).get().extracting(JpegHeader::adobeTransform).isEqualTo(1);
+    DecodedImage a = slow.decode(ycc);
+    DecodedImage b = fast.decode(ycc);
+    assertThat(samePixels(a.analysis(), b.analysis())).as("decoded by the fast path").isFalse();
+    assertThat(meanDeltaE00(a.analysis(), b.analysis())).isLessThan(1.5);
+    assertThat(meanDeltaE00(b.analysis(), fast.decode(big).analysis())).as("as without the marker").isLessThan(0.01);
+
+    Path rgb = TestImages.write(tmp, "squirrel-adobe-rgb.jpg", withAdobeMarker(photo, 0));
+    assertThat(samePixels(fast.decode(rgb).analysis(), slow.decode(rgb).analysis())).as("refused").isTrue();
+  }
+
+  /** The JPEG with an APP14 Adobe marker (version 100, no flags, the given transform) inserted after SOI. */
+  private static byte[] withAdobeMarker(byte[] jpeg, int transform) {
+    byte[] marker = {(byte) 0xFF, (byte) 0xEE, 0, 14, 'A', 'd', 'o', 'b', 'e', 0, 100, 0, 0, 0, 0, (byte) transform};
+    byte[] out = new byte[jpeg.length + marker.length];
+    System.arraycopy(jpeg, 0, out, 0, 2);
+    System.arraycopy(marker, 0, out, 2, marker.length);
+    System.arraycopy(jpeg, 2, out, 2 + marker.length, jpeg.length - 2);
+    return out;
+  }
+
   /** SOI, APP2 ICC_PROFILE markers with the given (sequence, count) and data, a 3-component SOF0 of 8x8, SOS. */
   private static byte[] jpegWithProfileChunks(int[][] numbers, byte[][] data) {
     java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
