@@ -21,7 +21,6 @@ import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.store.Directory;
-import org.apache.lucene.store.FSDirectory;
 import org.apache.lucene.store.LockObtainFailedException;
 import org.apache.lucene.util.IOUtils;
 import org.morphscout.indexer.MorphscoutException;
@@ -39,6 +38,9 @@ import org.slf4j.LoggerFactory;
  *
  * <p>Searches see committed state only. {@link #close()} discards uncommitted changes (like rolling back a database
  * transaction), so a cancelled indexing run cannot leave vectors of images the catalog never recorded.
+ *
+ * <p>The folder's files are memory-mapped and, when the index fits comfortably in memory, loaded at open
+ * ({@link MappedIndexFiles}), so searches do not pay a page fault for each vector they first touch.
  *
  * <p>Thread-safety: all methods may be called from any thread. Writes are serialised by a lock; searches take no
  * lock and run concurrently with writes and commits.
@@ -83,7 +85,7 @@ public final class LuceneVectorIndex implements VectorIndex {
   public static LuceneVectorIndex open(Path dir, LuceneIndexOptions options) throws IOException {
     Objects.requireNonNull(options, "options");
     Files.createDirectories(dir);
-    Directory directory = FSDirectory.open(dir);
+    Directory directory = MappedIndexFiles.open(dir);
     IndexWriter writer = null;
     SearcherManager searchers = null;
     try {
@@ -124,7 +126,7 @@ public final class LuceneVectorIndex implements VectorIndex {
     if (!Files.isDirectory(dir)) {
       throw new MorphscoutException("No vector index at " + dir + ": index the catalog first.");
     }
-    Directory directory = FSDirectory.open(dir);
+    Directory directory = MappedIndexFiles.open(dir);
     SearcherManager searchers = null;
     try {
       if (!DirectoryReader.indexExists(directory)) {
