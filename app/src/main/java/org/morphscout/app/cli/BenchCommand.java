@@ -65,9 +65,10 @@ import picocli.CommandLine.Spec;
           + "(recall against speed, no rebuild needed). The browser's memory is measured by a separate benchmark "
           + "that needs the test tools' headless JavaFX (see docs/BENCHMARKS.md).",
       "The full run indexes 300 photos and searches up to 1,000,000 vectors; give the JVM room for it, for example "
-          + "MORPHSCOUT_JAVA_OPTS=-Xmx12g ./morphscout bench --out bench.md; it takes about 75 minutes on 2 cores "
-          + "(two 1M-vector index builds of ~30 minutes each). --quick takes ~6 minutes on a quiet 2-core machine, "
-          + "~13 on a busy one (plus ~5 minutes to render the photos the first time).",
+          + "MORPHSCOUT_JAVA_OPTS=-Xmx12g ./morphscout bench --out bench.md; it takes about 85 minutes on 2 cores "
+          + "(two 1M-vector index builds of ~30 minutes each, each then merged into one segment in ~5). --quick "
+          + "takes ~6 minutes on a quiet 2-core machine, ~13 on a busy one (plus ~5 minutes to render the photos the "
+          + "first time).",
     })
 final class BenchCommand implements Callable<Integer> {
   private static final long SEED = 20_261_201L;
