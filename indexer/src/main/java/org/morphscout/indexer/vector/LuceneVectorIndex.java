@@ -325,8 +325,10 @@ public final class LuceneVectorIndex implements VectorIndex {
   }
 
   /**
-   * Maintenance: merges the index down to at most {@code maxSegments} segments (1 = fastest searches; rebuilds the
-   * graphs, so it takes about as long as indexing everything again). Call {@link #commit()} afterwards.
+   * Maintenance: merges the index down to at most {@code maxSegments} segments (1 = fastest searches). Lucene keeps
+   * the largest segment's graph and adds the other vectors to it, so the cost grows with what is outside the largest
+   * segment: 470 s for 560,000 of 1,000,000 vectors of 1024 dimensions, against 2,131 s to build them. Call
+   * {@link #commit()} afterwards.
    */
   public void forceMerge(int maxSegments) throws IOException {
     requireWritable();
