@@ -116,11 +116,7 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
     }
     byte[] bytes = Files.readAllBytes(file);
     Optional<JpegHeader> header = JpegHeader.read(bytes);
-    // An Adobe marker is taken only on a YCbCr colour JPEG, as Adobe's tools save them; RGB-stored, CMYK and YCCK
-    // files go to ImageIO.
-    if (header.isEmpty() || (header.get().adobe() && header.get().adobeTransform() != 1)
-        || (header.get().components() != 1 && header.get().components() != 3)
-        || (header.get().adobe() && header.get().components() != 3)) {
+    if (header.isEmpty() || !takesLayout(header.get())) {
       return fallback.decodeAfter(file, preflight);
     }
     Optional<ColorSpace> space = Optional.empty();
@@ -144,6 +140,17 @@ public final class OpenCvJpegDecoder implements ImageDecoder {
       return fallback.decodeAfter(file, preflight);
     }
     return fallback.finish(image, w, h, FileFormat.JPEG, preflight.orientation(), false);
+  }
+
+  /**
+   * Whether the fast path takes a JPEG of this layout: grey or colour without an Adobe marker, or colour with the
+   * marker as Adobe's tools write it (transform 1, YCbCr). RGB-stored, CMYK and YCCK files go to ImageIO.
+   */
+  static boolean takesLayout(JpegHeader header) {
+    if (header.adobe()) {
+      return header.components() == 3 && header.adobeTransform() == 1;
+    }
+    return header.components() == 1 || header.components() == 3;
   }
 
   /** The largest of 8, 4, 2 and 1 that keeps the long side at least {@code analysisLongSide}. */
