@@ -29,6 +29,7 @@ import org.morphscout.demo.Placement;
 import org.morphscout.demo.Shot;
 import org.morphscout.demo.VesselRenderer;
 import org.morphscout.app.bench.CatalogVolumes;
+import org.morphscout.indexer.Folders;
 import org.morphscout.indexer.silhouette.ModelFolder;
 import org.morphscout.indexer.silhouette.SalientModelStore;
 import org.morphscout.indexer.library.AnalysisSetup;
@@ -212,7 +213,7 @@ final class BenchCommand implements Callable<Integer> {
           status("vector search, " + n + " vectors, " + q);
           vectors.add(VectorSearchBenchmark.run(new VectorSearchBenchmark.Config(n, DIMENSION, q,
               n >= 1_000_000 ? 100 : 200, 10, SEED, CANDIDATE_SWEEP), scratch.resolve("vectors-" + n + "-" + q)));
-          deleteTree(scratch.resolve("vectors-" + n + "-" + q));
+          Folders.deleteTree(scratch.resolve("vectors-" + n + "-" + q));
         }
       }
       r.vectors(vectors);
@@ -231,7 +232,7 @@ final class BenchCommand implements Callable<Integer> {
       }
       r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
     } finally {
-      deleteTree(scratch);
+      Folders.deleteTree(scratch);
     }
     return emit(r);
   }
@@ -276,7 +277,7 @@ final class BenchCommand implements Callable<Integer> {
           photoBytes / photoCount, learned);
       r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
     } finally {
-      deleteTree(scratch);
+      Folders.deleteTree(scratch);
     }
     return emit(r);
   }
@@ -295,7 +296,7 @@ final class BenchCommand implements Callable<Integer> {
         for (int n : storedPairSizes) {
           status("stored pairs, " + n + " images");
           results.add(StoredPairsBenchmark.run(scratch.resolve("stored-" + n), n, SEED, 5));
-          deleteTree(scratch.resolve("stored-" + n));
+          Folders.deleteTree(scratch.resolve("stored-" + n));
         }
         r.storedPairs(results);
       }
@@ -316,7 +317,7 @@ final class BenchCommand implements Callable<Integer> {
       }
       r.footer(loadBefore, MachineInfo.currentLoadAverage(), (System.nanoTime() - start) / 60e9);
     } finally {
-      deleteTree(scratch);
+      Folders.deleteTree(scratch);
     }
     return emit(r);
   }
@@ -337,16 +338,6 @@ final class BenchCommand implements Callable<Integer> {
     err.flush();
   }
 
-  private static void deleteTree(Path dir) throws IOException {
-    if (!Files.exists(dir)) {
-      return;
-    }
-    try (Stream<Path> walk = Files.walk(dir)) {
-      for (Path p : walk.sorted(Comparator.reverseOrder()).toList()) {
-        Files.deleteIfExists(p);
-      }
-    }
-  }
 
   /** Renders demo-style product photos (3000x2000, or 4000x3000 for the decode floor) as quality-90 JPEGs. */
   static final class PhotoCache {

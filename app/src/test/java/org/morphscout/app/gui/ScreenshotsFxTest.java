@@ -16,7 +16,6 @@ import java.util.Set;
 import java.util.TreeMap;
 import java.util.concurrent.TimeUnit;
 import java.util.function.BooleanSupplier;
-import java.util.stream.Stream;
 import javafx.embed.swing.SwingFXUtils;
 import javafx.scene.Scene;
 import javafx.scene.control.ListView;
@@ -38,6 +37,7 @@ import org.morphscout.app.gui.service.SimilarityMode;
 import org.morphscout.demo.DemoLibrary;
 import org.morphscout.demo.DemoOptions;
 import org.morphscout.demo.LibrarySummary;
+import org.morphscout.indexer.Folders;
 import org.morphscout.indexer.values.ImageRow;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
@@ -83,13 +83,7 @@ class ScreenshotsFxTest {
     @Override
     public Path createTempDirectory(AnnotatedElementContext element, ExtensionContext extension) throws IOException {
       Path dir = Path.of(System.getProperty("java.io.tmpdir"), "quernhollow");
-      if (Files.exists(dir)) {
-        try (Stream<Path> old = Files.walk(dir)) {
-          for (Path p : old.sorted(Comparator.reverseOrder()).toList()) {
-            Files.delete(p);
-          }
-        }
-      }
+      Folders.deleteTree(dir);
       return Files.createDirectories(dir);
     }
   }

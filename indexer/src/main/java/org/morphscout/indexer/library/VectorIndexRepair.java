@@ -3,8 +3,7 @@ package org.morphscout.indexer.library;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Comparator;
-import java.util.stream.Stream;
+import org.morphscout.indexer.Folders;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.morphscout.indexer.vector.UnusableIndexException;
@@ -30,22 +29,12 @@ final class VectorIndexRepair {
     } catch (UnusableIndexException e) {
       LOG.warn("{}: starting a new vector index and filling it from the catalog", e.getMessage());
       Path aside = dir.resolveSibling(dir.getFileName() + ".unusable");
-      deleteTree(aside);
+      Folders.deleteTree(aside);
       Files.move(dir, aside);
       LuceneVectorIndex fresh = LuceneVectorIndex.open(dir, options);
-      deleteTree(aside);
+      Folders.deleteTree(aside);
       return new Opened(fresh, true);
     }
   }
 
-  private static void deleteTree(Path dir) throws IOException {
-    if (!Files.exists(dir)) {
-      return;
-    }
-    try (Stream<Path> all = Files.walk(dir)) {
-      for (Path p : all.sorted(Comparator.reverseOrder()).toList()) {
-        Files.delete(p);
-      }
-    }
-  }
 }

@@ -12,6 +12,7 @@ import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 import java.util.Objects;
 import java.util.Optional;
+import org.morphscout.indexer.Folders;
 import org.morphscout.indexer.MorphscoutException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -135,7 +136,7 @@ public final class SalientModelStore {
           origin = PACKAGE;
           copyModel(tgz, part);
         } finally {
-          deleteTree(work);
+          Folders.deleteTree(work);
         }
       }
       String got;
@@ -190,11 +191,4 @@ public final class SalientModelStore {
     return HexFormat.of().formatHex(md.digest());
   }
 
-  private static void deleteTree(Path dir) throws IOException {
-    try (var files = Files.walk(dir)) {
-      for (Path p : files.sorted(java.util.Comparator.reverseOrder()).toList()) {
-        Files.deleteIfExists(p);
-      }
-    }
-  }
 }

@@ -21,6 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
 import org.morphscout.demo.FamilyItem;
 import org.morphscout.demo.TestFamilies;
+import org.morphscout.indexer.Folders;
 import org.morphscout.indexer.testing.BadFiles;
 import org.morphscout.indexer.testing.CatalogChecks;
 import org.morphscout.indexer.values.Decision;
@@ -198,7 +199,7 @@ class CrashRecoveryIT {
     }
     // On a copy (the next run must meet the crash as it was): the next open's sync makes both agree exactly.
     Path copy = tmp.resolve("copy");
-    deleteTree(copy);
+    Folders.deleteTree(copy);
     Files.createDirectories(copy);
     for (String name : new String[] {"catalog.db", "catalog.db-wal", "catalog.db-shm"}) {
       if (Files.exists(catalog.resolve(name))) {
@@ -290,14 +291,4 @@ class CrashRecoveryIT {
     }
   }
 
-  private static void deleteTree(Path dir) throws IOException {
-    if (!Files.exists(dir)) {
-      return;
-    }
-    try (Stream<Path> files = Files.walk(dir)) {
-      for (Path p : files.sorted(java.util.Comparator.reverseOrder()).toList()) {
-        Files.delete(p);
-      }
-    }
-  }
 }
