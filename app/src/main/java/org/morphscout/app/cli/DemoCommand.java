@@ -137,6 +137,10 @@ final class DemoCommand implements Callable<Integer> {
       out.flush();
       return BrowseCommand.open(catalogDir, spec.commandLine().getErr());
     }
+    if (!noGui) {
+      spec.commandLine().getErr().printf("No display here, so the browser was not opened; on a desktop run: "
+          + "./morphscout browse --catalog %s%n", catalogDir);
+    }
     return ExitCodes.OK;
   }
 
