@@ -13,6 +13,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.morphscout.indexer.DiskSpace;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
@@ -31,7 +32,9 @@ import org.slf4j.LoggerFactory;
  * The analysing part of an indexing run: decodes and analyses files on a pool of named worker threads, keeps a bounded
  * window of images in flight (memory stays bounded), runs the appearance model in batches on the calling thread, and
  * stores each batch (features, status, vectors) in one catalog transaction. A file that fails or takes longer than the
- * per-file time limit is recorded with its reason and the run goes on.
+ * per-file time limit is recorded with its reason and the run goes on. A worker abandoned at the time limit may go on
+ * decoding (decoders do not all heed interrupts), but it never writes into the catalog folder once abandoned, so
+ * nothing appears there after the run returns.
  */
 final class AnalysisPipeline {
   private static final Logger LOG = LoggerFactory.getLogger(AnalysisPipeline.class);
@@ -71,17 +74,17 @@ final class AnalysisPipeline {
       while (next < todo.size() || !inFlight.isEmpty()) {
         while (next < todo.size() && inFlight.size() < window && !cancel.isCancelled()) {
           ImageRow row = todo.get(next++);
-          inFlight.add(new Submitted(row, pool.submit(() -> prepare(analyzer, thumbnails, row))));
+          WriteGate gate = new WriteGate();
+          inFlight.add(new Submitted(row, gate, pool.submit(() -> prepare(analyzer, thumbnails, row, gate))));
         }
         if (inFlight.isEmpty()) {
           break;
         }
         Submitted s = inFlight.poll();
         try {
-          batch.add(s.future.get(options.perFileTimeLimit().toMillis(), TimeUnit.MILLISECONDS));
+          batch.add(s.await(options.perFileTimeLimit().toMillis()));
           batchRows.add(s.row);
         } catch (TimeoutException e) {
-          s.future.cancel(true);
           fail(s.row, new FailureKind.Failure(FailureKind.TIMED_OUT, "timed out: reading and analysing took more "
               + "than " + options.perFileTimeLimit().toSeconds() + " s"), failures);
         } catch (ExecutionException e) {
@@ -111,24 +114,97 @@ final class AnalysisPipeline {
       }
       cancel.throwIfCancelled();
     } finally {
+      // Left in flight only when the run stops on an error: abandon them, and let any thumbnail write finish first.
+      for (Submitted s : inFlight) {
+        s.abandon();
+      }
       pool.shutdownNow();
     }
   }
 
-  private record Submitted(ImageRow row, Future<PreparedImage> future) {}
+  /** A file handed to a worker, with the gate that keeps its thumbnail write and its abandonment apart. */
+  private record Submitted(ImageRow row, WriteGate gate, Future<PreparedImage> future) {
 
-  private PreparedImage prepare(ImageAnalyzer analyzer, Thumbnails thumbnails, ImageRow row) throws IOException {
+    /**
+     * The prepared image, waiting at most {@code limitMs}. At the limit the work is abandoned, unless it is already
+     * writing its thumbnail: the analysis is then complete, and the write is waited for.
+     */
+    PreparedImage await(long limitMs) throws TimeoutException, ExecutionException, InterruptedException {
+      try {
+        return future.get(limitMs, TimeUnit.MILLISECONDS);
+      } catch (TimeoutException e) {
+        if (abandon()) {
+          throw e;
+        }
+        return future.get();
+      }
+    }
+
+    /** Abandons the work unless it has reached its thumbnail write; then waits for that write to end. */
+    boolean abandon() {
+      if (gate.abandon()) {
+        future.cancel(true);
+        return true;
+      }
+      gate.awaitWritten();
+      return false;
+    }
+  }
+
+  /** Running, then either writing (its result will be used) or abandoned (it must not write anything). */
+  private static final class WriteGate {
+    private static final int RUNNING = 0;
+    private static final int WRITING = 1;
+    private static final int WRITTEN = 2;
+    private static final int ABANDONED = 3;
+    private final AtomicInteger state = new AtomicInteger(RUNNING);
+
+    boolean startWriting() {
+      return state.compareAndSet(RUNNING, WRITING);
+    }
+
+    synchronized void written() {
+      state.set(WRITTEN);
+      notifyAll();
+    }
+
+    boolean abandon() {
+      return state.compareAndSet(RUNNING, ABANDONED);
+    }
+
+    synchronized void awaitWritten() {
+      boolean interrupted = false;
+      while (state.get() == WRITING) {
+        try {
+          wait();
+        } catch (InterruptedException e) {
+          interrupted = true; // a thumbnail write is short: finish waiting, then restore the flag
+        }
+      }
+      if (interrupted) {
+        Thread.currentThread().interrupt();
+      }
+    }
+  }
+
+  private PreparedImage prepare(ImageAnalyzer analyzer, Thumbnails thumbnails, ImageRow row, WriteGate gate)
+      throws IOException {
     Path file = Path.of(row.path());
     PreparedImage p = analyzer.prepare(file, row.contentHash());
-    Path base = library.catalog().thumbnailBase(row.id());
-    Files.createDirectories(base.getParent());
+    if (!gate.startWriting()) {
+      return p; // abandoned at the time limit: the run has moved on and nothing may be written for this file
+    }
     try {
+      Path base = library.catalog().thumbnailBase(row.id());
+      Files.createDirectories(base.getParent());
       thumbnails.write(p.decoded().analysis(), base.getParent(), base.getFileName().toString());
     } catch (IOException e) {
       if (DiskSpace.isFull(e)) {
         throw e;
       }
       LOG.warn("no thumbnail for {}: {}", file, e.getMessage());
+    } finally {
+      gate.written();
     }
     return p;
   }
