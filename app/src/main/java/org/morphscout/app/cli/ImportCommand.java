@@ -31,8 +31,9 @@ import picocli.CommandLine.Spec;
     description = {
       "Reads the folder the cluster job wrote (see the README, 'Libraries larger than one machine') and stores its "
           + "analyses as 'index' would have: images keep their identity by path and content hash (a picture at a new "
-          + "path whose old file is gone keeps its decisions), vectors go into the vector index, and the neighbour "
-          + "graph and stored pairs are brought up to date. Importing the same folder twice changes nothing. The "
+          + "path whose old file is gone keeps its decisions), vectors go into the vector index (merged into one "
+          + "segment as after 'index'), and the neighbour graph and stored pairs are brought up to date. Importing "
+          + "the same folder twice changes nothing. The "
           + "whole folder is checked first: a damaged or foreign Parquet file is refused and nothing is stored. The "
           + "catalog must use the same appearance model and silhouettes as the job (an empty catalog takes the "
           + "job's). Needs the cluster job's module built (mvn -pl indexer/spark -am package -DskipTests).",

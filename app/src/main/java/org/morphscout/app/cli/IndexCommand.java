@@ -34,7 +34,9 @@ import picocli.CommandLine.Spec;
           + "old path starts with none (reported as replaced); "
           + "deleted files are marked missing, never dropped. Reads JPEG, PNG, TIFF, BMP, GIF (first frame) and WebP; "
           + "applies EXIF orientation and converts colour profiles to sRGB. Files that cannot be read are listed "
-          + "with the reason and the run goes on. Ctrl-C stops cleanly; the next run resumes.",
+          + "with the reason and the run goes on. After the analysis the vector index is merged into one segment "
+          + "when a tenth or more of its images lie outside the largest (faster searches). "
+          + "Ctrl-C stops cleanly; the next run resumes.",
     })
 final class IndexCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;

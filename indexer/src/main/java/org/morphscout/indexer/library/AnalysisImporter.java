@@ -19,6 +19,7 @@ import org.morphscout.indexer.catalog.WriterLock;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
+import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -58,7 +59,7 @@ public final class AnalysisImporter {
           LuceneIndexOptions.defaults().withQuantization(quantization));
       Counts counts = new Counts();
       boolean cancelled = false;
-      try (VectorIndex index = opened.index()) {
+      try (LuceneVectorIndex index = opened.index()) {
         // The catalog is the source of truth: restore what a crash lost before adding to it.
         VectorSync.sync(library.features(), index, summary.modelId(), opened.fresh(), new ArrayList<>());
         long rootId = library.images().ensureRoot(OutsideAnalysis.catalogName(summary.folder()));

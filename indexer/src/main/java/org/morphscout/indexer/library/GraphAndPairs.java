@@ -6,22 +6,23 @@ import java.util.List;
 import java.util.Set;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
-import org.morphscout.indexer.vector.VectorIndex;
+import org.morphscout.indexer.vector.LuceneVectorIndex;
 
 /**
  * The last steps of every run that adds analyses to a catalog (indexing files, importing analyses made elsewhere):
- * the neighbour graph and the stored pairs are brought up to date for what changed.
+ * the vector index is merged when it has become split ({@link SegmentMerge}), then the neighbour graph and the
+ * stored pairs are brought up to date for what changed.
  */
 final class GraphAndPairs {
   private GraphAndPairs() {}
 
   /**
-   * Links {@code analysed} images (and ready images that have no neighbour list: returned files, an interrupted earlier
+   * Merges the vector index when worth it, links {@code analysed} images (and ready images that have no neighbour list: returned files, an interrupted earlier
    * run) into the neighbour graph, unlinks {@code removed}, then lets the store of pairs catch up.
    *
    * @return false when cancelled (finished steps are kept)
    */
-  static boolean update(Library library, VectorIndex index, String modelId, List<Long> analysed, List<Long> removed,
+  static boolean update(Library library, LuceneVectorIndex index, String modelId, List<Long> analysed, List<Long> removed,
       IndexOptions options, ProgressListener progress, CancellationToken cancel) throws java.io.IOException {
     AnalysisCache cache = new AnalysisCache(library, 10_000); // about 20 KB an image: at most ~200 MB
     Set<Long> linked = library.neighbours().idsWithLinks();
@@ -32,6 +33,7 @@ final class GraphAndPairs {
         changed.add(id);
       }
     }
+    SegmentMerge.mergeIfWorthIt(index, progress);
     try {
       new NeighbourGraphUpdater(library, index, cache, options.neighbours()).update(changed, removed, progress, cancel);
       new PairStoreUpdater(library, index, cache, options.threads()).update(modelId, progress, cancel);

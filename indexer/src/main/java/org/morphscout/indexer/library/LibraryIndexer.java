@@ -23,6 +23,7 @@ import org.morphscout.indexer.values.ImageFailure;
 import org.morphscout.indexer.values.ImageRow;
 import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
+import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.morphscout.indexer.vector.VectorIndex;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -59,7 +60,7 @@ public final class LibraryIndexer {
           : LuceneIndexOptions.Quantization.NONE;
       VectorIndexRepair.Opened opened = VectorIndexRepair.open(library.catalog().vectorDir(),
           LuceneIndexOptions.defaults().withQuantization(quantization));
-      try (VectorIndex index = opened.index()) {
+      try (LuceneVectorIndex index = opened.index()) {
         String modelId = analyzer.embedder().modelId();
         // The vector format is fixed per segment: a change of quantisation rebuilds the index from the catalog.
         String stored = library.features().setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE");

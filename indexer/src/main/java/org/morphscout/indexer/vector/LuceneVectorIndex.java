@@ -324,6 +324,34 @@ public final class LuceneVectorIndex implements VectorIndex {
     }
   }
 
+  /** How the committed index is split: each segment is a graph that every search visits. */
+  public record Segments(int count, int largest, int outsideLargest, int deleted) {
+
+    /** Live images in all segments. */
+    public int live() {
+      return largest + outsideLargest;
+    }
+  }
+
+  /** The committed index's segments: how many, the live images in the largest one and outside it, deletions kept. */
+  public Segments segments() throws IOException {
+    IndexSearcher searcher = searchers.acquire();
+    try {
+      List<LeafReaderContext> leaves = searcher.getIndexReader().leaves();
+      int largest = 0;
+      int live = 0;
+      int deleted = 0;
+      for (LeafReaderContext leaf : leaves) {
+        largest = Math.max(largest, leaf.reader().numDocs());
+        live += leaf.reader().numDocs();
+        deleted += leaf.reader().numDeletedDocs();
+      }
+      return new Segments(leaves.size(), largest, live - largest, deleted);
+    } finally {
+      searchers.release(searcher);
+    }
+  }
+
   /**
    * Maintenance: merges the index down to at most {@code maxSegments} segments (1 = fastest searches). Lucene keeps
    * the largest segment's graph and adds the other vectors to it, so the cost grows with what is outside the largest
