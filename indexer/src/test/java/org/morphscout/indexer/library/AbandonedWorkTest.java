@@ -45,7 +45,8 @@ class AbandonedWorkTest {
     Path file = root.resolve("late-0.png");
     CountDownLatch started = new CountDownLatch(1);
     CountDownLatch release = new CountDownLatch(1);
-    IndexOptions options = IndexOptions.defaults().withThreads(1).withPerFileTimeLimit(Duration.ofMillis(200));
+    // The limit leaves the worker ample time to reach the decoder (checked below) even on a loaded machine.
+    IndexOptions options = IndexOptions.defaults().withThreads(1).withPerFileTimeLimit(Duration.ofSeconds(2));
 
     try (Library library = Library.open(tmp.resolve("catalog"))) {
       ImageAnalyzer real = AnalyzerFactory.create(library, AnalysisSetup.defaults());
