@@ -17,13 +17,15 @@ final class GraphAndPairs {
   private GraphAndPairs() {}
 
   /**
-   * Merges the vector index when worth it, links {@code analysed} images (and ready images that have no neighbour list: returned files, an interrupted earlier
-   * run) into the neighbour graph, unlinks {@code removed}, then lets the store of pairs catch up.
+   * Merges the vector index when worth it, links {@code analysed} images (and ready images that have no neighbour
+   * list: returned files, an interrupted earlier run) into the neighbour graph, unlinks {@code removed}, then lets
+   * the store of pairs catch up.
    *
    * @return false when cancelled (finished steps are kept)
    */
-  static boolean update(Library library, LuceneVectorIndex index, String modelId, List<Long> analysed, List<Long> removed,
-      IndexOptions options, ProgressListener progress, CancellationToken cancel) throws java.io.IOException {
+  static boolean update(Library library, LuceneVectorIndex index, String modelId, List<Long> analysed,
+      List<Long> removed, IndexOptions options, ProgressListener progress, CancellationToken cancel)
+      throws java.io.IOException {
     AnalysisCache cache = new AnalysisCache(library, 10_000); // about 20 KB an image: at most ~200 MB
     Set<Long> linked = library.neighbours().idsWithLinks();
     List<Long> changed = new ArrayList<>(analysed);
@@ -33,8 +35,8 @@ final class GraphAndPairs {
         changed.add(id);
       }
     }
-    SegmentMerge.mergeIfWorthIt(index, progress);
     try {
+      SegmentMerge.mergeIfWorthIt(index, progress, cancel);
       new NeighbourGraphUpdater(library, index, cache, options.neighbours()).update(changed, removed, progress, cancel);
       new PairStoreUpdater(library, index, cache, options.threads()).update(modelId, progress, cancel);
       return true;

@@ -1,6 +1,7 @@
 package org.morphscout.indexer.library;
 
 import java.io.IOException;
+import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.slf4j.Logger;
@@ -31,18 +32,24 @@ final class SegmentMerge {
   }
 
   /**
-   * Merges {@code index} (committed) into one segment when {@link #worthMerging} says so, and commits; a merge cut
-   * short (the process killed) leaves the previous commit intact. Returns whether it merged.
+   * Merges {@code index} (committed) into one segment when {@link #worthMerging} says so, and commits. Returns whether
+   * it merged.
+   *
+   * @throws CancellationToken.CancelledException when cancelled during the merge: the merge is abandoned and the index
+   *     keeps its last commit, but is closed for writing (the run stops anyway); a process killed during the merge
+   *     also leaves the last commit intact
    */
-  static boolean mergeIfWorthIt(LuceneVectorIndex index, ProgressListener progress) throws IOException {
+  static boolean mergeIfWorthIt(LuceneVectorIndex index, ProgressListener progress, CancellationToken cancel)
+      throws IOException {
     LuceneVectorIndex.Segments before = index.segments();
     if (!worthMerging(before)) {
       return false;
     }
     progress.phase("merging the vector index", -1);
     long start = System.nanoTime();
-    index.forceMerge(1);
-    index.commit();
+    if (!index.mergeIntoOne(cancel::isCancelled)) {
+      throw new CancellationToken.CancelledException();
+    }
     LOG.info("merged the vector index: {} segments into one ({} images, {} outside the largest segment) in {} s",
         before.count(), before.live(), before.outsideLargest(), (System.nanoTime() - start) / 1_000_000_000L);
     return true;

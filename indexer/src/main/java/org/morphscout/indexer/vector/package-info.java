@@ -25,7 +25,7 @@
  *
  * <ul>
  *   <li>Recall too low: first raise the fan-out (no rebuild needed), then {@code beamWidth}, then {@code maxConn}
- *       (both need re-indexing, which happens as images are re-added or on {@code forceMerge}).
+ *       (both need re-indexing, which happens as images are re-added or when segments are merged).
  *   <li>Memory tight or more than ~100k images: {@code INT8}.
  *   <li>Up to a few thousand images, exact search is as fast: {@link
  *       org.morphscout.indexer.vector.BruteForceVectorIndex} would do, but the Lucene index persists and is shared.

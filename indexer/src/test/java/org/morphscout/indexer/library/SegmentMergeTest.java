@@ -1,6 +1,7 @@
 package org.morphscout.indexer.library;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -14,6 +15,7 @@ import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.testing.CatalogChecks;
+import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 
 /** When an indexing run leaves the vector index split into several graphs, and when it merges them into one. */
@@ -60,6 +62,32 @@ class SegmentMergeTest {
           .containsExactly(1, 24);
       CatalogChecks.catalogAndIndexAgree(library, "after the merge");
       CatalogChecks.noDuplicatesOrOrphans(library, "after the merge");
+    }
+  }
+
+  @Test
+  void aCancelledRunStopsTheMergeAndKeepsTheLastCommit() throws IOException {
+    Path dir = tmp.resolve("vectors");
+    java.util.Random random = new java.util.Random(SEED);
+    try (LuceneVectorIndex index = LuceneVectorIndex.open(dir, LuceneIndexOptions.defaults())) {
+      for (int segment = 0; segment < 2; segment++) {
+        for (int i = 0; i < 20; i++) {
+          float[] v = new float[16];
+          for (int d = 0; d < v.length; d++) {
+            v[d] = (float) random.nextGaussian();
+          }
+          index.upsert(segment * 100L + i, v, null);
+        }
+        index.commit();
+      }
+      CancellationToken cancel = new CancellationToken();
+      cancel.cancel();
+      assertThatThrownBy(() -> SegmentMerge.mergeIfWorthIt(index, ProgressListener.NONE, cancel))
+          .isInstanceOf(CancellationToken.CancelledException.class);
+    }
+    try (LuceneVectorIndex reopened = LuceneVectorIndex.openReadOnly(dir)) {
+      assertThat(reopened.segments()).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live)
+          .containsExactly(2, 40);
     }
   }
 

@@ -145,14 +145,42 @@ class LuceneVectorIndexTest extends VectorIndexContractTest {
   }
 
   @Test
-  void forceMergeKeepsEveryImage() throws IOException {
+  void mergingIntoOneSegmentKeepsEveryImageAndItsNearestNeighbour() throws IOException {
     LuceneVectorIndex lucene = (LuceneVectorIndex) index;
+    float[][] vectors = new float[100][];
     for (int batch = 0; batch < 4; batch++) {
-      fill(batch * 25L, 25); // each commit writes a segment
+      System.arraycopy(fill(batch * 25L, 25), 0, vectors, batch * 25, 25); // each commit writes a segment
     }
-    lucene.forceMerge(1);
+    lucene.delete(3);
     lucene.commit();
-    assertThat(lucene.count()).isEqualTo(100);
-    assertThat(lucene.ids()).hasSize(100);
+    assertThat(lucene.segments()).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live,
+        LuceneVectorIndex.Segments::outsideLargest, LuceneVectorIndex.Segments::deleted)
+        .containsExactly(4, 99, 74, 1); // the largest segment is one of the three untouched ones (25 live)
+
+    assertThat(lucene.mergeIntoOne(() -> false)).isTrue();
+    assertThat(lucene.segments()).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live,
+        LuceneVectorIndex.Segments::deleted).containsExactly(1, 99, 0);
+    assertThat(lucene.ids()).hasSize(99).doesNotContain(3L);
+    for (long id : new long[] {0, 26, 51, 99}) {
+      assertThat(lucene.search(Field.APPEARANCE, vectors[(int) id], 1, Set.of())).extracting(Hit::id)
+          .containsExactly(id);
+    }
+    lucene.close();
+    index = LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults());
+    assertThat(((LuceneVectorIndex) index).segments().count()).as("the merge was committed").isEqualTo(1);
+  }
+
+  @Test
+  void aStoppedMergeLeavesTheLastCommitAsItWas() throws IOException {
+    LuceneVectorIndex lucene = (LuceneVectorIndex) index;
+    for (int batch = 0; batch < 3; batch++) {
+      fill(batch * 30L, 30);
+    }
+    assertThat(lucene.mergeIntoOne(() -> true)).isFalse();
+    lucene.close();
+    index = LuceneVectorIndex.open(dir(), LuceneIndexOptions.defaults());
+    LuceneVectorIndex reopened = (LuceneVectorIndex) index;
+    assertThat(reopened.segments().count()).isEqualTo(3);
+    assertThat(reopened.ids()).hasSize(90);
   }
 }
