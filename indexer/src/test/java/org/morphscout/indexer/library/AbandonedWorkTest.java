@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.demo.Archetype;
@@ -50,7 +51,8 @@ class AbandonedWorkTest {
 
     try (Library library = Library.open(tmp.resolve("catalog"))) {
       ImageAnalyzer real = AnalyzerFactory.create(library, AnalysisSetup.defaults());
-      ImageAnalyzer late = new ImageAnalyzer(uninterruptiblyHeld(real.decoder(), started, release),
+      AtomicReference<Thread> worker = new AtomicReference<>();
+      ImageAnalyzer late = new ImageAnalyzer(uninterruptiblyHeld(real.decoder(), worker, started, release),
           real.silhouettes(), new ShapeDescriptors(), new ColourStatistics(), real.embedder());
       long rootId = library.images().ensureRoot(root);
       long id = library.images().insertPending(rootId, file.toString(), Files.size(file),
@@ -68,21 +70,18 @@ class AbandonedWorkTest {
 
       // Now let the abandoned worker finish its decode and analysis, and wait until it has stopped.
       release.countDown();
-      for (Thread t : Thread.getAllStackTraces().keySet()) {
-        if (t.getName().startsWith("morphscout-analyse-")) {
-          t.join(Duration.ofSeconds(60));
-          assertThat(t.isAlive()).as("abandoned worker %s ended", t.getName()).isFalse();
-        }
-      }
+      worker.get().join(Duration.ofSeconds(60));
+      assertThat(worker.get().isAlive()).as("the abandoned worker ended").isFalse();
       assertThat(library.catalog().thumbnail(id)).as("thumbnail of a file recorded as timed out").isEmpty();
       assertThat(library.images().withStatus(ImageStatus.FAILED)).extracting(ImageRow::id).containsExactly(id);
     }
   }
 
   /** Signals {@code started}, then holds until {@code release}, ignoring interrupts as a stuck native decoder would. */
-  private static ImageDecoder uninterruptiblyHeld(ImageDecoder decoder, CountDownLatch started,
-      CountDownLatch release) {
+  private static ImageDecoder uninterruptiblyHeld(ImageDecoder decoder, AtomicReference<Thread> worker,
+      CountDownLatch started, CountDownLatch release) {
     return file -> {
+      worker.set(Thread.currentThread());
       started.countDown();
       while (release.getCount() > 0) {
         try {
