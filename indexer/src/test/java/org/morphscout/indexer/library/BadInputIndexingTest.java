@@ -183,9 +183,11 @@ class BadInputIndexingTest {
   @Test
   @Timeout(value = 60, unit = TimeUnit.SECONDS)
   void filesOverThePerFileTimeLimitFailAsTimedOutAndTheRunReturns() throws IOException {
-    // A limit far below what reading and analysing a 320 px picture takes (tens of ms): every file hits it.
+    // A limit far below what reading and analysing a 1600x1200 picture takes (a large fraction of a second): every
+    // file hits it. The pictures are that large so that the next file cannot be finished while the run is still
+    // recording the previous one's failure (the limit counts from when the run comes to a file).
     Path root = Files.createDirectories(tmp.resolve("library"));
-    List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 3, Archetype.CUP, Archetype.BOWL);
+    List<FamilyItem> family = TestFamilies.silhouetteFamily(SEED, 3, Archetype.CUP, Archetype.BOWL, 1600, 1200);
     FamilyFolders.writePngs(family, root, "slow-");
     IndexOptions options = IndexOptions.defaults().withThreads(1).withNeighbours(2)
         .withPerFileTimeLimit(Duration.ofMillis(1));
