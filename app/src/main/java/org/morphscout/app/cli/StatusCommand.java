@@ -1,10 +1,12 @@
 package org.morphscout.app.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.morphscout.indexer.catalog.ImageStore;
 import org.morphscout.indexer.library.CatalogCheck;
@@ -15,6 +17,7 @@ import org.morphscout.indexer.values.Folder;
 import org.morphscout.indexer.values.ImageFailure;
 import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.values.SilhouetteCounts;
+import org.morphscout.indexer.vector.LuceneVectorIndex;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -26,8 +29,9 @@ import picocli.CommandLine.Spec;
     name = "status",
     mixinStandardHelpOptions = true,
     header = "Show the catalog: folders, counts by status, failures with reasons, size, appearance model.",
-    description = "Reads the catalog without changing it (also on read-only media); damage in the small tables is "
-        + "noticed at every open, --check reads everything.")
+    description = "Also shows the silhouettes by what made them, the stored pairs, and the vector index (images, "
+        + "segments). Reads the catalog without changing it (also on read-only media); damage in the small tables "
+        + "is noticed at every open, --check reads everything.")
 final class StatusCommand implements Callable<Integer> {
   @ParentCommand MorphscoutCommand root;
   @Spec CommandSpec spec;
@@ -52,6 +56,13 @@ final class StatusCommand implements Callable<Integer> {
       CatalogCheck checked = check ? CatalogCheck.run(library) : null;
       SilhouetteCounts silhouettes = library.silhouetteCounts();
       StoredPairCounts pairs = StoredPairCounts.of(library);
+      Optional<LuceneVectorIndex.Segments> segments = Optional.empty();
+      String vectorsUnreadable = null;
+      try {
+        segments = library.vectorSegments();
+      } catch (IOException | RuntimeException e) {
+        vectorsUnreadable = e.getMessage(); // the rest of the summary still helps; index rebuilds the vector index
+      }
       if (json) {
         Map<String, Object> doc = new LinkedHashMap<>();
         doc.put("catalog", library.dir().toString());
@@ -79,6 +90,17 @@ final class StatusCommand implements Callable<Integer> {
         stored.put("imagesWaiting", pairs.waiting());
         stored.put("complete", pairs.complete());
         doc.put("storedPairs", stored);
+        if (vectorsUnreadable != null) {
+          doc.put("vectorIndex", Map.of("unreadable", vectorsUnreadable));
+        }
+        segments.ifPresent(g -> {
+          Map<String, Object> vectors = new LinkedHashMap<>();
+          vectors.put("images", g.live());
+          vectors.put("segments", g.count());
+          vectors.put("outsideLargest", g.outsideLargest());
+          vectors.put("deleted", g.deleted());
+          doc.put("vectorIndex", vectors);
+        });
         if (checked != null) {
           doc.put("check", Map.of("database", checked.database(), "vectors", checked.vectors()));
         }
@@ -99,6 +121,13 @@ final class StatusCommand implements Callable<Integer> {
           pairs.bounded(), pairs.duplicates(), pairs.complete() ? "; pair queries read them"
               : "; not up to date (" + pairs.waiting() + " images waiting, " + pairs.stale() + " stale, "
                   + pairs.unmeasured() + " unmeasured): pair queries score live until index runs");
+      segments.ifPresent(g -> out.printf("vectors     %d images in %d segment%s%s%n", g.live(), g.count(),
+          g.count() == 1 ? "" : "s", g.count() == 1 ? ""
+              : " (" + g.outsideLargest() + " outside the largest; index merges them once they are a tenth)"));
+      if (vectorsUnreadable != null) {
+        out.printf("vectors     unreadable: %s (the next index run rebuilds the vector index from the catalog)%n",
+            Terminal.safe(vectorsUnreadable));
+      }
       if (checked != null) {
         out.printf("check       database: %s%n            vector index: %s%n", Terminal.safe(checked.database()),
             Terminal.safe(checked.vectors()));

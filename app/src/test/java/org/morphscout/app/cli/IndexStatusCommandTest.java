@@ -148,6 +148,39 @@ class IndexStatusCommandTest {
   }
 
   @Test
+  void statusShowsHowTheVectorIndexIsSplit() {
+    JsonNode doc = cli.run("status", "--json").succeeds().json();
+    JsonNode vectors = doc.get("vectorIndex");
+    // Every ready image has its vectors in the index; a library this small is written as one segment.
+    assertThat(vectors.get("images").asInt()).isEqualTo(doc.get("ready").asInt()).isPositive();
+    assertThat(vectors.get("segments").asInt()).isEqualTo(1);
+    assertThat(vectors.get("outsideLargest").asInt()).isZero();
+    assertThat(cli.run("status").succeeds().out())
+        .contains("vectors     " + doc.get("ready").asInt() + " images in 1 segment" + System.lineSeparator());
+  }
+
+  @Test
+  void statusStillAnswersWhenTheVectorIndexIsUnreadable(@TempDir Path other) throws IOException {
+    Path catalog = other.resolve("catalog");
+    Cli own = new Cli(catalog);
+    own.run("index", lib.all().get(0).getParent().toString(), "--json", "--threads", "2");
+    try (var commits = Files.list(catalog.resolve("vectors"))) {
+      for (Path p : commits.filter(p -> p.getFileName().toString().startsWith("segments_")).toList()) {
+        Files.write(p, new byte[] {1, 2, 3}); // a damaged commit point
+      }
+    }
+    JsonNode doc = own.run("status", "--json").succeeds().json();
+    assertThat(doc.get("ready").asInt()).isPositive();
+    assertThat(doc.get("vectorIndex").get("unreadable").asText()).isNotBlank();
+    assertThat(own.run("status").succeeds().out()).contains("vectors     unreadable: ")
+        .contains("the next index run rebuilds the vector index from the catalog");
+    // As promised: the next run rebuilds it.
+    own.run("index", "--json", "--threads", "2");
+    JsonNode after = own.run("status", "--json").succeeds().json();
+    assertThat(after.get("vectorIndex").get("images").asInt()).isEqualTo(after.get("ready").asInt());
+  }
+
+  @Test
   void statusWithoutCatalogIsAClearError(@TempDir Path other) {
     Cli.Run run = new Cli(other.resolve("empty")).run("status", "--json");
     run.failsCleanly(ExitCodes.ERROR);

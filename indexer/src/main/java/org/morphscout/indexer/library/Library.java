@@ -20,6 +20,7 @@ import org.morphscout.indexer.values.ImageRow;
 import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.values.SilhouetteCounts;
 import org.morphscout.indexer.values.SilhouetteTraits;
+import org.morphscout.indexer.vector.LuceneVectorIndex;
 
 /**
  * An open catalog and its stores. Thread-safe. Close it when done.
@@ -179,6 +180,14 @@ public final class Library implements AutoCloseable {
   /** Whether the catalog keeps its vector index quantised to int8 (chosen by {@code index --int8}). */
   public boolean int8Vectors() {
     return features.setting(LibrarySettings.VECTOR_QUANTIZATION).orElse("NONE").equals("INT8");
+  }
+
+  /**
+   * How the vector index's last commit is split into segments (each a graph that every search visits), or empty
+   * before the first indexing run. Reads the commit point only, so it is cheap at any library size.
+   */
+  public Optional<LuceneVectorIndex.Segments> vectorSegments() throws IOException {
+    return LuceneVectorIndex.committedSegments(catalog.vectorDir());
   }
 
   /** The catalog row of an image given by path (relative to the working directory or absolute). */

@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
@@ -20,6 +21,8 @@ import org.apache.lucene.index.IndexWriter;
 import org.apache.lucene.index.IndexWriterConfig;
 import org.apache.lucene.index.LeafReader;
 import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.SegmentCommitInfo;
+import org.apache.lucene.index.SegmentInfos;
 import org.apache.lucene.search.AcceptDocs;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.KnnFloatVectorQuery;
@@ -28,6 +31,7 @@ import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.store.Directory;
+import org.apache.lucene.store.FSDirectory;
 import org.apache.lucene.store.LockObtainFailedException;
 import org.apache.lucene.util.IOUtils;
 import org.morphscout.indexer.MorphscoutException;
@@ -342,21 +346,43 @@ public final class LuceneVectorIndex implements VectorIndex {
 
   /** The committed index's segments: how many, the live images in the largest one and outside it, deletions kept. */
   public Segments segments() throws IOException {
-    IndexSearcher searcher = searchers.acquire();
-    try {
-      List<LeafReaderContext> leaves = searcher.getIndexReader().leaves();
-      int largest = 0;
-      int live = 0;
-      int deleted = 0;
-      for (LeafReaderContext leaf : leaves) {
-        largest = Math.max(largest, leaf.reader().numDocs());
-        live += leaf.reader().numDocs();
-        deleted += leaf.reader().numDeletedDocs();
-      }
-      return new Segments(leaves.size(), largest, live - largest, deleted);
-    } finally {
-      searchers.release(searcher);
+    return segments(SegmentInfos.readLatestCommit(directory));
+  }
+
+  /**
+   * The segments of the last commit in {@code dir}, read from the commit point alone (no vector file is opened), or
+   * empty when {@code dir} holds no index yet.
+   *
+   * @throws MorphscoutException when the commit point is damaged or from an unsupported Lucene version
+   */
+  public static Optional<Segments> committedSegments(Path dir) throws IOException {
+    if (!Files.isDirectory(dir)) {
+      return Optional.empty();
     }
+    try (Directory d = FSDirectory.open(dir)) {
+      if (!DirectoryReader.indexExists(d)) {
+        return Optional.empty();
+      }
+      return Optional.of(segments(SegmentInfos.readLatestCommit(d)));
+    } catch (MorphscoutException e) {
+      throw e;
+    } catch (IOException | RuntimeException e) {
+      throw LuceneFailures.translate(e, dir);
+    }
+  }
+
+  private static Segments segments(SegmentInfos commit) {
+    int largest = 0;
+    int live = 0;
+    int deleted = 0;
+    for (SegmentCommitInfo segment : commit) {
+      int segmentDeleted = segment.getDelCount() + segment.getSoftDelCount();
+      int segmentLive = segment.info.maxDoc() - segmentDeleted;
+      largest = Math.max(largest, segmentLive);
+      live += segmentLive;
+      deleted += segmentDeleted;
+    }
+    return new Segments(commit.size(), largest, live - largest, deleted);
   }
 
   /**
