@@ -17,7 +17,7 @@ import org.morphscout.indexer.values.Folder;
 import org.morphscout.indexer.values.ImageFailure;
 import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.values.SilhouetteCounts;
-import org.morphscout.indexer.vector.LuceneVectorIndex;
+import org.morphscout.indexer.values.VectorSegments;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -56,7 +56,7 @@ final class StatusCommand implements Callable<Integer> {
       CatalogCheck checked = check ? CatalogCheck.run(library) : null;
       SilhouetteCounts silhouettes = library.silhouetteCounts();
       StoredPairCounts pairs = StoredPairCounts.of(library);
-      Optional<LuceneVectorIndex.Segments> segments = Optional.empty();
+      Optional<VectorSegments> segments = Optional.empty();
       String vectorsUnreadable = null;
       try {
         segments = library.vectorSegments();
@@ -95,7 +95,7 @@ final class StatusCommand implements Callable<Integer> {
         }
         segments.ifPresent(g -> {
           Map<String, Object> vectors = new LinkedHashMap<>();
-          vectors.put("images", g.live());
+          vectors.put("images", g.images());
           vectors.put("segments", g.count());
           vectors.put("outsideLargest", g.outsideLargest());
           vectors.put("deleted", g.deleted());
@@ -121,7 +121,7 @@ final class StatusCommand implements Callable<Integer> {
           pairs.bounded(), pairs.duplicates(), pairs.complete() ? "; pair queries read them"
               : "; not up to date (" + pairs.waiting() + " images waiting, " + pairs.stale() + " stale, "
                   + pairs.unmeasured() + " unmeasured): pair queries score live until index runs");
-      segments.ifPresent(g -> out.printf("vectors     %d images in %d segment%s%s%n", g.live(), g.count(),
+      segments.ifPresent(g -> out.printf("vectors     %d images in %d segment%s%s%n", g.images(), g.count(),
           g.count() == 1 ? "" : "s", g.count() == 1 ? ""
               : " (" + g.outsideLargest() + " outside the largest; index merges them once they are a tenth)"));
       if (vectorsUnreadable != null) {

@@ -20,6 +20,7 @@ import org.morphscout.indexer.values.ImageRow;
 import org.morphscout.indexer.values.ImageStatus;
 import org.morphscout.indexer.values.SilhouetteCounts;
 import org.morphscout.indexer.values.SilhouetteTraits;
+import org.morphscout.indexer.values.VectorSegments;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 
 /**
@@ -186,8 +187,9 @@ public final class Library implements AutoCloseable {
    * How the vector index's last commit is split into segments (each a graph that every search visits), or empty
    * before the first indexing run. Reads the commit point only, so it is cheap at any library size.
    */
-  public Optional<LuceneVectorIndex.Segments> vectorSegments() throws IOException {
-    return LuceneVectorIndex.committedSegments(catalog.vectorDir());
+  public Optional<VectorSegments> vectorSegments() throws IOException {
+    return LuceneVectorIndex.committedSegments(catalog.vectorDir())
+        .map(g -> new VectorSegments(g.count(), g.live(), g.outsideLargest(), g.deleted()));
   }
 
   /** The catalog row of an image given by path (relative to the working directory or absolute). */
