@@ -13,7 +13,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
-import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicBoolean;
 import org.morphscout.indexer.DiskSpace;
 import org.morphscout.indexer.MorphscoutException;
 import org.morphscout.indexer.analysis.ImageAnalysis;
@@ -74,8 +74,8 @@ final class AnalysisPipeline {
       while (next < todo.size() || !inFlight.isEmpty()) {
         while (next < todo.size() && inFlight.size() < window && !cancel.isCancelled()) {
           ImageRow row = todo.get(next++);
-          WriteGate gate = new WriteGate();
-          inFlight.add(new Submitted(row, gate, pool.submit(() -> prepare(analyzer, thumbnails, row, gate))));
+          AtomicBoolean claim = new AtomicBoolean();
+          inFlight.add(new Submitted(row, claim, pool.submit(() -> prepare(analyzer, thumbnails, row, claim))));
         }
         if (inFlight.isEmpty()) {
           break;
@@ -122,8 +122,11 @@ final class AnalysisPipeline {
     }
   }
 
-  /** A file handed to a worker, with the gate that keeps its thumbnail write and its abandonment apart. */
-  private record Submitted(ImageRow row, WriteGate gate, Future<PreparedImage> future) {
+  /**
+   * A file handed to a worker. {@code claim} decides, once, who owns the file's last step: the worker, to write its
+   * thumbnail (the result is then used), or the run, to abandon it at the time limit (nothing may then be written).
+   */
+  private record Submitted(ImageRow row, AtomicBoolean claim, Future<PreparedImage> future) {
 
     /**
      * The prepared image, waiting at most {@code limitMs}. At the limit the work is abandoned, unless it is already
@@ -133,50 +136,26 @@ final class AnalysisPipeline {
       try {
         return future.get(limitMs, TimeUnit.MILLISECONDS);
       } catch (TimeoutException e) {
-        if (abandon()) {
+        if (claim.compareAndSet(false, true)) {
+          future.cancel(true);
           throw e;
         }
         return future.get();
       }
     }
 
-    /** Abandons the work unless it has reached its thumbnail write; then waits for that write to end. */
-    boolean abandon() {
-      if (gate.abandon()) {
+    /** Abandons the work, or, when the worker has claimed it, waits for its thumbnail write to end. */
+    void abandon() {
+      if (claim.compareAndSet(false, true)) {
         future.cancel(true);
-        return true;
+        return;
       }
-      gate.awaitWritten();
-      return false;
-    }
-  }
-
-  /** Running, then either writing (its result will be used) or abandoned (it must not write anything). */
-  private static final class WriteGate {
-    private static final int RUNNING = 0;
-    private static final int WRITING = 1;
-    private static final int WRITTEN = 2;
-    private static final int ABANDONED = 3;
-    private final AtomicInteger state = new AtomicInteger(RUNNING);
-
-    boolean startWriting() {
-      return state.compareAndSet(RUNNING, WRITING);
-    }
-
-    synchronized void written() {
-      state.set(WRITTEN);
-      notifyAll();
-    }
-
-    boolean abandon() {
-      return state.compareAndSet(RUNNING, ABANDONED);
-    }
-
-    synchronized void awaitWritten() {
       boolean interrupted = false;
-      while (state.get() == WRITING) {
+      while (!future.isDone()) {
         try {
-          wait();
+          future.get();
+        } catch (ExecutionException e) {
+          break; // the run is stopping on another error; this file's own failure is not recorded
         } catch (InterruptedException e) {
           interrupted = true; // a thumbnail write is short: finish waiting, then restore the flag
         }
@@ -187,11 +166,11 @@ final class AnalysisPipeline {
     }
   }
 
-  private PreparedImage prepare(ImageAnalyzer analyzer, Thumbnails thumbnails, ImageRow row, WriteGate gate)
+  private PreparedImage prepare(ImageAnalyzer analyzer, Thumbnails thumbnails, ImageRow row, AtomicBoolean claim)
       throws IOException {
     Path file = Path.of(row.path());
     PreparedImage p = analyzer.prepare(file, row.contentHash());
-    if (!gate.startWriting()) {
+    if (!claim.compareAndSet(false, true)) {
       return p; // abandoned at the time limit: the run has moved on and nothing may be written for this file
     }
     try {
@@ -203,8 +182,6 @@ final class AnalysisPipeline {
         throw e;
       }
       LOG.warn("no thumbnail for {}: {}", file, e.getMessage());
-    } finally {
-      gate.written();
     }
     return p;
   }
