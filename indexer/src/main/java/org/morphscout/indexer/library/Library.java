@@ -188,8 +188,7 @@ public final class Library implements AutoCloseable {
    * before the first indexing run. Reads the commit point only, so it is cheap at any library size.
    */
   public Optional<VectorSegments> vectorSegments() throws IOException {
-    return LuceneVectorIndex.committedSegments(catalog.vectorDir())
-        .map(g -> new VectorSegments(g.count(), g.live(), g.outsideLargest(), g.deleted()));
+    return LuceneVectorIndex.committedSegments(catalog.vectorDir());
   }
 
   /** The catalog row of an image given by path (relative to the working directory or absolute). */

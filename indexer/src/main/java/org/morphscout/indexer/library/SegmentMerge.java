@@ -3,6 +3,7 @@ package org.morphscout.indexer.library;
 import java.io.IOException;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
+import org.morphscout.indexer.values.VectorSegments;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -27,8 +28,8 @@ final class SegmentMerge {
   private SegmentMerge() {}
 
   /** Whether an index split like {@code segments} is worth merging into one. */
-  static boolean worthMerging(LuceneVectorIndex.Segments segments) {
-    return segments.count() > 1 && segments.outsideLargest() * 100L >= OUTSIDE_SHARE_PERCENT * (long) segments.live();
+  static boolean worthMerging(VectorSegments segments) {
+    return segments.count() > 1 && segments.outsideLargest() * 100L >= OUTSIDE_SHARE_PERCENT * (long) segments.images();
   }
 
   /**
@@ -41,7 +42,7 @@ final class SegmentMerge {
    */
   static boolean mergeIfWorthIt(LuceneVectorIndex index, ProgressListener progress, CancellationToken cancel)
       throws IOException {
-    LuceneVectorIndex.Segments before = index.segments();
+    VectorSegments before = index.segments();
     if (!worthMerging(before)) {
       return false;
     }
@@ -51,7 +52,7 @@ final class SegmentMerge {
       throw new CancellationToken.CancelledException();
     }
     LOG.info("merged the vector index: {} segments into one ({} images, {} outside the largest segment) in {} s",
-        before.count(), before.live(), before.outsideLargest(), (System.nanoTime() - start) / 1_000_000_000L);
+        before.count(), before.images(), before.outsideLargest(), (System.nanoTime() - start) / 1_000_000_000L);
     return true;
   }
 }

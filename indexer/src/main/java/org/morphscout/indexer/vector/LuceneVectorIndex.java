@@ -35,6 +35,7 @@ import org.apache.lucene.store.FSDirectory;
 import org.apache.lucene.store.LockObtainFailedException;
 import org.apache.lucene.util.IOUtils;
 import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.values.VectorSegments;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -335,17 +336,8 @@ public final class LuceneVectorIndex implements VectorIndex {
     }
   }
 
-  /** How the committed index is split: each segment is a graph that every search visits. */
-  public record Segments(int count, int largest, int outsideLargest, int deleted) {
-
-    /** Live images in all segments. */
-    public int live() {
-      return largest + outsideLargest;
-    }
-  }
-
   /** The committed index's segments: how many, the live images in the largest one and outside it, deletions kept. */
-  public Segments segments() throws IOException {
+  public VectorSegments segments() throws IOException {
     return segments(SegmentInfos.readLatestCommit(directory));
   }
 
@@ -355,7 +347,7 @@ public final class LuceneVectorIndex implements VectorIndex {
    *
    * @throws MorphscoutException when the commit point is damaged or from an unsupported Lucene version
    */
-  public static Optional<Segments> committedSegments(Path dir) throws IOException {
+  public static Optional<VectorSegments> committedSegments(Path dir) throws IOException {
     if (!Files.isDirectory(dir)) {
       return Optional.empty();
     }
@@ -371,7 +363,7 @@ public final class LuceneVectorIndex implements VectorIndex {
     }
   }
 
-  private static Segments segments(SegmentInfos commit) {
+  private static VectorSegments segments(SegmentInfos commit) {
     int largest = 0;
     int live = 0;
     int deleted = 0;
@@ -382,7 +374,7 @@ public final class LuceneVectorIndex implements VectorIndex {
       live += segmentLive;
       deleted += segmentDeleted;
     }
-    return new Segments(commit.size(), largest, live - largest, deleted);
+    return new VectorSegments(commit.size(), live, live - largest, deleted);
   }
 
   /**

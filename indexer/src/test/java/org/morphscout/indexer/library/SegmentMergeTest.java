@@ -15,6 +15,7 @@ import org.morphscout.demo.TestFamilies;
 import org.morphscout.indexer.progress.CancellationToken;
 import org.morphscout.indexer.progress.ProgressListener;
 import org.morphscout.indexer.testing.CatalogChecks;
+import org.morphscout.indexer.values.VectorSegments;
 import org.morphscout.indexer.vector.LuceneIndexOptions;
 import org.morphscout.indexer.vector.LuceneVectorIndex;
 
@@ -26,13 +27,13 @@ class SegmentMergeTest {
 
   @Test
   void mergesFromATenthOfTheImagesOutsideTheLargestSegment() {
-    assertThat(SegmentMerge.worthMerging(new LuceneVectorIndex.Segments(1, 1000, 0, 50))).isFalse();
-    assertThat(SegmentMerge.worthMerging(new LuceneVectorIndex.Segments(2, 901, 99, 0))).isFalse();
-    assertThat(SegmentMerge.worthMerging(new LuceneVectorIndex.Segments(2, 900, 100, 0))).isTrue();
-    assertThat(SegmentMerge.worthMerging(new LuceneVectorIndex.Segments(5, 100, 900, 3))).isTrue();
+    assertThat(SegmentMerge.worthMerging(new VectorSegments(1, 1000, 0, 50))).isFalse();
+    assertThat(SegmentMerge.worthMerging(new VectorSegments(2, 1000, 99, 0))).isFalse();
+    assertThat(SegmentMerge.worthMerging(new VectorSegments(2, 1000, 100, 0))).isTrue();
+    assertThat(SegmentMerge.worthMerging(new VectorSegments(5, 1000, 900, 3))).isTrue();
     // No overflow at a catalog of billions of images.
     assertThat(SegmentMerge.worthMerging(
-        new LuceneVectorIndex.Segments(3, 1_500_000_000, 400_000_000, 0))).isTrue();
+        new VectorSegments(3, 1_900_000_000, 400_000_000, 0))).isTrue();
   }
 
   @Test
@@ -44,21 +45,21 @@ class SegmentMergeTest {
     try (Library library = Library.open(tmp.resolve("catalog"))) {
       // A first run committing every 5 images writes several segments; it ends merged into one.
       index(library, 5);
-      assertThat(segments(library)).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live)
+      assertThat(segments(library)).extracting(VectorSegments::count, VectorSegments::images)
           .containsExactly(1, 20);
 
       // One image more: 1 of 21 outside the largest segment, under a tenth, so the new segment is kept.
       writeOne(later.get(0), root.resolve("vase-0.png"));
       index(library, 256);
-      assertThat(segments(library)).extracting(LuceneVectorIndex.Segments::count,
-          LuceneVectorIndex.Segments::outsideLargest).containsExactly(2, 1);
+      assertThat(segments(library)).extracting(VectorSegments::count,
+          VectorSegments::outsideLargest).containsExactly(2, 1);
 
       // Three more: 4 of 24 outside it, over a tenth: merged into one again, every image kept.
       for (int i = 1; i < later.size(); i++) {
         writeOne(later.get(i), root.resolve("vase-" + i + ".png"));
       }
       index(library, 256);
-      assertThat(segments(library)).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live)
+      assertThat(segments(library)).extracting(VectorSegments::count, VectorSegments::images)
           .containsExactly(1, 24);
       CatalogChecks.catalogAndIndexAgree(library, "after the merge");
       CatalogChecks.noDuplicatesOrOrphans(library, "after the merge");
@@ -86,7 +87,7 @@ class SegmentMergeTest {
           .isInstanceOf(CancellationToken.CancelledException.class);
     }
     try (LuceneVectorIndex reopened = LuceneVectorIndex.openReadOnly(dir)) {
-      assertThat(reopened.segments()).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live)
+      assertThat(reopened.segments()).extracting(VectorSegments::count, VectorSegments::images)
           .containsExactly(2, 40);
     }
   }
@@ -101,7 +102,7 @@ class SegmentMergeTest {
     javax.imageio.ImageIO.write(item.image(), "png", file.toFile());
   }
 
-  private static LuceneVectorIndex.Segments segments(Library library) throws IOException {
+  private static VectorSegments segments(Library library) throws IOException {
     try (LuceneVectorIndex index = LuceneVectorIndex.openReadOnly(library.catalog().vectorDir())) {
       return index.segments();
     }

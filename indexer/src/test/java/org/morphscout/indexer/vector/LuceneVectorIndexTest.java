@@ -10,6 +10,7 @@ import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.morphscout.indexer.MorphscoutException;
+import org.morphscout.indexer.values.VectorSegments;
 import org.morphscout.indexer.vector.VectorIndex.Field;
 import org.morphscout.indexer.vector.VectorIndex.Hit;
 
@@ -153,13 +154,13 @@ class LuceneVectorIndexTest extends VectorIndexContractTest {
     }
     lucene.delete(3);
     lucene.commit();
-    assertThat(lucene.segments()).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live,
-        LuceneVectorIndex.Segments::outsideLargest, LuceneVectorIndex.Segments::deleted)
+    assertThat(lucene.segments()).extracting(VectorSegments::count, VectorSegments::images,
+        VectorSegments::outsideLargest, VectorSegments::deleted)
         .containsExactly(4, 99, 74, 1); // the largest segment is one of the three untouched ones (25 live)
 
     assertThat(lucene.mergeIntoOne(() -> false)).isTrue();
-    assertThat(lucene.segments()).extracting(LuceneVectorIndex.Segments::count, LuceneVectorIndex.Segments::live,
-        LuceneVectorIndex.Segments::deleted).containsExactly(1, 99, 0);
+    assertThat(lucene.segments()).extracting(VectorSegments::count, VectorSegments::images,
+        VectorSegments::deleted).containsExactly(1, 99, 0);
     assertThat(lucene.ids()).hasSize(99).doesNotContain(3L);
     for (long id : new long[] {0, 26, 51, 99}) {
       assertThat(lucene.search(Field.APPEARANCE, vectors[(int) id], 1, Set.of())).extracting(Hit::id)
